@@ -1,0 +1,95 @@
+/**
+ * Element counts of a chemical formula (without charge or phase):
+ * "Fe(OH)3", "[Fe(CN)6]", "CuSO4·5H2O", "Hg2Cl2".
+ */
+import { EngineError, quote } from '../errors';
+import { isElementSymbol } from './elements';
+
+/** Element symbol → number of atoms (integers). */
+export type ElementCounts = ReadonlyMap<string, number>;
+
+/**
+ * Count the atoms of each element in a formula.
+ *
+ * Domain: element symbols (case-sensitive), integer subscripts, nested (), [] and
+ * hydrate dots (·, *) with an optional integer multiplier.
+ *
+ * @param formula the formula text, e.g. "Fe(OH)3"
+ * @param offset  where the formula starts in the user's text (for error positions)
+ * @param fullText the user's whole text (for error messages)
+ * @throws EngineError (`parse`) for unknown element symbols or unbalanced brackets
+ * @example
+ * countElements('Fe(OH)3') // Map { 'Fe' => 1, 'O' => 3, 'H' => 3 }
+ */
+export function countElements(formula: string, offset = 0, fullText = formula): ElementCounts {
+  let i = 0;
+  const fail = (what: string, at: number): never => {
+    throw new EngineError('parse', `Cannot read ${quote(fullText)} at character ${offset + at + 1}: ${what}`, undefined, offset + at + 1);
+  };
+  const readInt = (): number | null => {
+    const m = /^\d+/.exec(formula.slice(i));
+    if (!m) return null;
+    i += m[0].length;
+    return parseInt(m[0], 10);
+  };
+  const addTo = (into: Map<string, number>, from: ReadonlyMap<string, number>, times: number) => {
+    for (const [el, c] of from) into.set(el, (into.get(el) ?? 0) + c * times);
+  };
+  const parseGroup = (closer: string | null): Map<string, number> => {
+    const counts = new Map<string, number>();
+    let sawItem = false;
+    while (i < formula.length) {
+      const ch = formula[i] as string;
+      if (ch === '(' || ch === '[') {
+        const close = ch === '(' ? ')' : ']';
+        const start = i;
+        i++;
+        const inner = parseGroup(close);
+        if (formula[i] !== close) fail(`"${ch}" opened here is not closed`, start);
+        i++;
+        const times = readInt() ?? 1;
+        addTo(counts, inner, times);
+        sawItem = true;
+      } else if (ch === ')' || ch === ']') {
+        if (closer === ch) break;
+        fail(`unexpected "${ch}"`, i);
+      } else if (/[A-Z]/.test(ch)) {
+        const start = i;
+        let sym = ch;
+        i++;
+        const next = formula[i];
+        if (next !== undefined && /[a-z]/.test(next) && isElementSymbol(sym + next)) {
+          sym += next;
+          i++;
+        } else if (!isElementSymbol(sym)) {
+          fail(`"${sym}${next && /[a-z]/.test(next) ? next : ''}" is not an element symbol`, start);
+        }
+        const n = readInt() ?? 1;
+        counts.set(sym, (counts.get(sym) ?? 0) + n);
+        sawItem = true;
+        if (formula[i] !== undefined && /[a-z]/.test(formula[i] as string)) {
+          fail(`"${sym}${formula.slice(i).match(/^[a-z]+/)?.[0] ?? ''}" is not an element symbol (symbols are one capital letter and at most one small letter)`, start);
+        }
+      } else if (ch === '·' || ch === '*') {
+        if (closer !== null) fail(`"${ch}" inside brackets`, i);
+        if (!sawItem) fail(`expected a formula before "${ch}"`, i);
+        i++;
+        const times = readInt() ?? 1;
+        const start = i;
+        const part = parseGroup(null);
+        if (part.size === 0) fail(`expected a formula after "${ch}"`, start);
+        addTo(counts, part, times);
+      } else if (/[a-z]/.test(ch)) {
+        fail(`element symbols start with a capital letter ("${ch}")`, i);
+      } else {
+        fail(`unexpected "${ch}" in a formula`, i);
+      }
+    }
+    if (!sawItem) fail('expected an element symbol', i);
+    return counts;
+  };
+  if (formula.length === 0) fail('expected a formula', 0);
+  const result = parseGroup(null);
+  if (i < formula.length) fail(`unexpected "${formula[i] as string}"`, i);
+  return result;
+}
