@@ -40,10 +40,8 @@ const CRC92 = 'CRC Handbook of Chemistry and Physics, 92nd ed., Electrochemical 
 const CRC92_MEMORY = `${CRC92} (from memory)`;
 const BRATSCH_MEMORY = 'dE°/dT from memory, Bratsch, J. Phys. Chem. Ref. Data 18, 1 (1989)';
 const OSX_BRATSCH = `${OSX}; ${BRATSCH_MEMORY}`;
-const OSX_SHE =
-  `${OSX}; zero at every temperature by definition (IUPAC Gold Book, standard hydrogen electrode)`;
-const OSX_BB =
-  `${OSX}; dE°/dT derived from the 20-30 °C values of Bates & Bower, J. Res. NBS 53, 283 (1954)`;
+const OSX_SHE = `${OSX}; zero at every temperature by definition (IUPAC Gold Book, standard hydrogen electrode)`;
+const OSX_BB = `${OSX}; dE°/dT derived from the 20-30 °C values of Bates & Bower, J. Res. NBS 53, 283 (1954)`;
 
 // prettier-ignore
 export const BUILTIN_POTENTIALS: readonly BuiltinPotentialRow[] = [
