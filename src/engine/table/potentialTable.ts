@@ -1,0 +1,207 @@
+/**
+ * The potentials table: built-in rows and a user's rows (a spreadsheet range),
+ * validated row by row. User rows take precedence over built-in rows for the
+ * same half-reaction; a broken user row is reported with its row number and does
+ * not break lookups that do not touch it.
+ */
+import { EngineError, isEngineError, quote } from '../errors';
+import { sign, type Rational, div } from '../rational';
+import { parseNotation } from '../notation/notation';
+import { formatReaction, type Reaction } from '../notation/reaction';
+import { checkBalance } from '../balance/balance';
+import { BUILTIN_POTENTIALS } from '../data/potentials';
+import { type StoichMap, reactionMap, electronsOf, proportionality, scaleMap } from './halfReaction';
+
+/** Where a row came from. `row` is 1-based within the user's range (header included). */
+export type RowOrigin = { readonly kind: 'builtin'; readonly index: number } | { readonly kind: 'user'; readonly row: number };
+
+/** A validated table row. */
+export interface TableRow {
+  readonly text: string;
+  readonly reaction: Reaction;
+  /** stoichiometry per the row as written */
+  readonly map: StoichMap;
+  /** the same per electron (for matching) */
+  readonly perElectron: StoichMap;
+  /** electrons consumed as written */
+  readonly n: number;
+  readonly e0V: number;
+  readonly dE0dTmVperK: number | null;
+  readonly source: string;
+  readonly origin: RowOrigin;
+}
+
+/** A problem found in a user's table. */
+export interface TableProblem {
+  /** 1-based row within the range */
+  readonly row: number;
+  readonly message: string;
+}
+
+/** A merged table: user rows first, then built-in rows not shadowed by a user row. */
+export interface PotentialTable {
+  readonly rows: readonly TableRow[];
+  readonly userRows: readonly TableRow[];
+  readonly problems: readonly TableProblem[];
+}
+
+/** Describe a row's origin for provenance and messages. */
+export function describeOrigin(o: RowOrigin): string {
+  return o.kind === 'builtin' ? `built-in row ${o.index + 1}` : `your table, row ${o.row}`;
+}
+
+function makeRow(text: string, e0V: number, dE0dTmVperK: number | null, source: string, origin: RowOrigin): TableRow {
+  const n = parseNotation(text, 'half-reaction');
+  if (n.kind !== 'half') {
+    throw new EngineError('parse', `${quote(text)} is not a half-reaction: write a reduction with electrons on the left, e.g. "Fe3+ + e- -> Fe2+".`);
+  }
+  const bal = checkBalance(n.reaction);
+  if (!bal.balanced) throw new EngineError('unbalanced', `${quote(text)} does not balance (${bal.problems.join('; ')}).`);
+  const map = reactionMap(n.reaction);
+  const e: Rational = electronsOf(map);
+  if (sign(e) < 0) {
+    throw new EngineError('parse', `${quote(text)} is written as an oxidation; write it as a reduction (electrons on the left).`);
+  }
+  return {
+    text,
+    reaction: n.reaction,
+    map,
+    perElectron: scaleMap(map, div({ num: 1n, den: 1n }, e)),
+    n: Number(e.num) / Number(e.den),
+    e0V,
+    dE0dTmVperK,
+    source,
+    origin,
+  };
+}
+
+let builtinRows: TableRow[] | null = null;
+
+/**
+ * The built-in rows, parsed once.
+ *
+ * @example
+ * builtinTable().length >= 60 // true
+ */
+export function builtinTable(): readonly TableRow[] {
+  if (!builtinRows) {
+    builtinRows = BUILTIN_POTENTIALS.map((r, index) =>
+      makeRow(r.halfReaction, r.e0V, r.dE0dTmVperK, r.source, { kind: 'builtin', index }),
+    );
+  }
+  return builtinRows;
+}
+
+const BUILTIN_TABLE: { value: PotentialTable | null } = { value: null };
+
+/** The table with only built-in rows. */
+export function defaultTable(): PotentialTable {
+  if (!BUILTIN_TABLE.value) BUILTIN_TABLE.value = { rows: builtinTable(), userRows: [], problems: [] };
+  return BUILTIN_TABLE.value;
+}
+
+type Cell = unknown;
+
+function isBlankCell(v: Cell): boolean {
+  return v === null || v === undefined || (typeof v === 'string' && v.trim() === '');
+}
+
+function cellNumber(v: Cell): number | null {
+  if (typeof v === 'number') return Number.isFinite(v) ? v : NaN;
+  if (typeof v === 'string') {
+    const t = v.trim().replace(/\u2212/g, '-');
+    if (t === '') return null;
+    const x = Number(t);
+    return Number.isFinite(x) ? x : NaN;
+  }
+  if (isBlankCell(v)) return null;
+  return NaN;
+}
+
+function looksLikeHeader(row: readonly Cell[]): boolean {
+  const first = row[0];
+  if (typeof first !== 'string') return false;
+  if (/->|→|=|⇌/.test(first)) return false;
+  const second = row[1];
+  return typeof second === 'string' && Number.isNaN(Number(second.trim())) ? true : /half|reaction|couple/i.test(first);
+}
+
+/**
+ * Read a user's table from a range: columns half-reaction | E° (V) | dE°/dT (mV/K, optional) | source (optional).
+ * A header row is recognised and skipped; blank rows (all cells empty, "" or 0) are skipped.
+ * An empty dE°/dT cell (empty, "" or 0) means none: the 25 °C value is used at every temperature.
+ *
+ * @example
+ * readUserTable([['Half-reaction', 'E0'], ['Fe3+ + e- -> Fe2+', 0.68]]).rows[0].e0V // 0.68
+ */
+export function readUserTable(cells: readonly (readonly Cell[])[] | null | undefined): PotentialTable {
+  if (!cells || cells.length === 0) return defaultTable();
+  const userRows: TableRow[] = [];
+  const problems: TableProblem[] = [];
+  cells.forEach((raw, idx) => {
+    const rowNo = idx + 1;
+    const row = raw ?? [];
+    const blank = row.every((c) => isBlankCell(c) || c === 0 || c === false);
+    if (blank) return;
+    if (idx === 0 && looksLikeHeader(row)) return;
+    const textCell = row[0];
+    if (typeof textCell !== 'string' || textCell.trim() === '') {
+      problems.push({ row: rowNo, message: `row ${rowNo}: the first column must hold a half-reaction such as "Fe3+ + e- -> Fe2+".` });
+      return;
+    }
+    const text = textCell.trim();
+    const e0 = cellNumber(row[1]);
+    if (e0 === null || Number.isNaN(e0)) {
+      problems.push({ row: rowNo, message: `row ${rowNo} (${quote(text)}): E° must be a number in volts; got ${quote(String(row[1] ?? ''))}.` });
+      return;
+    }
+    if (Math.abs(e0) > 10) {
+      problems.push({ row: rowNo, message: `row ${rowNo} (${quote(text)}): E° of ${e0} V is outside ±10 V; give it in volts, not millivolts.` });
+      return;
+    }
+    let slope = cellNumber(row[2]);
+    if (slope !== null && Number.isNaN(slope)) {
+      problems.push({ row: rowNo, message: `row ${rowNo} (${quote(text)}): dE°/dT must be a number in mV/K or empty; got ${quote(String(row[2]))}.` });
+      return;
+    }
+    if (slope === 0) slope = null;
+    const srcCell = row[3];
+    const source = typeof srcCell === 'string' && srcCell.trim() !== '' ? srcCell.trim() : 'user table';
+    try {
+      userRows.push(makeRow(text, e0, slope, source, { kind: 'user', row: rowNo }));
+    } catch (e) {
+      if (!isEngineError(e)) throw e;
+      problems.push({ row: rowNo, message: `row ${rowNo}: ${e.message}` });
+    }
+  });
+  // duplicates within the user's rows
+  for (let i = 0; i < userRows.length; i++) {
+    for (let j = i + 1; j < userRows.length; j++) {
+      const a = userRows[i]!;
+      const b = userRows[j]!;
+      if (proportionality(a.perElectron, b.perElectron)) {
+        const ra = (a.origin as { row: number }).row;
+        const rb = (b.origin as { row: number }).row;
+        problems.push({
+          row: rb,
+          message: `rows ${ra} and ${rb} give the same half-reaction (${formatReaction(a.reaction)})${a.e0V === b.e0V ? '' : ` with different E° (${a.e0V} V and ${b.e0V} V)`}; keep one.`,
+        });
+      }
+    }
+  }
+  const shadowed = (r: TableRow) => userRows.some((u) => proportionality(u.perElectron, r.perElectron) !== null);
+  const rows = [...userRows, ...builtinTable().filter((r) => !shadowed(r))];
+  return { rows, userRows, problems };
+}
+
+/** Problems that make a user row unusable for a lookup that needs it: duplicate rows with different E°. */
+export function conflictingDuplicates(table: PotentialTable, row: TableRow): TableRow[] {
+  if (row.origin.kind !== 'user') return [];
+  return table.userRows.filter((u) => u !== row && proportionality(u.perElectron, row.perElectron) && u.e0V !== row.e0V);
+}
+
+/** The table's key for caching (content-based). */
+export function tableKey(cells: readonly (readonly Cell[])[] | null | undefined): string {
+  if (!cells || cells.length === 0) return '';
+  return JSON.stringify(cells);
+}

@@ -1,0 +1,102 @@
+/**
+ * Equilibrium constants and Gibbs energies from standard potentials:
+ *   log10 K = n F E° / (RT ln10),   ΔG = −n F E.
+ * K itself is returned only where it is a float64; beyond, a range error carries
+ * its value computed with decimal.js.
+ */
+import Decimal from 'decimal.js';
+import { EngineError } from '../errors';
+import { FARADAY_C_PER_MOL, kelvinFromCelsius, slopePerElectronAtKelvin } from '../constants';
+
+/**
+ * Check an electron count: finite, positive, an integer.
+ *
+ * @example
+ * checkElectrons(2) // 2
+ */
+export function checkElectrons(n: number, argName = 'n'): number {
+  if (!Number.isFinite(n) || n <= 0) {
+    throw new EngineError('argument', `${argName} (electrons transferred) must be a positive whole number; got ${String(n)}.`, argName);
+  }
+  if (!Number.isInteger(n)) {
+    throw new EngineError('argument', `${argName} (electrons transferred) must be a whole number; got ${n}. Balance the reaction with whole coefficients.`, argName);
+  }
+  return n;
+}
+
+function checkPotential(e: number, argName: string): number {
+  if (!Number.isFinite(e)) throw new EngineError('argument', `${argName} must be a potential in volts; got ${String(e)}.`, argName);
+  return e;
+}
+
+/**
+ * log10 K from a standard potential and electron count.
+ *
+ * Domain: any finite E° (V), n a positive integer, temp_C > −273.15. Precision: float64.
+ * @example
+ * log10EquilibriumConstant(0.291, 2) // 9.838 (Sn + 2 Cu2+ ⇌ Sn2+ + 2 Cu+)
+ */
+export function log10EquilibriumConstant(e0V: number, n: number, tempC = 25): number {
+  checkPotential(e0V, 'E0');
+  checkElectrons(n);
+  return (n * e0V) / slopePerElectronAtKelvin(kelvinFromCelsius(tempC));
+}
+
+/** The largest log10 K whose K is a float64 (log10 of 1.7976931348623157e308). */
+export const MAX_LOG10_K = Math.log10(Number.MAX_VALUE);
+/** The smallest log10 K whose K is a normal float64. */
+export const MIN_LOG10_K = Math.log10(2.2250738585072014e-308);
+
+/**
+ * K = 10^(log10 K), where it is representable.
+ *
+ * @throws EngineError (`range`) where K is above 1.8e308 or below 2.2e-308, with its value in the message
+ * @example
+ * equilibriumConstantFromLog10(9.838) // 6.89e9
+ */
+export function equilibriumConstantFromLog10(log10K: number): number {
+  if (log10K > MAX_LOG10_K || log10K < MIN_LOG10_K) {
+    const value = new Decimal(10).pow(new Decimal(log10K)).toExponential(4);
+    throw new EngineError(
+      'range',
+      `K = ${value} is outside the spreadsheet's number range (about 2.2e-308 to 1.8e308); use LOGK, which gives log10 K = ${log10K.toFixed(4)}.`,
+      'reaction_or_E0',
+    );
+  }
+  return Math.pow(10, log10K);
+}
+
+/**
+ * ΔG = −n F E in kJ/mol (ΔG° where E is a standard potential).
+ *
+ * @example
+ * gibbsEnergyKJ(0.434, 2) // −83.75 kJ/mol
+ */
+export function gibbsEnergyKJ(eV: number, n: number): number {
+  checkPotential(eV, 'E');
+  checkElectrons(n);
+  return (-n * FARADAY_C_PER_MOL * eV) / 1000;
+}
+
+/**
+ * E° of a couple obtained by chaining steps: Σ nᵢEᵢ / Σ nᵢ (Gibbs energies add).
+ *
+ * Domain: equal-length lists, each n a positive integer.
+ * @example
+ * combineStepPotentialsV([0.771, -0.447], [1, 2]) // Fe3+/Fe: −0.0377 V
+ */
+export function combineStepPotentialsV(potentialsV: readonly number[], electrons: readonly number[]): number {
+  if (potentialsV.length !== electrons.length) {
+    throw new EngineError('shape', `potentials has ${potentialsV.length} values but electrons has ${electrons.length}; give one electron count per step.`, 'electrons');
+  }
+  if (potentialsV.length === 0) throw new EngineError('argument', 'potentials is empty: give the E° of each step.', 'potentials');
+  let num = 0;
+  let den = 0;
+  potentialsV.forEach((e, i) => {
+    checkPotential(e, 'potentials');
+    const n = checkElectrons(electrons[i]!, 'electrons');
+    num += n * e;
+    den += n;
+  });
+  return num / den;
+}
