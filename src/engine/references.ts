@@ -1,0 +1,276 @@
+/**
+ * Reference-electrode scales: find an electrode by name, its potential vs SHE at a
+ * temperature (and pH, for the RHE), and convert a potential from one scale to another.
+ *
+ * Convention: a potential "vs X" is E(working) − E(X). So E vs B = E vs A + E_A − E_B,
+ * where E_A and E_B are the reference potentials vs SHE.
+ */
+import { EngineError, quote } from './errors';
+import { kelvinFromCelsius, slopePerElectronAtKelvin, STANDARD_TEMP_C } from './constants';
+import { AMBIGUOUS_REFERENCE_NAMES, REFERENCE_ELECTRODE_ROWS } from './data/referenceElectrodes';
+
+/**
+ * A reference electrode, as listed by {@link listReferences}. Frozen.
+ *
+ * @example
+ * const sce: ReferenceElectrode = findReference('SCE'); // sce.potentialVvsSHE === 0.2412
+ */
+export interface ReferenceElectrode {
+  /** Short, unique identifier, also accepted as a name ("SCE", "Ag/AgCl-3M-KCl", "RHE"). */
+  id: string;
+  /** Display name. */
+  name: string;
+  /** Other accepted names (matched case-insensitively, punctuation-insensitively). */
+  aliases: readonly string[];
+  /** Potential vs SHE at 25 °C in V (RHE: at pH 0). */
+  potentialVvsSHE: number;
+  /** dE/dT near 25 °C in mV/K, or null where none is known (the 25 °C value is then used). */
+  tempCoeffMvPerK: number | null;
+  /** The publication(s) the numbers come from; "(from memory)" where recalled. */
+  source: string;
+  /** True where the potential depends on pH (RHE). */
+  needsPH: boolean;
+}
+
+const ELECTRODES: readonly ReferenceElectrode[] = Object.freeze(
+  REFERENCE_ELECTRODE_ROWS.map((r) =>
+    Object.freeze({
+      id: r.id,
+      name: r.name,
+      aliases: Object.freeze([...r.aliases]),
+      potentialVvsSHE: r.potentialVvsSHE,
+      tempCoeffMvPerK: r.tempCoeffMvPerK,
+      source: r.source,
+      needsPH: r.needsPH,
+    }),
+  ),
+);
+
+/**
+ * The normalised form of a reference-electrode name, used for matching: Unicode
+ * compatibility form (subscripts become digits), lower case, a leading "vs"/"vs." removed,
+ * "mol/L" and "mol/dm3" read as "M", "saturated"/"sat'd" read as "sat", and spaces,
+ * underscores, hyphens, dashes, slashes, bars, dots, commas, colons, apostrophes and brackets
+ * dropped.
+ *
+ * Domain: any string. Allocates (not for per-value hot paths; {@link findReference} caches).
+ *
+ * @example
+ * normaliseReferenceName('Ag/AgCl (3 M KCl)') // 'agagcl3mkcl'
+ * normaliseReferenceName('vs. SCE') // 'sce'
+ */
+export function normaliseReferenceName(text: string): string {
+  return text
+    .normalize('NFKC')
+    .toLowerCase()
+    .trim()
+    .replace(/^vs\.?\s+|^vs\./, '')
+    .replace(/mol\s*\/\s*(?:l|dm3|dm\^3)\b/g, 'm')
+    .replace(/saturated|sat'd|sat’d/g, 'sat')
+    .replace(/[\s_\-‐‑‒–—/\\|.,:;'’()[\]{}]+/g, '');
+}
+
+const BY_NAME = new Map<string, ReferenceElectrode>();
+const AMBIGUOUS = new Map<string, readonly string[]>();
+
+for (const e of ELECTRODES) {
+  for (const n of [e.id, ...e.aliases]) {
+    const key = normaliseReferenceName(n);
+    const prior = BY_NAME.get(key);
+    if (prior && prior !== e) {
+      throw new Error(`reference electrode alias "${n}" of ${e.id} collides with ${prior.id}`);
+    }
+    BY_NAME.set(key, e);
+  }
+}
+for (const a of AMBIGUOUS_REFERENCE_NAMES) {
+  for (const n of a.names) {
+    const key = normaliseReferenceName(n);
+    if (BY_NAME.has(key)) throw new Error(`ambiguous reference name "${n}" is also an alias`);
+    AMBIGUOUS.set(key, a.candidateIds);
+  }
+}
+
+const KNOWN_IDS = ELECTRODES.map((e) => e.id).join(', ');
+
+/** Raw text → electrode, so that repeated look-ups of the same text skip normalisation. */
+const lookupCache = new Map<string, ReferenceElectrode>();
+const LOOKUP_CACHE_LIMIT = 512;
+
+/**
+ * Find a reference electrode by id or alias.
+ *
+ * Domain: any text. Matching ignores case, spaces, underscores, hyphens, slashes and other
+ * punctuation ("Ag/AgCl 3M KCl" = "agagcl-3m-kcl" = "Ag/AgCl-3M-KCl"); a leading "vs" is
+ * ignored. Known ids: SHE, SCE, calomel-1M-KCl, calomel-0.1M-KCl, SSCE, Ag/AgCl-sat-KCl,
+ * Ag/AgCl-3.5M-KCl, Ag/AgCl-3M-KCl, Ag/AgCl-1M-KCl, Ag/AgCl-0.1M-KCl, CSE,
+ * Hg/Hg2SO4-1M-H2SO4, Hg/Hg2SO4-sat-K2SO4, Hg/HgO-0.1M-NaOH, Hg/HgO-1M-NaOH, RHE.
+ * A generic name without the filling ("Ag/AgCl", "calomel", "Hg/Hg2SO4", "MSE", "Hg/HgO")
+ * is ambiguous, since the fillings differ by up to 92.5 mV.
+ *
+ * @param name the electrode name as the user wrote it
+ * @param argName the argument name used in error messages (default `reference`)
+ * @throws EngineError `parse` for empty text; `ambiguous` for a generic name, listing the
+ *   candidates; `notFound` for an unknown name, listing every known id
+ * @example
+ * findReference('sce').potentialVvsSHE // 0.2412
+ * findReference('Ag/AgCl 3M KCl').id // 'Ag/AgCl-3M-KCl'
+ */
+export function findReference(name: string, argName = 'reference'): ReferenceElectrode {
+  const hit = lookupCache.get(name);
+  if (hit) return hit;
+  const text = typeof name === 'string' ? name : String(name);
+  const key = normaliseReferenceName(text);
+  if (key === '') {
+    throw new EngineError(
+      'parse',
+      `${argName} is empty: name a reference electrode such as "SHE", "SCE", "Ag/AgCl sat KCl" or "CSE".`,
+      argName,
+    );
+  }
+  const found = BY_NAME.get(key);
+  if (found) {
+    if (lookupCache.size >= LOOKUP_CACHE_LIMIT) lookupCache.clear();
+    lookupCache.set(name, found);
+    return found;
+  }
+  const candidates = AMBIGUOUS.get(key);
+  if (candidates) {
+    const list = candidates
+      .map((id) => {
+        const e = BY_NAME.get(normaliseReferenceName(id)) as ReferenceElectrode;
+        return `${e.id} (${e.potentialVvsSHE} V vs SHE)`;
+      })
+      .join(', ');
+    throw new EngineError(
+      'ambiguous',
+      `${argName} ${quote(text)} could be any of: ${list}. Name the filling solution, e.g. ${quote(candidates[0] ?? '')}.`,
+      argName,
+    );
+  }
+  throw new EngineError(
+    'notFound',
+    `${argName} ${quote(text)} is not a known reference electrode. Use one of: ${KNOWN_IDS} ` +
+      `(case, spaces, hyphens and slashes do not matter; aliases such as "saturated calomel" or "Cu/CuSO4" work too).`,
+    argName,
+  );
+}
+
+/**
+ * The potential of a reference electrode vs SHE, in V, at a temperature (and pH for RHE).
+ *
+ * - Electrodes with a temperature coefficient: E(T) = E25 + coeff·(T − 25)/1000. The
+ *   coefficients are values near 25 °C; far from 25 °C the linear law is an extrapolation.
+ * - Electrodes without one (coefficient null): the 25 °C value at every temperature (see
+ *   {@link referenceTemperatureNote}).
+ * - RHE: E = −(RT ln10/F)·pH at the given temperature, p(H2) = 1 bar.
+ *
+ * Domain: temp_C > −273.15 and finite; pH any finite real (required for RHE, otherwise
+ * ignored but still checked when given). Precision: float64; the result is as good as the
+ * tabulated value (typically ±1 mV, see each electrode's source).
+ *
+ * @throws EngineError `argument` for a bad temperature, a non-finite pH, or RHE without pH
+ * @example
+ * referencePotentialV(findReference('SCE'), 35, null) // 0.2346
+ * referencePotentialV(findReference('RHE'), 25, 7) // −0.414115…
+ */
+export function referencePotentialV(ref: ReferenceElectrode, tempC: number, pH: number | null): number {
+  const tempK = kelvinFromCelsius(tempC, 'temp_C');
+  if (pH !== null && pH !== undefined && !Number.isFinite(pH)) {
+    throw new EngineError('argument', `pH must be a finite number; got ${String(pH)}.`, 'pH');
+  }
+  if (ref.needsPH) {
+    if (pH === null || pH === undefined) {
+      throw new EngineError(
+        'argument',
+        `pH is required for ${ref.id} (${ref.name}): its potential vs SHE is −(RT ln10/F)·pH. Give the solution pH.`,
+        'pH',
+      );
+    }
+    return ref.potentialVvsSHE - slopePerElectronAtKelvin(tempK) * pH;
+  }
+  const coeff = ref.tempCoeffMvPerK;
+  if (coeff === null || tempC === STANDARD_TEMP_C) return ref.potentialVvsSHE;
+  return ref.potentialVvsSHE + (coeff * (tempC - STANDARD_TEMP_C)) / 1000;
+}
+
+/**
+ * A note for results at a temperature where an electrode has no temperature coefficient
+ * (its 25 °C value was used), or null where there is nothing to say (25 °C, a known
+ * coefficient, or the RHE whose pH term uses the temperature).
+ *
+ * Domain: finite temp_C. Allocates a string only when there is a note.
+ *
+ * @example
+ * referenceTemperatureNote(findReference('CSE'), 15)
+ * // 'CSE (Copper–copper sulfate, saturated CuSO4) has no known temperature coefficient; its 25 °C value 0.316 V vs SHE was used at 15 °C.'
+ * referenceTemperatureNote(findReference('SCE'), 15) // null
+ */
+export function referenceTemperatureNote(ref: ReferenceElectrode, tempC: number): string | null {
+  if (ref.needsPH || ref.tempCoeffMvPerK !== null || tempC === STANDARD_TEMP_C) return null;
+  return (
+    `${ref.id} (${ref.name}) has no known temperature coefficient; ` +
+    `its 25 °C value ${ref.potentialVvsSHE} V vs SHE was used at ${tempC} °C.`
+  );
+}
+
+/**
+ * Convert a potential from one reference scale to another:
+ * E_to = E_from + (E_ref(from) − E_ref(to)), both reference potentials vs SHE at `tempC`
+ * (and `pH` where either is the RHE).
+ *
+ * Domain: potential finite (V); names as for {@link findReference}; temp_C > −273.15;
+ * pH finite where given, required when either scale is RHE. Converting to the same scale
+ * returns the potential unchanged. Precision: float64 arithmetic; the accuracy is that of
+ * the reference values (about ±1 mV; see each electrode's source).
+ *
+ * @param potentialV the potential in V on the `fromRef` scale
+ * @param fromRef the scale the potential is given on
+ * @param toRef the scale wanted
+ * @param tempC temperature in °C (default 25)
+ * @param pH solution pH, for RHE (default none)
+ * @throws EngineError `argument` (bad potential, temperature or pH; RHE without pH),
+ *   `parse` (empty name), `notFound` (unknown name), `ambiguous` (generic name)
+ * @example
+ * convertPotentialV(0, 'SCE', 'SHE') // 0.2412
+ * convertPotentialV(-0.85, 'CSE', 'Ag/AgCl sat KCl') // −0.731
+ * convertPotentialV(0, 'RHE', 'SHE', 25, 7) // −0.414115…
+ */
+export function convertPotentialV(
+  potentialV: number,
+  fromRef: string,
+  toRef: string,
+  tempC = STANDARD_TEMP_C,
+  pH: number | null = null,
+): number {
+  if (!Number.isFinite(potentialV)) {
+    throw new EngineError(
+      'argument',
+      `potential must be a finite number in volts; got ${String(potentialV)}.`,
+      'potential',
+    );
+  }
+  const from = findReference(fromRef, 'from_ref');
+  const to = findReference(toRef, 'to_ref');
+  if (from === to) {
+    // same scale: only check the other arguments (an RHE→RHE conversion needs no pH)
+    kelvinFromCelsius(tempC, 'temp_C');
+    if (pH !== null && pH !== undefined && !Number.isFinite(pH)) {
+      throw new EngineError('argument', `pH must be a finite number; got ${String(pH)}.`, 'pH');
+    }
+    return potentialV;
+  }
+  const eFrom = referencePotentialV(from, tempC, pH);
+  const eTo = referencePotentialV(to, tempC, pH);
+  return potentialV + (eFrom - eTo);
+}
+
+/**
+ * Every built-in reference electrode, in a fixed order (SHE first, RHE last). Frozen.
+ *
+ * @example
+ * listReferences().map((r) => r.id) // ['SHE', 'SCE', 'calomel-1M-KCl', …, 'RHE']
+ */
+export function listReferences(): readonly ReferenceElectrode[] {
+  return ELECTRODES;
+}
