@@ -1,0 +1,186 @@
+/**
+ * Builds the Excel add-in into dist/:
+ *   functions.js    the ECHEM custom functions (wrappers + catalogue + engine)
+ *   functions.json  their metadata, generated from the JSDoc of src/functions/functions.ts
+ *   taskpane.html   the shared-runtime page: loads office.js, functions.js and taskpane.js
+ *   taskpane.js     the task pane
+ *   manifest.xml    the add-in manifest (copied from manifest/)
+ *   assets/*.png    the icons (copied from assets/)
+ *
+ * `npm run build` (production, minified) or `npm start` (dev server on port 3000: https with
+ * the Office development certificate where office-addin-dev-certs can provide one, plain http
+ * otherwise, which Excel refuses to load: the server says so when it starts; `npm start -- --env http`
+ * asks for plain http on purpose).
+ */
+const path = require('path');
+const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
+const HtmlWebpackPlugin = require('html-webpack-plugin');
+const CopyWebpackPlugin = require('copy-webpack-plugin');
+
+const DEV_PORT = 3000;
+const FUNCTIONS_SOURCE = './src/functions/functions.ts';
+
+/**
+ * The metadata plugin also appends an unguarded `CustomFunctions.associate(...)` per function
+ * to functions.ts through a loader. functions.ts associates its functions itself, guarded by
+ * `typeof CustomFunctions !== 'undefined'` so that the page still loads outside Excel (for
+ * example in a plain browser); this drops the plugin's loader so that each id is associated
+ * once. The build contract test checks that every id of functions.json is associated.
+ */
+class KeepOwnAssociationsPlugin {
+  apply(compiler) {
+    const { NormalModule } = compiler.webpack;
+    compiler.hooks.compilation.tap('KeepOwnAssociationsPlugin', (compilation) => {
+      NormalModule.getCompilationHooks(compilation).beforeLoaders.tap(
+        'KeepOwnAssociationsPlugin',
+        (loaders) => {
+          for (let i = loaders.length - 1; i >= 0; i--) {
+            const loader = loaders[i] && loaders[i].loader;
+            if (
+              typeof loader === 'string' &&
+              /custom-functions-metadata-plugin[\\/]lib[\\/]loader\.js$/.test(loader)
+            ) {
+              loaders.splice(i, 1);
+            }
+          }
+        },
+      );
+    });
+  }
+}
+
+/**
+ * The page's Content-Security-Policy: scripts from this origin and Office's CDN only, no eval,
+ * no requests to other hosts (the dev server's live-reload socket is same-origin).
+ */
+const CONTENT_SECURITY_POLICY = [
+  "default-src 'self'",
+  "script-src 'self' https://appsforoffice.microsoft.com",
+  "style-src 'self' 'unsafe-inline'",
+  "img-src 'self' data:",
+  "connect-src 'self'",
+  "object-src 'none'",
+  "base-uri 'self'",
+].join('; ');
+
+/**
+ * Puts the policy first in the page's <head>, before any script, so that it governs all of
+ * them (html-webpack-plugin's `meta` option would place it after the template's own scripts).
+ */
+class ContentSecurityPolicyPlugin {
+  apply(compiler) {
+    compiler.hooks.compilation.tap('ContentSecurityPolicyPlugin', (compilation) => {
+      HtmlWebpackPlugin.getHooks(compilation).beforeEmit.tap('ContentSecurityPolicyPlugin', (data) => {
+        const meta = `<meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}">`;
+        const withCharset = /<meta\s+charset=[^>]*>/i;
+        data.html = withCharset.test(data.html)
+          ? data.html.replace(withCharset, (m) => `${m}\n    ${meta}`)
+          : data.html.replace(/<head(\s[^>]*)?>/i, (m) => `${m}\n    ${meta}`);
+        return data;
+      });
+    });
+  }
+}
+
+/** https options from the Office development certificate, or null (then the server runs on http). */
+async function devServerHttpsOptions() {
+  let devCerts;
+  try {
+    devCerts = require('office-addin-dev-certs');
+  } catch {
+    console.warn(
+      '\n[potentia] office-addin-dev-certs is not installed: serving on http://localhost:3000.\n' +
+        '           Excel loads add-ins only over https; run `npm install` and start again.\n',
+    );
+    return null;
+  }
+  try {
+    return await devCerts.getHttpsServerOptions();
+  } catch (err) {
+    console.warn(
+      '\n[potentia] Could not create or trust the development certificate ' +
+        `(${err && err.message ? err.message : err}): serving on http://localhost:3000.\n` +
+        '           Excel loads add-ins only over https; run `npx office-addin-dev-certs install` and start again.\n',
+    );
+    return null;
+  }
+}
+
+module.exports = async (env = {}, argv = {}) => {
+  const production = argv.mode !== 'development';
+  const serving = Boolean(env.WEBPACK_SERVE);
+  // `npm start -- --env http` skips the certificate (a container, a browser-only check).
+  const https = serving && !env.http ? await devServerHttpsOptions() : null;
+  if (serving && !https) {
+    console.warn('[potentia] Dev server on http://localhost:3000/ (Excel needs https: see README, "Install into Excel").');
+  }
+
+  return {
+    mode: production ? 'production' : 'development',
+    devtool: production ? false : 'source-map',
+    entry: {
+      functions: FUNCTIONS_SOURCE,
+      taskpane: './src/taskpane/taskpane.ts',
+    },
+    output: {
+      path: path.resolve(__dirname, 'dist'),
+      filename: '[name].js',
+      clean: true,
+    },
+    resolve: { extensions: ['.ts', '.js'] },
+    module: {
+      rules: [
+        {
+          test: /\.ts$/,
+          exclude: /node_modules/,
+          use: {
+            loader: 'ts-loader',
+            options: {
+              onlyCompileBundledFiles: true,
+              // ES modules let webpack drop unused engine code; the type check is `npm run typecheck`.
+              compilerOptions: { module: 'es2020', moduleResolution: 'bundler', sourceMap: !production },
+            },
+          },
+        },
+        { test: /\.css$/, type: 'asset/resource', generator: { filename: '[name][ext]' } },
+      ],
+    },
+    performance: {
+      // PRODUCT.md: the functions bundle stays under 150 KB minified (checked by test/build).
+      hints: production ? 'warning' : false,
+      maxEntrypointSize: 150 * 1024,
+      maxAssetSize: 150 * 1024,
+    },
+    plugins: [
+      new CustomFunctionsMetadataPlugin({ output: 'functions.json', input: FUNCTIONS_SOURCE }),
+      new KeepOwnAssociationsPlugin(),
+      new HtmlWebpackPlugin({
+        filename: 'taskpane.html',
+        template: './src/taskpane/taskpane.html',
+        // Shared runtime: the same page hosts the task pane and the custom functions.
+        chunks: ['functions', 'taskpane'],
+        chunksSortMode: 'manual',
+        scriptLoading: 'blocking',
+        inject: 'body',
+      }),
+      new ContentSecurityPolicyPlugin(),
+      new CopyWebpackPlugin({
+        patterns: [
+          { from: 'manifest/manifest.xml', to: 'manifest.xml' },
+          { from: 'assets/icon-*.png', to: 'assets/[name][ext]' },
+        ],
+      }),
+    ],
+    devServer: {
+      port: DEV_PORT,
+      host: 'localhost',
+      allowedHosts: 'all',
+      headers: { 'Access-Control-Allow-Origin': '*' },
+      static: { directory: path.resolve(__dirname, 'dist') },
+      server: https ? { type: 'https', options: https } : 'http',
+      hot: false,
+      liveReload: true,
+      client: { overlay: { warnings: false, errors: true } },
+    },
+  };
+};
