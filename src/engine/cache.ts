@@ -38,7 +38,10 @@ let lastTable: { key: string; table: PotentialTable } | null = null;
  * @example
  * tableFor(null).rows.length // the built-in rows
  */
-export function tableFor(cells: readonly (readonly unknown[])[] | null | undefined): { key: string; table: PotentialTable } {
+export function tableFor(cells: readonly (readonly unknown[])[] | null | undefined): {
+  key: string;
+  table: PotentialTable;
+} {
   if (!cells || cells.length === 0) return { key: '', table: defaultTable() };
   if (cells === lastTableCells && lastTable) return lastTable;
   const key = tableKey(cells);
@@ -59,7 +62,10 @@ export function tableFor(cells: readonly (readonly unknown[])[] | null | undefin
  * @example
  * compiledReaction('Cu2+/Cu', null).n // 2
  */
-export function compiledReaction(text: string, cells: readonly (readonly unknown[])[] | null | undefined): NernstForm {
+export function compiledReaction(
+  text: string,
+  cells: readonly (readonly unknown[])[] | null | undefined,
+): NernstForm {
   const { key, table } = tableFor(cells);
   const ck = `${key.length}:${key}\u0000${text}`;
   let o = resolutions.get(ck);
@@ -77,7 +83,10 @@ export function compiledReaction(text: string, cells: readonly (readonly unknown
 }
 
 /** Resolution only (no compilation), through the same cache. */
-export function resolvedReaction(text: string, cells: readonly (readonly unknown[])[] | null | undefined): Resolved {
+export function resolvedReaction(
+  text: string,
+  cells: readonly (readonly unknown[])[] | null | undefined,
+): Resolved {
   return compiledReaction(text, cells).resolved;
 }
 

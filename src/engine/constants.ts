@@ -36,7 +36,11 @@ export const ATM_IN_BAR = 1.01325;
  */
 export function kelvinFromCelsius(tempC: number, argName = 'temp_C'): number {
   if (!Number.isFinite(tempC)) {
-    throw new EngineError('argument', `${argName} must be a finite temperature in °C; got ${String(tempC)}.`, argName);
+    throw new EngineError(
+      'argument',
+      `${argName} must be a finite temperature in °C; got ${String(tempC)}.`,
+      argName,
+    );
   }
   const tempK = tempC + ZERO_CELSIUS_K;
   if (tempK <= 0) {

@@ -15,7 +15,8 @@
  * @example
  * throw new EngineError('argument', 'temp_C must be above −273.15 °C; got −300.', 'temp_C');
  */
-export type EngineErrorKind = 'parse' | 'argument' | 'unbalanced' | 'notFound' | 'ambiguous' | 'shape' | 'range';
+export type EngineErrorKind =
+  'parse' | 'argument' | 'unbalanced' | 'notFound' | 'ambiguous' | 'shape' | 'range';
 
 export class EngineError extends Error {
   /** What went wrong, for mapping to a spreadsheet error code. */

@@ -4,9 +4,37 @@
  * null space of the composition matrix.
  */
 import { EngineError, quote } from '../errors';
-import { type Rational, ZERO, add, mul, sign, isZero, formatRational, ratInt, rat, lcm, neg, div, eq } from '../rational';
-import { type Species, elementsOf, sameSpecies, speciesPhaseKey, ELECTRON, formatSpecies } from '../notation/species';
-import { type Reaction, type StoichEntry, stoichiometry, reactionFromStoichiometry, electronsConsumed, formatReaction } from '../notation/reaction';
+import {
+  type Rational,
+  ZERO,
+  add,
+  mul,
+  sign,
+  isZero,
+  formatRational,
+  ratInt,
+  rat,
+  lcm,
+  neg,
+  div,
+  eq,
+} from '../rational';
+import {
+  type Species,
+  elementsOf,
+  sameSpecies,
+  speciesPhaseKey,
+  ELECTRON,
+  formatSpecies,
+} from '../notation/species';
+import {
+  type Reaction,
+  type StoichEntry,
+  stoichiometry,
+  reactionFromStoichiometry,
+  electronsConsumed,
+  formatReaction,
+} from '../notation/reaction';
 import { nullSpace, toSmallestIntegers, fromBig } from './nullspace';
 
 /** Result of a balance check. */
@@ -25,7 +53,8 @@ export interface BalanceCheck {
 export function checkBalance(r: Reaction): BalanceCheck {
   const left = new Map<string, Rational>();
   const right = new Map<string, Rational>();
-  const addSide = (side: Map<string, Rational>, key: string, x: Rational) => side.set(key, add(side.get(key) ?? ZERO, x));
+  const addSide = (side: Map<string, Rational>, key: string, x: Rational) =>
+    side.set(key, add(side.get(key) ?? ZERO, x));
   const tally = (terms: Reaction['reactants'], side: Map<string, Rational>) => {
     for (const t of terms) {
       for (const [el, c] of elementsOf(t.species)) addSide(side, el, mul(t.coefficient, ratInt(c)));
@@ -40,7 +69,11 @@ export function checkBalance(r: Reaction): BalanceCheck {
     const a = left.get(k) ?? ZERO;
     const b = right.get(k) ?? ZERO;
     if (!eq(a, b)) {
-      problems.push(k === 'charge' ? `charge: ${formatRational(a)} on the left, ${formatRational(b)} on the right` : `${k}: ${formatRational(a)} on the left, ${formatRational(b)} on the right`);
+      problems.push(
+        k === 'charge'
+          ? `charge: ${formatRational(a)} on the left, ${formatRational(b)} on the right`
+          : `${k}: ${formatRational(a)} on the left, ${formatRational(b)} on the right`,
+      );
     }
   }
   return { balanced: problems.length === 0, problems };
@@ -103,7 +136,11 @@ export function combineHalfReactions(reduction: Reaction, oxidation: Reaction): 
   const n1 = electronsConsumed(reduction);
   const n2 = electronsConsumed(oxidation);
   if (sign(n1) <= 0 || sign(n2) <= 0) {
-    throw new EngineError('argument', 'Both half-reactions must be written as reductions (electrons on the left).', 'reaction');
+    throw new EngineError(
+      'argument',
+      'Both half-reactions must be written as reductions (electrons on the left).',
+      'reaction',
+    );
   }
   // L = lcm over rationals: scale both to integer electron counts first
   const l = lcmRational(n1, n2);
@@ -163,7 +200,11 @@ export interface BalancedReaction {
  * formatReaction(balanceSkeleton(parseReaction('MnO4- + Fe2+ -> Mn2+ + Fe3+'), 'acid').reaction)
  * // 'MnO4- + 5 Fe2+ + 8 H+ -> Mn2+ + 5 Fe3+ + 4 H2O'
  */
-export function balanceSkeleton(skeleton: Reaction, medium: Medium, text = formatReaction(skeleton)): BalancedReaction {
+export function balanceSkeleton(
+  skeleton: Reaction,
+  medium: Medium,
+  text = formatReaction(skeleton),
+): BalancedReaction {
   type Col = { species: Species; side: -1 | 1 | 0 };
   const cols: Col[] = [];
   const addCol = (s: Species, side: -1 | 1 | 0) => {
@@ -171,7 +212,11 @@ export function balanceSkeleton(skeleton: Reaction, medium: Medium, text = forma
       if (side !== 0) {
         const c = cols.find((x) => speciesPhaseKey(x.species) === speciesPhaseKey(s))!;
         if (c.side !== 0 && c.side !== side) {
-          throw new EngineError('unbalanced', `${quote(text)} has ${formatSpecies(s)} on both sides; write it once.`, 'reaction');
+          throw new EngineError(
+            'unbalanced',
+            `${quote(text)} has ${formatSpecies(s)} on both sides; write it once.`,
+            'reaction',
+          );
         }
       }
       return;
@@ -198,7 +243,11 @@ export function balanceSkeleton(skeleton: Reaction, medium: Medium, text = forma
   }
   if (solution.kind === 'none') {
     const hint = medium === null ? ' If it takes place in water, try the medium "acid" or "base".' : '';
-    throw new EngineError('unbalanced', `${quote(text)} cannot be balanced with these species.${hint} Check the formulas and charges.`, 'reaction');
+    throw new EngineError(
+      'unbalanced',
+      `${quote(text)} cannot be balanced with these species.${hint} Check the formulas and charges.`,
+      'reaction',
+    );
   }
   if (solution.kind === 'many') {
     throw new EngineError(

@@ -17,7 +17,11 @@ export function nullSpace(matrix: readonly (readonly Rational[])[], columns: num
   let r = 0;
   for (let c = 0; c < columns && r < a.length; c++) {
     let p = -1;
-    for (let i = r; i < a.length; i++) if (!isZero(a[i]![c]!)) { p = i; break; }
+    for (let i = r; i < a.length; i++)
+      if (!isZero(a[i]![c]!)) {
+        p = i;
+        break;
+      }
     if (p < 0) continue;
     [a[r], a[p]] = [a[p]!, a[r]!];
     const pivotRow = a[r]!;

@@ -61,7 +61,8 @@ function parsePhase(src: SourceText, from: number, to: number, argument: string)
     const s = scanSpecies(src, i, argument);
     let k = s.end;
     while (k < part.to && src.text[k] === ' ') k++;
-    if (k < part.to) src.fail(k, `unexpected "${src.text[k] as string}"; separate species in one phase with ","`, argument);
+    if (k < part.to)
+      src.fail(k, `unexpected "${src.text[k] as string}"; separate species in one phase with ","`, argument);
     out.push({ species: s.species, activity: s.activity });
   }
   return out;
@@ -90,12 +91,15 @@ export function parseCellDiagramSource(src: SourceText, argument = 'reaction'): 
     return { left, right, bridge: true };
   }
   const all = phasesOf(halves[0]!);
-  if (all.length < 2) src.fail(t.length, 'a cell diagram needs at least two phases separated by "|"', argument);
+  if (all.length < 2)
+    src.fail(t.length, 'a cell diagram needs at least two phases separated by "|"', argument);
   return { left: all, right: [], bridge: false };
 }
 
 function formatPhase(p: CellPhase): string {
-  return p.map((c) => (c.activity ? withActivity(c.species, c.activity.value) : formatSpecies(c.species))).join(', ');
+  return p
+    .map((c) => (c.activity ? withActivity(c.species, c.activity.value) : formatSpecies(c.species)))
+    .join(', ');
 }
 
 /**

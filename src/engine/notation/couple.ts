@@ -64,7 +64,12 @@ export function parseCouple(text: string, argument = 'reaction'): Couple {
 
 export function parseCoupleSource(src: SourceText, argument = 'reaction'): Couple {
   const at = coupleSlashAt(src.text);
-  if (at === -2) src.fail(src.text.lastIndexOf('/'), 'a couple has one "/" between the oxidised and reduced forms', argument);
+  if (at === -2)
+    src.fail(
+      src.text.lastIndexOf('/'),
+      'a couple has one "/" between the oxidised and reduced forms',
+      argument,
+    );
   if (at < 0) src.fail(0, 'expected a couple written Ox/Red, e.g. "Cu2+/Cu"', argument);
   const oxidized = parseList(src, 0, at, argument);
   const reduced = parseList(src, at + 1, src.text.length, argument);

@@ -5,8 +5,40 @@
  */
 import { type Species, parseSpecies } from './species';
 
-const CATIONS = ['H+', 'Li+', 'Na+', 'K+', 'Rb+', 'Cs+', 'NH4+', 'Ag+', 'Tl+', 'Cu+', 'Mg2+', 'Ca2+', 'Sr2+', 'Ba2+', 'Zn2+', 'Cd2+', 'Cu2+', 'Fe2+', 'Ni2+', 'Co2+', 'Mn2+', 'Pb2+', 'Sn2+', 'Hg2+', 'Fe3+', 'Al3+', 'Cr3+', 'Ce3+', 'In3+'].map((t) => parseSpecies(t));
-const ANIONS = ['Cl-', 'Br-', 'I-', 'F-', 'NO3-', 'ClO4-', 'OH-', 'HSO4-', 'SO4^2-', 'CO3^2-'].map((t) => parseSpecies(t));
+const CATIONS = [
+  'H+',
+  'Li+',
+  'Na+',
+  'K+',
+  'Rb+',
+  'Cs+',
+  'NH4+',
+  'Ag+',
+  'Tl+',
+  'Cu+',
+  'Mg2+',
+  'Ca2+',
+  'Sr2+',
+  'Ba2+',
+  'Zn2+',
+  'Cd2+',
+  'Cu2+',
+  'Fe2+',
+  'Ni2+',
+  'Co2+',
+  'Mn2+',
+  'Pb2+',
+  'Sn2+',
+  'Hg2+',
+  'Fe3+',
+  'Al3+',
+  'Cr3+',
+  'Ce3+',
+  'In3+',
+].map((t) => parseSpecies(t));
+const ANIONS = ['Cl-', 'Br-', 'I-', 'F-', 'NO3-', 'ClO4-', 'OH-', 'HSO4-', 'SO4^2-', 'CO3^2-'].map((t) =>
+  parseSpecies(t),
+);
 
 function gcd(a: number, b: number): number {
   return b === 0 ? a : gcd(b, a % b);
@@ -34,7 +66,12 @@ export function splitElectrolyte(formula: string): { ion: Species; count: number
       const p = za / g;
       const q = c.charge / g;
       for (const cp of part(c.formula, p))
-        for (const ap of part(a.formula, q)) if (cp + ap === formula) return [{ ion: c, count: p }, { ion: a, count: q }];
+        for (const ap of part(a.formula, q))
+          if (cp + ap === formula)
+            return [
+              { ion: c, count: p },
+              { ion: a, count: q },
+            ];
     }
   }
   return null;

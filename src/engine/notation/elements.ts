@@ -23,7 +23,32 @@ export function isElementSymbol(symbol: string): boolean {
   return SYMBOL_SET.has(symbol);
 }
 
-const NON_METALS = new Set(['H', 'He', 'B', 'C', 'N', 'O', 'F', 'Ne', 'Si', 'P', 'S', 'Cl', 'Ar', 'As', 'Se', 'Br', 'Kr', 'Te', 'I', 'Xe', 'At', 'Rn', 'Og', 'Ts']);
+const NON_METALS = new Set([
+  'H',
+  'He',
+  'B',
+  'C',
+  'N',
+  'O',
+  'F',
+  'Ne',
+  'Si',
+  'P',
+  'S',
+  'Cl',
+  'Ar',
+  'As',
+  'Se',
+  'Br',
+  'Kr',
+  'Te',
+  'I',
+  'Xe',
+  'At',
+  'Rn',
+  'Og',
+  'Ts',
+]);
 
 /**
  * True for metallic elements (everything but the non-metals and metalloids
@@ -38,8 +63,29 @@ export function isMetal(symbol: string): boolean {
 
 /** Formulas (neutral) that are gases at 25 °C and 1 bar, when no phase is written. */
 export const GAS_FORMULAS: ReadonlySet<string> = new Set([
-  'H2', 'O2', 'N2', 'Cl2', 'F2', 'O3', 'He', 'Ne', 'Ar', 'Kr', 'Xe', 'Rn', 'CO', 'CO2', 'NO', 'NO2', 'N2O',
-  'H2S', 'SO2', 'NH3', 'CH4', 'HCN', 'ClO2',
+  'H2',
+  'O2',
+  'N2',
+  'Cl2',
+  'F2',
+  'O3',
+  'He',
+  'Ne',
+  'Ar',
+  'Kr',
+  'Xe',
+  'Rn',
+  'CO',
+  'CO2',
+  'NO',
+  'NO2',
+  'N2O',
+  'H2S',
+  'SO2',
+  'NH3',
+  'CH4',
+  'HCN',
+  'ClO2',
 ]);
 
 /** Neutral formulas that are liquids at 25 °C when no phase is written. */

@@ -24,7 +24,12 @@ export type ElementCounts = ReadonlyMap<string, number>;
 export function countElements(formula: string, offset = 0, fullText = formula): ElementCounts {
   let i = 0;
   const fail = (what: string, at: number): never => {
-    throw new EngineError('parse', `Cannot read ${quote(fullText)} at character ${offset + at + 1}: ${what}`, undefined, offset + at + 1);
+    throw new EngineError(
+      'parse',
+      `Cannot read ${quote(fullText)} at character ${offset + at + 1}: ${what}`,
+      undefined,
+      offset + at + 1,
+    );
   };
   const readInt = (): number | null => {
     const m = /^\d+/.exec(formula.slice(i));
@@ -68,7 +73,10 @@ export function countElements(formula: string, offset = 0, fullText = formula): 
         counts.set(sym, (counts.get(sym) ?? 0) + n);
         sawItem = true;
         if (formula[i] !== undefined && /[a-z]/.test(formula[i] as string)) {
-          fail(`"${sym}${formula.slice(i).match(/^[a-z]+/)?.[0] ?? ''}" is not an element symbol (symbols are one capital letter and at most one small letter)`, start);
+          fail(
+            `"${sym}${formula.slice(i).match(/^[a-z]+/)?.[0] ?? ''}" is not an element symbol (symbols are one capital letter and at most one small letter)`,
+            start,
+          );
         }
       } else if (ch === '·' || ch === '*') {
         if (closer !== null) fail(`"${ch}" inside brackets`, i);

@@ -5,7 +5,12 @@
  */
 import { EngineError } from '../errors';
 import { SourceText } from './source';
-import { type CellDiagram, parseCellDiagramSource, formatCellDiagram, looksLikeCellDiagram } from './cellDiagram';
+import {
+  type CellDiagram,
+  parseCellDiagramSource,
+  formatCellDiagram,
+  looksLikeCellDiagram,
+} from './cellDiagram';
 import { type Couple, parseCoupleSource, coupleSlashAt, formatCouple } from './couple';
 import { type Reaction, parseReactionSource, findArrow, isHalfReaction, formatReaction } from './reaction';
 

@@ -6,9 +6,28 @@
  * Electrons: `e-` or `e`.
  */
 import { EngineError, quote } from '../errors';
-import { type Rational, ONE, parseRational, formatRational, eq, add, neg, isZero, toNumber, sign } from '../rational';
+import {
+  type Rational,
+  ONE,
+  parseRational,
+  formatRational,
+  eq,
+  add,
+  neg,
+  isZero,
+  toNumber,
+  sign,
+} from '../rational';
 import { SourceText } from './source';
-import { type InlineActivity, type Species, scanSpecies, formatSpecies, speciesPhaseKey, phaseOf, sameSpecies } from './species';
+import {
+  type InlineActivity,
+  type Species,
+  scanSpecies,
+  formatSpecies,
+  speciesPhaseKey,
+  phaseOf,
+  sameSpecies,
+} from './species';
 
 /** One term of a reaction: coefficient × species, with an optional inline activity. */
 export interface Term {
@@ -61,7 +80,8 @@ export function parseSide(src: SourceText, from: number, to: number, argument = 
     const cm = /^(\d+\/\d+|\d*\.\d+|\d+)(?=\s*[A-Z([e])/.exec(t.slice(i, to));
     if (cm) {
       const c = parseRational(cm[1] as string);
-      if (!c || isZero(c)) src.fail(i, `coefficient "${cm[1] as string}" must be a positive number`, argument);
+      if (!c || isZero(c))
+        src.fail(i, `coefficient "${cm[1] as string}" must be a positive number`, argument);
       coefficient = c;
       i += cm[0].length;
       skip();
@@ -100,7 +120,12 @@ export function parseReaction(text: string, argument = 'reaction'): Reaction {
 /** Parse a reaction from an already normalised source. */
 export function parseReactionSource(src: SourceText, argument = 'reaction'): Reaction {
   const arrow = findArrow(src, argument);
-  if (!arrow) src.fail(src.text.length, 'expected an arrow (->, =, <=>, → or ⇌) between reactants and products', argument);
+  if (!arrow)
+    src.fail(
+      src.text.length,
+      'expected an arrow (->, =, <=>, → or ⇌) between reactants and products',
+      argument,
+    );
   const reactants = parseSide(src, 0, arrow.at, argument);
   const products = parseSide(src, arrow.at + arrow.length, src.text.length, argument);
   return { reactants, products };
@@ -153,7 +178,11 @@ function formatTerm(term: Term): string {
 }
 
 /** Append an inline activity to a formatted species: "Zn2+(aq, 0.1 M)", "H2(g, 0.5 bar)". */
-export function withActivity(species: Species, value: number, formatted = formatSpecies(species, false)): string {
+export function withActivity(
+  species: Species,
+  value: number,
+  formatted = formatSpecies(species, false),
+): string {
   const base = formatted.replace(/\((s|l|g|aq)\)$/, '');
   const phase = phaseOf(species);
   const unit = phase === 'g' ? ' bar' : phase === 'aq' ? ' M' : '';
@@ -214,5 +243,9 @@ export function nuAsNumber(e: StoichEntry): number {
 
 /** Error helper for callers that need a reaction but got other notation. */
 export function notAReaction(text: string, what: string): EngineError {
-  return new EngineError('parse', `${quote(text)} is ${what}; write a reaction with an arrow, e.g. "Zn + Cu2+ -> Zn2+ + Cu".`, 'reaction');
+  return new EngineError(
+    'parse',
+    `${quote(text)} is ${what}; write a reaction with an arrow, e.g. "Zn + Cu2+ -> Zn2+ + Cu".`,
+    'reaction',
+  );
 }

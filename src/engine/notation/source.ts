@@ -30,6 +30,11 @@ export class SourceText {
   /** Raise a parse error pointing at normalised index `i`. */
   fail(i: number, what: string, argument = 'reaction'): never {
     const pos = this.positionOf(i);
-    throw new EngineError('parse', `Cannot read ${quote(this.original)} at character ${pos}: ${what}`, argument, pos);
+    throw new EngineError(
+      'parse',
+      `Cannot read ${quote(this.original)} at character ${pos}: ${what}`,
+      argument,
+      pos,
+    );
   }
 }

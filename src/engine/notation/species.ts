@@ -41,7 +41,16 @@ export interface InlineActivity {
 
 export const ELECTRON: Species = Object.freeze({ formula: 'e', charge: -1, phase: null, isElectron: true });
 
-const PHASE_ALIASES: Record<string, Phase> = { s: 's', cr: 's', c: 's', l: 'l', liq: 'l', g: 'g', gas: 'g', aq: 'aq' };
+const PHASE_ALIASES: Record<string, Phase> = {
+  s: 's',
+  cr: 's',
+  c: 's',
+  l: 'l',
+  liq: 'l',
+  g: 'g',
+  gas: 'g',
+  aq: 'aq',
+};
 
 /** Units accepted in inline activities and their factor to activity (or bar). */
 const UNIT_FACTORS: Record<string, { factor: number; kind: 'solute' | 'gas' | 'any' }> = {
@@ -52,8 +61,8 @@ const UNIT_FACTORS: Record<string, { factor: number; kind: 'solute' | 'gas' | 'a
   'mol/dm3': { factor: 1, kind: 'solute' },
   mM: { factor: 1e-3, kind: 'solute' },
   uM: { factor: 1e-6, kind: 'solute' },
-  'µM': { factor: 1e-6, kind: 'solute' },
-  'μM': { factor: 1e-6, kind: 'solute' },
+  µM: { factor: 1e-6, kind: 'solute' },
+  μM: { factor: 1e-6, kind: 'solute' },
   m: { factor: 1, kind: 'solute' },
   'mol/kg': { factor: 1, kind: 'solute' },
   bar: { factor: 1, kind: 'gas' },
@@ -239,7 +248,11 @@ export function scanSpecies(src: SourceText, i: number, argument = 'reaction'): 
   }
   const first = t[i];
   if (first === undefined || !/[A-Z([]/.test(first)) {
-    src.fail(i, first === undefined ? 'expected a species' : `expected a species, found "${first}"`, argument);
+    src.fail(
+      i,
+      first === undefined ? 'expected a species' : `expected a species, found "${first}"`,
+      argument,
+    );
   }
   // formula body: letters, digits, brackets — but stop before a phase group "(s)", "(aq, 0.1 M)"
   let j = i;
@@ -309,7 +322,15 @@ export function scanSpecies(src: SourceText, i: number, argument = 'reaction'): 
       k += g.length;
     }
   }
-  if (k < t.length && !BOUNDARY.test(t[k] as string) && t[k] !== '+' && t[k] !== '-' && t[k] !== '<' && t[k] !== '=' && t[k] !== ']') {
+  if (
+    k < t.length &&
+    !BOUNDARY.test(t[k] as string) &&
+    t[k] !== '+' &&
+    t[k] !== '-' &&
+    t[k] !== '<' &&
+    t[k] !== '=' &&
+    t[k] !== ']'
+  ) {
     src.fail(k, `unexpected "${t[k] as string}" after ${quote(t.slice(start, k))}`, argument);
   }
   const species: Species = Object.freeze({ formula, charge, phase, isElectron: false });
@@ -347,7 +368,12 @@ function phaseGroupAt(
   }
   const bare = /^(\s*)([0-9.]+(?:[eE][+-]?\d+)?\s*[A-Za-zµμ/0-9]*)\s*$/.exec(inner);
   if (bare && /^\s*[0-9.]/.test(inner)) {
-    return { phase: null, amount: bare[2] as string, amountOffset: bare[1]?.length ?? 0, length: close - i + 1 };
+    return {
+      phase: null,
+      amount: bare[2] as string,
+      amountOffset: bare[1]?.length ?? 0,
+      length: close - i + 1,
+    };
   }
   return null;
 }
@@ -359,7 +385,8 @@ function readAmount(src: SourceText, at: number, text: string, argument: string)
   const unit = (m[2] as string).trim();
   const u = UNIT_FACTORS[unit];
   if (!u) src.fail(at, `unknown unit "${unit}"; use one of ${INLINE_UNITS.join(', ')}`, argument);
-  if (!(value > 0) || !Number.isFinite(value)) src.fail(at, `an activity or pressure must be positive; got ${m[1] as string}`, argument);
+  if (!(value > 0) || !Number.isFinite(value))
+    src.fail(at, `an activity or pressure must be positive; got ${m[1] as string}`, argument);
   return { value: value * u.factor, unit };
 }
 
@@ -376,7 +403,10 @@ export function parseSpecies(text: string, argument = 'species'): Species {
 }
 
 /** Parse one species that may carry an inline activity ("Zn2+(aq, 0.1 M)"). */
-export function parseSpeciesWithActivity(text: string, argument = 'species'): { species: Species; activity: InlineActivity | null } {
+export function parseSpeciesWithActivity(
+  text: string,
+  argument = 'species',
+): { species: Species; activity: InlineActivity | null } {
   const src = new SourceText(text);
   let i = 0;
   while (src.text[i] === ' ') i++;

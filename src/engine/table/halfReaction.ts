@@ -4,7 +4,13 @@
  */
 import { type Rational, div, isZero, eq, mul, add, neg, ZERO, sign } from '../rational';
 import { type Species, speciesKey, sameSpecies, formatSpecies } from '../notation/species';
-import { type StoichEntry, type Reaction, stoichiometry, electronsConsumed, reactionFromStoichiometry } from '../notation/reaction';
+import {
+  type StoichEntry,
+  type Reaction,
+  stoichiometry,
+  electronsConsumed,
+  reactionFromStoichiometry,
+} from '../notation/reaction';
 
 /** Species that any aqueous half-reaction may take from the solvent. */
 export const MEDIUM_KEYS: ReadonlySet<string> = new Set(['H|1', 'OH|-1', 'H2O|0', 'e']);

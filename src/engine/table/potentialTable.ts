@@ -13,7 +13,8 @@ import { BUILTIN_POTENTIALS } from '../data/potentials';
 import { type StoichMap, reactionMap, electronsOf, proportionality, scaleMap } from './halfReaction';
 
 /** Where a row came from. `row` is 1-based within the user's range (header included). */
-export type RowOrigin = { readonly kind: 'builtin'; readonly index: number } | { readonly kind: 'user'; readonly row: number };
+export type RowOrigin =
+  { readonly kind: 'builtin'; readonly index: number } | { readonly kind: 'user'; readonly row: number };
 
 /** A validated table row. */
 export interface TableRow {
@@ -50,17 +51,30 @@ export function describeOrigin(o: RowOrigin): string {
   return o.kind === 'builtin' ? `built-in row ${o.index + 1}` : `your table, row ${o.row}`;
 }
 
-function makeRow(text: string, e0V: number, dE0dTmVperK: number | null, source: string, origin: RowOrigin): TableRow {
+function makeRow(
+  text: string,
+  e0V: number,
+  dE0dTmVperK: number | null,
+  source: string,
+  origin: RowOrigin,
+): TableRow {
   const n = parseNotation(text, 'half-reaction');
   if (n.kind !== 'half') {
-    throw new EngineError('parse', `${quote(text)} is not a half-reaction: write a reduction with electrons on the left, e.g. "Fe3+ + e- -> Fe2+".`);
+    throw new EngineError(
+      'parse',
+      `${quote(text)} is not a half-reaction: write a reduction with electrons on the left, e.g. "Fe3+ + e- -> Fe2+".`,
+    );
   }
   const bal = checkBalance(n.reaction);
-  if (!bal.balanced) throw new EngineError('unbalanced', `${quote(text)} does not balance (${bal.problems.join('; ')}).`);
+  if (!bal.balanced)
+    throw new EngineError('unbalanced', `${quote(text)} does not balance (${bal.problems.join('; ')}).`);
   const map = reactionMap(n.reaction);
   const e: Rational = electronsOf(map);
   if (sign(e) < 0) {
-    throw new EngineError('parse', `${quote(text)} is written as an oxidation; write it as a reduction (electrons on the left).`);
+    throw new EngineError(
+      'parse',
+      `${quote(text)} is written as an oxidation; write it as a reduction (electrons on the left).`,
+    );
   }
   return {
     text,
@@ -123,7 +137,9 @@ function looksLikeHeader(row: readonly Cell[]): boolean {
   if (typeof first !== 'string') return false;
   if (/->|→|=|⇌/.test(first)) return false;
   const second = row[1];
-  return typeof second === 'string' && Number.isNaN(Number(second.trim())) ? true : /half|reaction|couple/i.test(first);
+  return typeof second === 'string' && Number.isNaN(Number(second.trim()))
+    ? true
+    : /half|reaction|couple/i.test(first);
 }
 
 /**
@@ -146,22 +162,34 @@ export function readUserTable(cells: readonly (readonly Cell[])[] | null | undef
     if (idx === 0 && looksLikeHeader(row)) return;
     const textCell = row[0];
     if (typeof textCell !== 'string' || textCell.trim() === '') {
-      problems.push({ row: rowNo, message: `row ${rowNo}: the first column must hold a half-reaction such as "Fe3+ + e- -> Fe2+".` });
+      problems.push({
+        row: rowNo,
+        message: `row ${rowNo}: the first column must hold a half-reaction such as "Fe3+ + e- -> Fe2+".`,
+      });
       return;
     }
     const text = textCell.trim();
     const e0 = cellNumber(row[1]);
     if (e0 === null || Number.isNaN(e0)) {
-      problems.push({ row: rowNo, message: `row ${rowNo} (${quote(text)}): E° must be a number in volts; got ${quote(String(row[1] ?? ''))}.` });
+      problems.push({
+        row: rowNo,
+        message: `row ${rowNo} (${quote(text)}): E° must be a number in volts; got ${quote(String(row[1] ?? ''))}.`,
+      });
       return;
     }
     if (Math.abs(e0) > 10) {
-      problems.push({ row: rowNo, message: `row ${rowNo} (${quote(text)}): E° of ${e0} V is outside ±10 V; give it in volts, not millivolts.` });
+      problems.push({
+        row: rowNo,
+        message: `row ${rowNo} (${quote(text)}): E° of ${e0} V is outside ±10 V; give it in volts, not millivolts.`,
+      });
       return;
     }
     let slope = cellNumber(row[2]);
     if (slope !== null && Number.isNaN(slope)) {
-      problems.push({ row: rowNo, message: `row ${rowNo} (${quote(text)}): dE°/dT must be a number in mV/K or empty; got ${quote(String(row[2]))}.` });
+      problems.push({
+        row: rowNo,
+        message: `row ${rowNo} (${quote(text)}): dE°/dT must be a number in mV/K or empty; got ${quote(String(row[2]))}.`,
+      });
       return;
     }
     if (slope === 0) slope = null;
@@ -189,7 +217,8 @@ export function readUserTable(cells: readonly (readonly Cell[])[] | null | undef
       }
     }
   }
-  const shadowed = (r: TableRow) => userRows.some((u) => proportionality(u.perElectron, r.perElectron) !== null);
+  const shadowed = (r: TableRow) =>
+    userRows.some((u) => proportionality(u.perElectron, r.perElectron) !== null);
   const rows = [...userRows, ...builtinTable().filter((r) => !shadowed(r))];
   return { rows, userRows, problems };
 }
@@ -197,7 +226,9 @@ export function readUserTable(cells: readonly (readonly Cell[])[] | null | undef
 /** Problems that make a user row unusable for a lookup that needs it: duplicate rows with different E°. */
 export function conflictingDuplicates(table: PotentialTable, row: TableRow): TableRow[] {
   if (row.origin.kind !== 'user') return [];
-  return table.userRows.filter((u) => u !== row && proportionality(u.perElectron, row.perElectron) && u.e0V !== row.e0V);
+  return table.userRows.filter(
+    (u) => u !== row && proportionality(u.perElectron, row.perElectron) && u.e0V !== row.e0V,
+  );
 }
 
 /** The table's key for caching (content-based). */

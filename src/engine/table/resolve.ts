@@ -7,7 +7,14 @@
  */
 import { EngineError, quote } from '../errors';
 import { type Rational, div, neg, sign, toNumber, ONE, lcm, rat } from '../rational';
-import { type Species, speciesKey, sameSpecies, formatSpecies, elementsOf, phaseOf } from '../notation/species';
+import {
+  type Species,
+  speciesKey,
+  sameSpecies,
+  formatSpecies,
+  elementsOf,
+  phaseOf,
+} from '../notation/species';
 import { splitElectrolyte } from '../notation/electrolytes';
 import { type Reaction, formatReaction } from '../notation/reaction';
 import { type Notation, parseNotation } from '../notation/notation';
@@ -102,7 +109,8 @@ export function halfSlopeMvPerK(h: ResolvedHalf): { slope: number; complete: boo
 
 function nonHOElements(m: StoichMap): Set<string> {
   const out = new Set<string>();
-  for (const v of m.values()) for (const el of elementsOf(v.species).keys()) if (el !== 'H' && el !== 'O') out.add(el);
+  for (const v of m.values())
+    for (const el of elementsOf(v.species).keys()) if (el !== 'H' && el !== 'O') out.add(el);
   return out;
 }
 
@@ -133,7 +141,13 @@ interface Candidate {
 }
 
 function fromRow(r: TableRow): Candidate {
-  return { map: r.map, n: r.n, shares: [{ row: r, weight: 1 }], derivation: null, perElectron: r.perElectron };
+  return {
+    map: r.map,
+    n: r.n,
+    shares: [{ row: r, weight: 1 }],
+    derivation: null,
+    perElectron: r.perElectron,
+  };
 }
 
 function candidateE0(c: Candidate): number {
@@ -195,7 +209,11 @@ function fmtNum(x: number): string {
 
 function describeCandidates(cs: readonly Candidate[]): string {
   return cs
-    .map((c) => (c.derivation ? `${formatReaction(mapToReaction(c.map))} (derived)` : `${c.shares[0]!.row.text} (${describeOrigin(c.shares[0]!.row.origin)})`))
+    .map((c) =>
+      c.derivation
+        ? `${formatReaction(mapToReaction(c.map))} (derived)`
+        : `${c.shares[0]!.row.text} (${describeOrigin(c.shares[0]!.row.origin)})`,
+    )
     .join('; ');
 }
 
@@ -204,25 +222,53 @@ function checkConflicts(table: PotentialTable, c: Candidate): void {
     const dup = conflictingDuplicates(table, s.row);
     if (dup.length > 0) {
       const rows = [s.row, ...dup].map((r) => describeOrigin(r.origin)).join(' and ');
-      throw new EngineError('ambiguous', `${rows} give the same half-reaction (${s.row.text}) with different E°; keep one.`, 'table');
+      throw new EngineError(
+        'ambiguous',
+        `${rows} give the same half-reaction (${s.row.text}) with different E°; keep one.`,
+        'table',
+      );
     }
   }
 }
 
-function toHalf(c: Candidate, userMap: StoichMap | null, inline: ReadonlyMap<string, number>, table: PotentialTable): ResolvedHalf {
+function toHalf(
+  c: Candidate,
+  userMap: StoichMap | null,
+  inline: ReadonlyMap<string, number>,
+  table: PotentialTable,
+): ResolvedHalf {
   checkConflicts(table, c);
   if (userMap) {
     // the user's written form, scaled as written; shares scale with n
     const f = proportionality(userMap, c.map);
     const filled = fillPhases(userMap, c.map);
     const n = f ? toNumber(f) * c.n : c.n;
-    return { map: filled, reaction: mapToReaction(filled), n, shares: c.shares, derivation: c.derivation, inline };
+    return {
+      map: filled,
+      reaction: mapToReaction(filled),
+      n,
+      shares: c.shares,
+      derivation: c.derivation,
+      inline,
+    };
   }
-  return { map: c.map, reaction: mapToReaction(c.map), n: c.n, shares: c.shares, derivation: c.derivation, inline };
+  return {
+    map: c.map,
+    reaction: mapToReaction(c.map),
+    n: c.n,
+    shares: c.shares,
+    derivation: c.derivation,
+    inline,
+  };
 }
 
 /** Find the half-reaction matching a written half-reaction. */
-function resolveHalfMap(target: StoichMap, text: string, table: PotentialTable, inline: ReadonlyMap<string, number>): ResolvedHalf {
+function resolveHalfMap(
+  target: StoichMap,
+  text: string,
+  table: PotentialTable,
+  inline: ReadonlyMap<string, number>,
+): ResolvedHalf {
   const e = electronsOf(target);
   if (sign(e) < 0) {
     throw new EngineError(
@@ -236,7 +282,10 @@ function resolveHalfMap(target: StoichMap, text: string, table: PotentialTable, 
   const chosen = pickOne(direct, text, table);
   if (chosen) return toHalf(chosen, target, inline, table);
   const rows = relevantRows(table, nonHOElements(target));
-  const derived = derivedCandidates(rows, (m) => proportionality(perE, scaleMap(m, div(ONE, electronsOf(m)))) !== null);
+  const derived = derivedCandidates(
+    rows,
+    (m) => proportionality(perE, scaleMap(m, div(ONE, electronsOf(m)))) !== null,
+  );
   const d = pickOne(derived, text, table);
   if (d) return toHalf(d, target, inline, table);
   throw notFound(text);
@@ -294,7 +343,9 @@ function coupleFit(c: Couple, m: StoichMap): number | null {
 }
 
 function bestFit(cs: Candidate[], fit: (m: StoichMap) => number | null): Candidate[] {
-  const scored = cs.map((c) => ({ c, f: fit(c.map) })).filter((x): x is { c: Candidate; f: number } => x.f !== null);
+  const scored = cs
+    .map((c) => ({ c, f: fit(c.map) }))
+    .filter((x): x is { c: Candidate; f: number } => x.f !== null);
   if (scored.length === 0) return [];
   const min = Math.min(...scored.map((x) => x.f));
   return scored.filter((x) => x.f === min).map((x) => x.c);
@@ -307,8 +358,12 @@ function resolveCouple(c: Couple, text: string, table: PotentialTable): Resolved
   const chosen = pickOne(direct, text, table);
   if (chosen) return toHalf(chosen, null, new Map(), table);
   const els = new Set<string>();
-  for (const s of [...c.oxidized, ...c.reduced]) for (const el of elementsOf(s).keys()) if (el !== 'H' && el !== 'O') els.add(el);
-  const derived = bestFit(derivedCandidates(relevantRows(table, els), (m) => fit(m) !== null), fit);
+  for (const s of [...c.oxidized, ...c.reduced])
+    for (const el of elementsOf(s).keys()) if (el !== 'H' && el !== 'O') els.add(el);
+  const derived = bestFit(
+    derivedCandidates(relevantRows(table, els), (m) => fit(m) !== null),
+    fit,
+  );
   const d = pickOne(derived, text, table);
   if (d) return toHalf(d, null, new Map(), table);
   throw notFound(text);
@@ -336,7 +391,8 @@ function sideSet(phases: readonly CellPhase[]): SideSet {
   const inline = new Map<string, number>();
   for (const p of phases)
     for (const cs of p) {
-      const ions = cs.species.charge === 0 && phaseOf(cs.species) === 'aq' ? splitElectrolyte(cs.species.formula) : null;
+      const ions =
+        cs.species.charge === 0 && phaseOf(cs.species) === 'aq' ? splitElectrolyte(cs.species.formula) : null;
       if (ions) {
         for (const { ion, count } of ions) {
           const k = speciesKey(ion);
@@ -413,7 +469,16 @@ function resolveDiagram(d: CellDiagram, text: string, table: PotentialTable): Re
   const left = resolveElectrode(sideSet(parts.left), text, 'left', table);
   const right = resolveElectrode(sideSet(parts.right), text, 'right', table);
   const cell = combineCell(right, left);
-  return { kind: 'cell', text, left, right, reaction: mapToReaction(cell.map), map: cell.map, n: cell.n, diagram: true };
+  return {
+    kind: 'cell',
+    text,
+    left,
+    right,
+    reaction: mapToReaction(cell.map),
+    map: cell.map,
+    n: cell.n,
+    diagram: true,
+  };
 }
 
 // ---------------------------------------------------------------------------
@@ -422,7 +487,12 @@ function resolveDiagram(d: CellDiagram, text: string, table: PotentialTable): Re
 function resolveFull(r: Reaction, text: string, table: PotentialTable): Resolved {
   assertBalanced(r, text);
   const x = reactionMap(r);
-  if (x.size === 0) throw new EngineError('parse', `${quote(text)} has the same species on both sides; nothing reacts.`, 'reaction');
+  if (x.size === 0)
+    throw new EngineError(
+      'parse',
+      `${quote(text)} has the same species on both sides; nothing reacts.`,
+      'reaction',
+    );
   const rows = relevantRows(table, nonHOElements(x));
   const inReaction = (m: StoichMap) => {
     for (const [k, v] of m) {
@@ -458,7 +528,9 @@ function resolveFull(r: Reaction, text: string, table: PotentialTable): Resolved
     );
   }
   // prefer decompositions using user rows; then require one E°
-  const userFound = found.filter((f) => [...f.red.shares, ...f.ox.shares].some((s) => s.row.origin.kind === 'user'));
+  const userFound = found.filter((f) =>
+    [...f.red.shares, ...f.ox.shares].some((s) => s.row.origin.kind === 'user'),
+  );
   const pool = userFound.length > 0 ? userFound : found;
   // decompositions must agree on ΔG° (n·E°); the electron count is the smallest that reproduces the reaction
   const nE0 = pool.map((f) => toNumber(f.k) * (candidateE0(f.red) - candidateE0(f.ox)));
@@ -474,7 +546,13 @@ function resolveFull(r: Reaction, text: string, table: PotentialTable): Resolved
       'reaction',
     );
   }
-  const f = pool.slice().sort((a, b) => toNumber(a.k) - toNumber(b.k) || Number(!!a.red.derivation || !!a.ox.derivation) - Number(!!b.red.derivation || !!b.ox.derivation))[0]!;
+  const f = pool
+    .slice()
+    .sort(
+      (a, b) =>
+        toNumber(a.k) - toNumber(b.k) ||
+        Number(!!a.red.derivation || !!a.ox.derivation) - Number(!!b.red.derivation || !!b.ox.derivation),
+    )[0]!;
   const k = toNumber(f.k);
   const right = toHalf(f.red, null, new Map(), table);
   const left = toHalf(f.ox, null, new Map(), table);
@@ -498,7 +576,8 @@ export function resolveReaction(text: string, table: PotentialTable, parsed?: No
     case 'half': {
       assertBalanced(n.reaction, text);
       const inline = new Map<string, number>();
-      for (const t of [...n.reaction.reactants, ...n.reaction.products]) if (t.activity) inline.set(speciesKey(t.species), t.activity.value);
+      for (const t of [...n.reaction.reactants, ...n.reaction.products])
+        if (t.activity) inline.set(speciesKey(t.species), t.activity.value);
       return { kind: 'half', text, half: resolveHalfMap(reactionMap(n.reaction), text, table, inline) };
     }
     case 'couple':
@@ -509,8 +588,10 @@ export function resolveReaction(text: string, table: PotentialTable, parsed?: No
       const res = resolveFull(n.reaction, text, table);
       if (res.kind === 'cell') {
         const inline = new Map<string, number>();
-        for (const t of [...n.reaction.reactants, ...n.reaction.products]) if (t.activity) inline.set(speciesKey(t.species), t.activity.value);
-        if (inline.size > 0) return { ...res, left: { ...res.left, inline }, right: { ...res.right, inline } };
+        for (const t of [...n.reaction.reactants, ...n.reaction.products])
+          if (t.activity) inline.set(speciesKey(t.species), t.activity.value);
+        if (inline.size > 0)
+          return { ...res, left: { ...res.left, inline }, right: { ...res.right, inline } };
       }
       return res;
     }

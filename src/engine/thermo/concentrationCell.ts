@@ -25,7 +25,11 @@ export interface ConcentrationCellPlan {
  */
 export function planConcentrationCell(form: NernstForm, speciesText: string | null): ConcentrationCellPlan {
   if (form.resolved.kind !== 'half') {
-    throw new EngineError('argument', 'couple must be one electrode (a couple or half-reaction such as "Ag+/Ag"), not a cell.', 'couple');
+    throw new EngineError(
+      'argument',
+      'couple must be one electrode (a couple or half-reaction such as "Ag+/Ag"), not a cell.',
+      'couple',
+    );
   }
   const variable = form.terms.filter((t) => !t.pure);
   if (speciesText !== null && speciesText.trim() !== '') {
@@ -59,7 +63,12 @@ export function planConcentrationCell(form: NernstForm, speciesText: string | nu
  * @example
  * concentrationCellEmfV(plan /* Ag+/Ag *\/, 0.01, 0.1, 25) // +0.05916 V
  */
-export function concentrationCellEmfV(plan: ConcentrationCellPlan, valueLeft: number, valueRight: number, tempC: number): number {
+export function concentrationCellEmfV(
+  plan: ConcentrationCellPlan,
+  valueLeft: number,
+  valueRight: number,
+  tempC: number,
+): number {
   const check = (v: number, arg: string) => {
     if (!Number.isFinite(v) || !(v > 0)) {
       throw new EngineError(

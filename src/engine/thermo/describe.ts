@@ -15,7 +15,10 @@ function fmtV(x: number): string {
 function describeHalf(h: ResolvedHalf): string {
   const e0 = halfE0V25(h);
   const rows = h.shares
-    .map((s) => `${s.row.text}, E° = ${s.row.e0V} V${s.row.dE0dTmVperK !== null ? `, dE°/dT = ${s.row.dE0dTmVperK} mV/K` : ''} (${describeOrigin(s.row.origin)}: ${s.row.source})`)
+    .map(
+      (s) =>
+        `${s.row.text}, E° = ${s.row.e0V} V${s.row.dE0dTmVperK !== null ? `, dE°/dT = ${s.row.dE0dTmVperK} mV/K` : ''} (${describeOrigin(s.row.origin)}: ${s.row.source})`,
+    )
     .join('; ');
   const slope = halfSlopeMvPerK(h);
   const temp = slope.complete
@@ -46,7 +49,11 @@ function isMetalElement(s: Species): boolean {
   return phaseOf(s) === 's' && s.charge === 0 && elementsOf(s).size === 1;
 }
 
-function electrodePhases(h: ResolvedHalf, side: 'left' | 'right', activityOf: (key: string, s: Species, side: 'left' | 'right') => number | null): string[] {
+function electrodePhases(
+  h: ResolvedHalf,
+  side: 'left' | 'right',
+  activityOf: (key: string, s: Species, side: 'left' | 'right') => number | null,
+): string[] {
   const metals: string[] = [];
   const solids: string[] = [];
   const liquids: string[] = [];
@@ -57,14 +64,16 @@ function electrodePhases(h: ResolvedHalf, side: 'left' | 'right', activityOf: (k
     if (s.isElectron || (s.formula === 'H2O' && s.charge === 0)) continue;
     const p = phaseOf(s);
     const a = activityOf(key, s, side);
-    const text = a !== null && (p === 'aq' || p === 'g') ? withActivity(s, a) : formatSpecies({ ...s, phase: p }, true);
+    const text =
+      a !== null && (p === 'aq' || p === 'g') ? withActivity(s, a) : formatSpecies({ ...s, phase: p }, true);
     if (p === 'aq') solution.push(text);
     else if (p === 'g') gases.push(text);
     else if (p === 'l') liquids.push(text);
     else if (isMetalElement(s)) metals.push(text);
     else solids.push(text);
   }
-  const conductor = metals.length > 0 || liquids.some((l) => l.startsWith('Hg')) ? [] : [formatSpecies(INERT, true)];
+  const conductor =
+    metals.length > 0 || liquids.some((l) => l.startsWith('Hg')) ? [] : [formatSpecies(INERT, true)];
   // from the electrode outward: conductor/metal | solids | gas | solution
   const outward = [
     ...conductor,
@@ -85,7 +94,11 @@ function electrodePhases(h: ResolvedHalf, side: 'left' | 'right', activityOf: (k
  * describeDiagram(resolveReaction('Zn + Cu2+ -> Zn2+ + Cu', defaultTable()), null, null)
  * // 'Zn(s) | Zn2+(aq, 1 M) || Cu2+(aq, 1 M) | Cu(s)'
  */
-export function describeDiagram(r: Resolved, binding: Binding | null, row: ArrayLike<unknown> | null): string {
+export function describeDiagram(
+  r: Resolved,
+  binding: Binding | null,
+  row: ArrayLike<unknown> | null,
+): string {
   const activityOf = (key: string, _s: Species, side: 'left' | 'right'): number | null => {
     if (binding && row) {
       const terms = binding.form.terms;

@@ -16,16 +16,25 @@ import { FARADAY_C_PER_MOL, kelvinFromCelsius, slopePerElectronAtKelvin } from '
  */
 export function checkElectrons(n: number, argName = 'n'): number {
   if (!Number.isFinite(n) || n <= 0) {
-    throw new EngineError('argument', `${argName} (electrons transferred) must be a positive whole number; got ${String(n)}.`, argName);
+    throw new EngineError(
+      'argument',
+      `${argName} (electrons transferred) must be a positive whole number; got ${String(n)}.`,
+      argName,
+    );
   }
   if (!Number.isInteger(n)) {
-    throw new EngineError('argument', `${argName} (electrons transferred) must be a whole number; got ${n}. Balance the reaction with whole coefficients.`, argName);
+    throw new EngineError(
+      'argument',
+      `${argName} (electrons transferred) must be a whole number; got ${n}. Balance the reaction with whole coefficients.`,
+      argName,
+    );
   }
   return n;
 }
 
 function checkPotential(e: number, argName: string): number {
-  if (!Number.isFinite(e)) throw new EngineError('argument', `${argName} must be a potential in volts; got ${String(e)}.`, argName);
+  if (!Number.isFinite(e))
+    throw new EngineError('argument', `${argName} must be a potential in volts; got ${String(e)}.`, argName);
   return e;
 }
 
@@ -87,9 +96,14 @@ export function gibbsEnergyKJ(eV: number, n: number): number {
  */
 export function combineStepPotentialsV(potentialsV: readonly number[], electrons: readonly number[]): number {
   if (potentialsV.length !== electrons.length) {
-    throw new EngineError('shape', `potentials has ${potentialsV.length} values but electrons has ${electrons.length}; give one electron count per step.`, 'electrons');
+    throw new EngineError(
+      'shape',
+      `potentials has ${potentialsV.length} values but electrons has ${electrons.length}; give one electron count per step.`,
+      'electrons',
+    );
   }
-  if (potentialsV.length === 0) throw new EngineError('argument', 'potentials is empty: give the E° of each step.', 'potentials');
+  if (potentialsV.length === 0)
+    throw new EngineError('argument', 'potentials is empty: give the E° of each step.', 'potentials');
   let num = 0;
   let den = 0;
   potentialsV.forEach((e, i) => {

@@ -8,7 +8,14 @@
  */
 import { EngineError, quote } from '../errors';
 import { toNumber } from '../rational';
-import { type Species, speciesKey, isPureOrSolvent, isGas, formatSpecies, parseSpecies } from '../notation/species';
+import {
+  type Species,
+  speciesKey,
+  isPureOrSolvent,
+  isGas,
+  formatSpecies,
+  parseSpecies,
+} from '../notation/species';
 import { type Resolved, type ResolvedHalf, standardPotentialV } from '../table/resolve';
 import { slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
 
@@ -61,7 +68,11 @@ function halfTerms(h: ResolvedHalf, sign: 1 | -1, side: 'left' | 'right' | null)
 export function nernstForm(r: Resolved): NernstForm {
   if (r.kind === 'half') return { resolved: r, terms: halfTerms(r.half, 1, null), n: r.half.n };
   if (r.diagram) {
-    return { resolved: r, terms: [...halfTerms(r.right, 1, 'right'), ...halfTerms(r.left, -1, 'left')], n: r.n };
+    return {
+      resolved: r,
+      terms: [...halfTerms(r.right, 1, 'right'), ...halfTerms(r.left, -1, 'left')],
+      n: r.n,
+    };
   }
   const terms: NernstTerm[] = [];
   for (const [key, v] of r.map) {
@@ -147,7 +158,11 @@ export function bindSpecies(form: NernstForm, headers: readonly string[]): Bindi
   parsed.forEach((h, i) => {
     const id = `${h.side ?? ''}|${h.kind}|${h.key}`;
     if (seen.has(id)) {
-      throw new EngineError('argument', `species lists ${quote(h.text)} twice (columns ${seen.get(id)! + 1} and ${i + 1}); give each species once.`, 'species');
+      throw new EngineError(
+        'argument',
+        `species lists ${quote(h.text)} twice (columns ${seen.get(id)! + 1} and ${i + 1}); give each species once.`,
+        'species',
+      );
     }
     seen.set(id, i);
   });
@@ -194,7 +209,9 @@ export function bindSpecies(form: NernstForm, headers: readonly string[]): Bindi
     }
     if (t.pure || standardState) return; // unit activity
     const what = t.gas ? 'a partial pressure in bar' : 'an activity (or concentration in mol/L)';
-    const sideHint = t.side ? ` (or "${t.side}:${formatSpecies(t.species, false)}" for this electrode only)` : '';
+    const sideHint = t.side
+      ? ` (or "${t.side}:${formatSpecies(t.species, false)}" for this electrode only)`
+      : '';
     const phHint = t.key === 'H|1' ? ' or a "pH" column' : '';
     throw new EngineError(
       'argument',
@@ -229,7 +246,8 @@ export function weightedLogActivity(b: Binding, row: ArrayLike<unknown>): number
 
 function badValue(b: Binding, i: number, v: unknown): EngineError {
   const label = b.labels[i]!;
-  if (b.isPH[i] === 1) return new EngineError('argument', `pH must be a number; got ${describe(v)}.`, 'values');
+  if (b.isPH[i] === 1)
+    return new EngineError('argument', `pH must be a number; got ${describe(v)}.`, 'values');
   const what = b.gas[i] === 1 ? 'partial pressure (bar)' : 'activity';
   const shown = describe(v);
   return new EngineError(

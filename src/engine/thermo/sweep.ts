@@ -1,0 +1,91 @@
+/**
+ * Many cases of one reaction at once: the Nernst equation evaluated over rows of
+ * activities (and a temperature per case), with an error kept per case so one
+ * bad row does not stop the others. The hot loop allocates nothing per case.
+ */
+import { EngineError } from '../errors';
+import { ZERO_CELSIUS_K, slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
+import { type Resolved, halfE0V25, halfSlopeMvPerK } from '../table/resolve';
+import { type Binding, weightedLogActivity } from './nernstForm';
+
+/** E°(T) = e0V25 + slopeVPerK·(T − 25 °C), exactly as the table's linear dE°/dT gives it. */
+export interface LinearStandardPotential {
+  readonly e0V25: number;
+  readonly slopeVPerK: number;
+}
+
+/**
+ * The linear temperature model of a resolution's E°.
+ *
+ * @example
+ * linearStandardPotential(resolveReaction('Ag+/Ag', defaultTable())) // { e0V25: 0.7996, slopeVPerK: -0.000989 }
+ */
+export function linearStandardPotential(r: Resolved): LinearStandardPotential {
+  if (r.kind === 'half')
+    return { e0V25: halfE0V25(r.half), slopeVPerK: halfSlopeMvPerK(r.half).slope * 1e-3 };
+  return {
+    e0V25: halfE0V25(r.right) - halfE0V25(r.left),
+    slopeVPerK: (halfSlopeMvPerK(r.right).slope - halfSlopeMvPerK(r.left).slope) * 1e-3,
+  };
+}
+
+/** What to compute per case. */
+export type CaseQuantity = 'potential' | 'log10Q';
+
+/** Results of a sweep: a value per case, or the error of that case. */
+export interface SweepResult {
+  readonly values: Float64Array;
+  /** errors by case index (sparse) */
+  readonly errors: Map<number, EngineError>;
+}
+
+/**
+ * Evaluate a bound reaction over rows of values.
+ *
+ * @param rows one row of values per case (cells in the order of the species headers)
+ * @param tempC one temperature for all cases, or a function giving case i's temperature (may throw)
+ * @example
+ * sweepCases(binding, [[0.01], [0.1]], 25, 'potential').values // Float64Array [0.2778, 0.3074]
+ */
+export function sweepCases(
+  b: Binding,
+  rows: readonly ArrayLike<unknown>[],
+  tempC: number | ((i: number) => number),
+  quantity: CaseQuantity,
+  caseCount = rows.length,
+): SweepResult {
+  const values = new Float64Array(caseCount);
+  const errors = new Map<number, EngineError>();
+  const lin = linearStandardPotential(b.form.resolved);
+  const n = b.form.n;
+  const fixedT = typeof tempC === 'number';
+  let fixedE0 = 0;
+  let fixedS = 0;
+  if (fixedT) {
+    const tK = kelvinFromCelsius(tempC);
+    fixedE0 = lin.e0V25 + lin.slopeVPerK * (tempC - 25);
+    fixedS = slopePerElectronAtKelvin(tK);
+  }
+  const empty: unknown[] = [];
+  for (let i = 0; i < caseCount; i++) {
+    try {
+      const row = rows.length === 1 ? rows[0]! : (rows[i] ?? empty);
+      const sum = weightedLogActivity(b, row);
+      if (quantity === 'log10Q') {
+        values[i] = n * sum;
+        continue;
+      }
+      if (fixedT) values[i] = fixedE0 - fixedS * sum;
+      else {
+        const t = (tempC as (i: number) => number)(i);
+        const tK = t + ZERO_CELSIUS_K;
+        if (!(tK > 0) || !Number.isFinite(t)) kelvinFromCelsius(t);
+        values[i] = lin.e0V25 + lin.slopeVPerK * (t - 25) - slopePerElectronAtKelvin(tK) * sum;
+      }
+    } catch (e) {
+      if (!(e instanceof EngineError)) throw e;
+      errors.set(i, e);
+    }
+  }
+  return { values, errors };
+}
