@@ -28,7 +28,8 @@ class BoundedCache<V> {
 
 const tables = new BoundedCache<PotentialTable>(64);
 type Outcome = { ok: true; form: NernstForm } | { ok: false; error: EngineError };
-const resolutions = new BoundedCache<Outcome>(4096);
+const resolutions = new Map<string, BoundedCache<Outcome>>();
+let last: { key: string; text: string; outcome: Outcome } | null = null;
 let lastTableCells: unknown = undefined;
 let lastTable: { key: string; table: PotentialTable } | null = null;
 
@@ -67,8 +68,17 @@ export function compiledReaction(
   cells: readonly (readonly unknown[])[] | null | undefined,
 ): NernstForm {
   const { key, table } = tableFor(cells);
-  const ck = `${key.length}:${key}\u0000${text}`;
-  let o = resolutions.get(ck);
+  if (last && last.text === text && last.key === key) {
+    if (!last.outcome.ok) throw last.outcome.error;
+    return last.outcome.form;
+  }
+  let byText = resolutions.get(key);
+  if (!byText) {
+    if (resolutions.size >= 64) resolutions.clear();
+    byText = new BoundedCache<Outcome>(4096);
+    resolutions.set(key, byText);
+  }
+  let o = byText.get(text);
   if (!o) {
     try {
       o = { ok: true, form: nernstForm(resolveReaction(text, table)) };
@@ -76,8 +86,9 @@ export function compiledReaction(
       if (!(e instanceof EngineError)) throw e;
       o = { ok: false, error: e };
     }
-    resolutions.set(ck, o);
+    byText.set(text, o);
   }
+  last = { key, text, outcome: o };
   if (!o.ok) throw o.error;
   return o.form;
 }
@@ -94,6 +105,7 @@ export function resolvedReaction(
 export function clearCaches(): void {
   tables.clear();
   resolutions.clear();
+  last = null;
   lastTableCells = undefined;
   lastTable = null;
 }

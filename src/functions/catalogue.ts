@@ -190,6 +190,75 @@ function readTemp(c: CaseColumn, i: number): number {
   return readNumber(at(c, i), 'temp_C', 25, '°C');
 }
 
+/** The last prepared POTENTIAL/LOGQ call: repeated single-case calls skip argument adaptation. */
+let lastPrepared: { reaction: string; species: Scalar[]; table: Arg; binding: Binding } | null = null;
+
+function scalarOf(a: Arg): Scalar | undefined {
+  if (!Array.isArray(a)) return a;
+  return a.length === 1 && Array.isArray(a[0]) && a[0].length === 1 ? (a[0][0] as Scalar) : undefined;
+}
+
+function sameSpeciesRow(a: Scalar[], species: Arg): boolean {
+  if (!Array.isArray(species) || species.length !== 1) return false;
+  const row = species[0];
+  if (!Array.isArray(row) || row.length !== a.length) return false;
+  for (let i = 0; i < a.length; i++) if (row[i] !== a[i]) return false;
+  return true;
+}
+
+/**
+ * Fast path for the common single-formula shape (one reaction text, the same
+ * species row and table as the previous call, a values matrix of that width, one
+ * temperature): the same computation as the general path without re-adapting
+ * arguments. Returns null where the call does not have that shape.
+ */
+function fastNernst(
+  reaction: Arg,
+  species: Arg,
+  values: Arg,
+  temp: Arg,
+  table: Arg,
+  quantity: 'potential' | 'log10Q',
+): Result | null {
+  const p = lastPrepared;
+  if (!p || !Array.isArray(values) || values.length === 0) return null;
+  const r = scalarOf(reaction);
+  if (r !== p.reaction || table !== p.table || !sameSpeciesRow(p.species, species)) return null;
+  const t = quantity === 'potential' ? scalarOf(temp) : null;
+  if (t === undefined ? Array.isArray(temp) : t !== null && !(typeof t === 'number' && Number.isFinite(t)))
+    return null;
+  const k = p.species.length;
+  for (const row of values) if (!Array.isArray(row) || row.length !== k) return null;
+  const res = sweepCases(
+    p.binding,
+    values as Scalar[][],
+    typeof t === 'number' ? t : 25,
+    quantity,
+    values.length,
+  );
+  return toColumn(res, values.length);
+}
+
+function toColumn(
+  res: { values: Float64Array; errors: ReadonlyMap<number, EngineError> },
+  n: number,
+): Result {
+  const out: Result = new Array<ResultCell[]>(n);
+  const vals = res.values;
+  const anyErrors = res.errors.size > 0;
+  for (let i = 0; i < n; i++) {
+    const x = vals[i]!;
+    out[i] = [
+      anyErrors && res.errors.has(i)
+        ? toCellError(res.errors.get(i))
+        : Number.isFinite(x)
+          ? x
+          : finite(x, 'E'),
+    ];
+  }
+  return out;
+}
+
 /** Evaluate the Nernst equation (or log Q) over cases. */
 function nernstCases(
   reaction: Arg,
@@ -214,18 +283,12 @@ function nernstCases(
     if (!tc.cells || tc.cells.length === 1) temps = readTemp(tc, 0);
     else temps = (i: number) => readTemp(tc, i);
     const res = sweepCases(b, valueRows, temps, quantity, n);
-    const vals = res.values;
-    for (let i = 0; i < n; i++) {
-      const x = vals[i]!;
-      out[i] = [
-        res.errors.size > 0 && res.errors.has(i)
-          ? toCellError(res.errors.get(i))
-          : Number.isFinite(x)
-            ? x
-            : finite(x, 'E'),
-      ];
-    }
-    return out;
+    const sg = asGrid(species);
+    lastPrepared =
+      sg && sg.length === 1 && typeof reaction === 'string' && text === reaction
+        ? { reaction, species: sg[0]!.slice(), table, binding: b }
+        : null;
+    return toColumn(res, n);
   }
   // one reaction per case
   let lastText: string | null = null;
@@ -269,7 +332,11 @@ function perCase(columns: CaseColumn[], f: (i: number) => ResultCell, rows: numb
 
 /** E in V: a half-reaction's electrode potential, or a cell's or reaction's EMF. */
 export function potential(reaction: Arg, species: Arg, values: Arg, temp_C: Arg, table: Arg): Result {
-  return guard(() => nernstCases(reaction, species, values, temp_C, table, 'potential'));
+  return guard(
+    () =>
+      fastNernst(reaction, species, values, temp_C, table, 'potential') ??
+      nernstCases(reaction, species, values, temp_C, table, 'potential'),
+  );
 }
 
 /** E° in V at temp_C. */
@@ -313,7 +380,11 @@ export function quotient(reaction: Arg, species: Arg, values: Arg, table: Arg): 
 
 /** log10 Q. */
 export function logQ(reaction: Arg, species: Arg, values: Arg, table: Arg): Result {
-  return guard(() => nernstCases(reaction, species, values, null, table, 'log10Q'));
+  return guard(
+    () =>
+      fastNernst(reaction, species, values, null, table, 'log10Q') ??
+      nernstCases(reaction, species, values, null, table, 'log10Q'),
+  );
 }
 
 /** (E°, n) from either a reaction text or a number with n. */

@@ -153,6 +153,35 @@ export interface Binding {
  * @throws EngineError (`argument`) for a species the reaction needs that has no value
  */
 export function bindSpecies(form: NernstForm, headers: readonly string[]): Binding {
+  if (lastBinding && lastBinding.form === form && sameList(lastBinding.headers, headers))
+    return lastBinding.binding;
+  let byHeaders = bindingCache.get(form);
+  if (!byHeaders) {
+    byHeaders = new Map();
+    bindingCache.set(form, byHeaders);
+  }
+  const key = headers.length === 1 ? headers[0]! : headers.join('\u0000');
+  let b = byHeaders.get(key);
+  if (!b) {
+    b = bindSpeciesUncached(form, headers);
+    if (byHeaders.size > 256) byHeaders.clear();
+    byHeaders.set(key, b);
+  }
+  lastBinding = { form, headers: headers.slice(), binding: b };
+  return b;
+}
+
+let lastBinding: { form: NernstForm; headers: readonly string[]; binding: Binding } | null = null;
+
+function sameList(a: readonly string[], b: readonly string[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+const bindingCache = new WeakMap<NernstForm, Map<string, Binding>>();
+
+function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Binding {
   const parsed = headers.map((h) => parseSpeciesHeader(h));
   const seen = new Map<string, number>();
   parsed.forEach((h, i) => {
@@ -201,6 +230,7 @@ export function bindSpecies(form: NernstForm, headers: readonly string[]): Bindi
     if (col >= 0) {
       column[i] = col;
       isPH[i] = ph ? 1 : 0;
+      labels[i] = parsed[col]!.text.trim();
       return;
     }
     if (t.inline !== undefined) {

@@ -21,6 +21,17 @@ export interface LinearStandardPotential {
  * linearStandardPotential(resolveReaction('Ag+/Ag', defaultTable())) // { e0V25: 0.7996, slopeVPerK: -0.000989 }
  */
 export function linearStandardPotential(r: Resolved): LinearStandardPotential {
+  let lin = linearCache.get(r);
+  if (!lin) {
+    lin = computeLinear(r);
+    linearCache.set(r, lin);
+  }
+  return lin;
+}
+
+const linearCache = new WeakMap<Resolved, LinearStandardPotential>();
+
+function computeLinear(r: Resolved): LinearStandardPotential {
   if (r.kind === 'half')
     return { e0V25: halfE0V25(r.half), slopeVPerK: halfSlopeMvPerK(r.half).slope * 1e-3 };
   return {
@@ -29,14 +40,16 @@ export function linearStandardPotential(r: Resolved): LinearStandardPotential {
   };
 }
 
+const NO_ERRORS: Map<number, EngineError> = new Map();
+
 /** What to compute per case. */
 export type CaseQuantity = 'potential' | 'log10Q';
 
 /** Results of a sweep: a value per case, or the error of that case. */
 export interface SweepResult {
   readonly values: Float64Array;
-  /** errors by case index (sparse) */
-  readonly errors: Map<number, EngineError>;
+  /** errors by case index (sparse; shared and empty where there are none — do not mutate) */
+  readonly errors: ReadonlyMap<number, EngineError>;
 }
 
 /**
@@ -55,7 +68,7 @@ export function sweepCases(
   caseCount = rows.length,
 ): SweepResult {
   const values = new Float64Array(caseCount);
-  const errors = new Map<number, EngineError>();
+  let errors: Map<number, EngineError> | null = null;
   const lin = linearStandardPotential(b.form.resolved);
   const n = b.form.n;
   const fixedT = typeof tempC === 'number';
@@ -84,8 +97,8 @@ export function sweepCases(
       }
     } catch (e) {
       if (!(e instanceof EngineError)) throw e;
-      errors.set(i, e);
+      (errors ??= new Map()).set(i, e);
     }
   }
-  return { values, errors };
+  return { values, errors: errors ?? NO_ERRORS };
 }
