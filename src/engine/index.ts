@@ -93,6 +93,7 @@ export {
 export { describeSource, describeDiagram } from './thermo/describe';
 export {
   linearStandardPotential,
+  sweepToColumn,
   sweepCases,
   type LinearStandardPotential,
   type SweepResult,

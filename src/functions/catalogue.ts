@@ -14,6 +14,7 @@ import {
   compiledReaction,
   bindSpecies,
   sweepCases,
+  sweepToColumn,
   standardPotentialV,
   electronCount,
   log10EquilibriumConstant,
@@ -229,14 +230,13 @@ function fastNernst(
     return null;
   const k = p.species.length;
   for (const row of values) if (!Array.isArray(row) || row.length !== k) return null;
-  const res = sweepCases(
+  return sweepToColumn<ResultCell>(
     p.binding,
     values as Scalar[][],
     typeof t === 'number' ? t : 25,
     quantity,
-    values.length,
+    toCellError,
   );
-  return toColumn(res, values.length);
 }
 
 function toColumn(

@@ -102,3 +102,45 @@ export function sweepCases(
   }
   return { values, errors: errors ?? NO_ERRORS };
 }
+
+/**
+ * The same computation as {@link sweepCases}, written straight into a column of
+ * one-cell rows (the shape a spreadsheet spill takes), with each case's error
+ * turned into a cell by `onError`. One pass, no intermediate array.
+ *
+ * @example
+ * sweepToColumn(binding, [[0.01], [0.1]], 25, 'potential', (e) => e.message) // [[0.2778], [0.3074]]
+ */
+export function sweepToColumn<E>(
+  b: Binding,
+  rows: readonly ArrayLike<unknown>[],
+  tempC: number,
+  quantity: CaseQuantity,
+  onError: (e: EngineError) => E,
+): (number | E)[][] {
+  const caseCount = rows.length;
+  const out: (number | E)[][] = new Array<(number | E)[]>(caseCount);
+  const lin = linearStandardPotential(b.form.resolved);
+  const tK = kelvinFromCelsius(tempC);
+  const e0 = lin.e0V25 + lin.slopeVPerK * (tempC - 25);
+  const s = slopePerElectronAtKelvin(tK);
+  const n = b.form.n;
+  const potential = quantity === 'potential';
+  for (let i = 0; i < caseCount; i++) {
+    try {
+      const sum = weightedLogActivity(b, rows[i]!);
+      const x = potential ? e0 - s * sum : n * sum;
+      out[i] = [
+        Number.isFinite(x)
+          ? x
+          : onError(
+              new EngineError('range', 'The result is not a finite number; check the inputs.', 'values'),
+            ),
+      ];
+    } catch (e) {
+      if (!(e instanceof EngineError)) throw e;
+      out[i] = [onError(e)];
+    }
+  }
+  return out;
+}
