@@ -56,21 +56,26 @@ class KeepOwnAssociationsPlugin {
 const CONTENT_SECURITY_POLICY = [
   "default-src 'self'",
   "script-src 'self' https://appsforoffice.microsoft.com",
-  "style-src 'self' 'unsafe-inline'",
+  "style-src 'self'",
   "img-src 'self' data:",
+  "font-src 'self'",
   "connect-src 'self'",
   "object-src 'none'",
   "base-uri 'self'",
+  "form-action 'none'",
 ].join('; ');
 
 /**
- * Puts the policy first in the page's <head>, before any script, so that it governs all of
- * them (html-webpack-plugin's `meta` option would place it after the template's own scripts).
+ * Makes sure the page carries a Content-Security-Policy: where the template has none, puts
+ * this one first in its <head>, before any script, so that it governs all of them
+ * (html-webpack-plugin's `meta` option would place it after the template's own scripts).
+ * A template's own policy is left as it is; test/build checks the built page's policy.
  */
 class ContentSecurityPolicyPlugin {
   apply(compiler) {
     compiler.hooks.compilation.tap('ContentSecurityPolicyPlugin', (compilation) => {
       HtmlWebpackPlugin.getHooks(compilation).beforeEmit.tap('ContentSecurityPolicyPlugin', (data) => {
+        if (/http-equiv=["']?Content-Security-Policy/i.test(data.html)) return data;
         const meta = `<meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}">`;
         const withCharset = /<meta\s+charset=[^>]*>/i;
         data.html = withCharset.test(data.html)
@@ -112,7 +117,9 @@ module.exports = async (env = {}, argv = {}) => {
   // `npm start -- --env http` skips the certificate (a container, a browser-only check).
   const https = serving && !env.http ? await devServerHttpsOptions() : null;
   if (serving && !https) {
-    console.warn('[potentia] Dev server on http://localhost:3000/ (Excel needs https: see README, "Install into Excel").');
+    console.warn(
+      '[potentia] Dev server on http://localhost:3000/ (Excel needs https: see README, "Install into Excel").',
+    );
   }
 
   return {
