@@ -1,0 +1,4 @@
+/** Imported before functions.ts: puts a stub `CustomFunctions` global in place first. */
+import { installCustomFunctionsStub } from './customFunctionsStub';
+
+export const stub = installCustomFunctionsStub();
