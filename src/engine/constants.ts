@@ -21,6 +21,8 @@ export const ZERO_CELSIUS_K = 273.15;
 export const STANDARD_TEMP_C = 25;
 /** Standard pressure, bar (IUPAC since 1982). */
 export const STANDARD_PRESSURE_BAR = 1;
+/** The highest temperature accepted, °C (far above any aqueous system; guards against overflow). */
+export const MAX_TEMP_C = 10000;
 /** One standard atmosphere in bar (exact). */
 export const ATM_IN_BAR = 1.01325;
 
@@ -43,6 +45,13 @@ export function kelvinFromCelsius(tempC: number, argName = 'temp_C'): number {
     );
   }
   const tempK = tempC + ZERO_CELSIUS_K;
+  if (tempC > MAX_TEMP_C) {
+    throw new EngineError(
+      'argument',
+      `${argName} of ${tempC} °C is beyond the ${MAX_TEMP_C} °C this engine accepts; give the temperature in degrees Celsius.`,
+      argName,
+    );
+  }
   if (tempK <= 0) {
     throw new EngineError(
       'argument',
@@ -63,8 +72,8 @@ export function kelvinFromCelsius(tempC: number, argName = 'temp_C'): number {
  * @param tempC temperature in °C (default 25)
  * @param n electrons (default 1)
  * @example
- * nernstSlopeV(25) // 0.0591596… V
- * nernstSlopeV(25, 2) // 0.0295798… V
+ * nernstSlopeV(25) // 0.0591593… V
+ * nernstSlopeV(25, 2) // 0.0295797… V
  */
 export function nernstSlopeV(tempC = STANDARD_TEMP_C, n = 1): number {
   const tempK = kelvinFromCelsius(tempC);

@@ -414,9 +414,9 @@ describe('combineHalfReactions: scaled by the LCM of the electrons', () => {
     expect(e.message).toContain('written as reductions');
   });
 
-  // BUG: combining a couple with itself (here Cl2/Cl- written two ways) returns an empty
+  // Regression (fixed): combining a couple with itself (here Cl2/Cl- written two ways) returns an empty
   // reaction whose text is " -> " (n = 2) instead of an error; the text cannot be read back.
-  test.failing('combining a couple with itself is an error, not an empty reaction', () => {
+  test('combining a couple with itself is an error, not an empty reaction', () => {
     expect(() =>
       combineHalfReactions(parseReaction('Cl2 + 2 e- -> 2 Cl-'), parseReaction('1/2 Cl2 + e- -> Cl-')),
     ).toThrow(EngineError);

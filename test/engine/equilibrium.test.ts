@@ -175,26 +175,23 @@ describe('K beyond the float64 range', () => {
     expect(engineErrorOf(() => equilibriumConstantFromLog10(Number.POSITIVE_INFINITY)).kind).toBe('range');
   });
 
-  // BUG: at log10 K = MAX_LOG10_K exactly (308.25471555991675, reached e.g. from E° =
+  // Regression (fixed): at log10 K = MAX_LOG10_K exactly (308.25471555991675, reached e.g. from E° =
   // 18.236148509792226 V with n = 1 at 25 °C) the range check passes but Math.pow(10, log10K)
   // rounds up to Infinity; expected a finite K (≤ 1.7976931348623157e308) or a 'range' error.
-  test.failing(
-    'log K = MAX_LOG10_K gives a finite K or a range error (PRODUCT.md Errors: no ±Infinity)',
-    () => {
-      let k: number;
-      try {
-        k = equilibriumConstantFromLog10(MAX_LOG10_K);
-      } catch (e) {
-        expect(e).toBeInstanceOf(EngineError);
-        return;
-      }
-      expect(Number.isFinite(k)).toBe(true);
-    },
-  );
+  test('log K = MAX_LOG10_K gives a finite K or a range error (PRODUCT.md Errors: no ±Infinity)', () => {
+    let k: number;
+    try {
+      k = equilibriumConstantFromLog10(MAX_LOG10_K);
+    } catch (e) {
+      expect(e).toBeInstanceOf(EngineError);
+      return;
+    }
+    expect(Number.isFinite(k)).toBe(true);
+  });
 
-  // BUG: equilibriumConstantFromLog10(NaN) returns NaN (NaN fails both range comparisons, so
+  // Regression (fixed): equilibriumConstantFromLog10(NaN) returns NaN (NaN fails both range comparisons, so
   // Math.pow(10, NaN) is returned); expected an EngineError. PRODUCT.md: no NaN, ever.
-  test.failing('log K = NaN is an error, not a NaN K (PRODUCT.md Errors)', () => {
+  test('log K = NaN is an error, not a NaN K (PRODUCT.md Errors)', () => {
     expect(engineErrorOf(() => equilibriumConstantFromLog10(Number.NaN))).toBeInstanceOf(EngineError);
   });
 });
@@ -229,12 +226,12 @@ describe('solubility products from two couples', () => {
     expectNear(ksp / 1.746e-10, 1, 5e-4);
   });
 
-  // BUG: the full reaction "AgCl(s) -> Ag+ + Cl-" is not resolved (notFound: "cannot be split
+  // Regression (fixed): the full reaction "AgCl(s) -> Ag+ + Cl-" is not resolved (notFound: "cannot be split
   // into two half-reactions of the potentials table"), although AgCl + e- -> Ag + Cl- minus
   // Ag+ + e- -> Ag gives it exactly; resolveFull keeps only rows whose every species occurs in
   // the reaction, so a species that cancels between the halves (Ag) rules both rows out.
   // Expected E° = 0.22233 − 0.7996 = −0.57727 V, n = 1 (OSX App. L, seen).
-  test.failing.each([
+  test.each([
     ['AgCl(s) -> Ag+ + Cl-', 0.22233 - 0.7996],
     ['AgBr(s) -> Ag+ + Br-', 0.07133 - 0.7996],
   ])('the dissolution %s resolves as a full reaction with E° = %d V', (text, expected) => {
@@ -324,12 +321,12 @@ describe('bad potentials and temperatures', () => {
     },
   );
 
-  // BUG: finite but huge inputs overflow to ±Infinity in the engine: nernstSlopeV(1e308)
+  // Regression (fixed): finite but huge inputs overflow to ±Infinity in the engine: nernstSlopeV(1e308)
   // = Infinity (R·T overflows before the division by F), log10EquilibriumConstant(1e308, 2)
   // = Infinity, gibbsEnergyKJ(1e308, 2) = −Infinity, combineStepPotentialsV([1e308, 1e308],
   // [1, 1]) = Infinity. The worksheet layer turns these into #NUM!, but the engine itself
   // should give a finite number or an EngineError ('range'). PRODUCT.md: no NaN or ±Infinity.
-  test.failing.each([
+  test.each([
     ['nernstSlopeV(1e308 °C)', () => nernstSlopeV(1e308)],
     ['log10EquilibriumConstant(1e308 V, 2)', () => log10EquilibriumConstant(1e308, 2)],
     ['gibbsEnergyKJ(1e308 V, 2)', () => gibbsEnergyKJ(1e308, 2)],

@@ -150,10 +150,10 @@ describe('species: phases', () => {
     expect(phaseOf(s)).toBe(effective);
   });
 
-  // BUG: a hydrated salt without a written phase is inferred aqueous ('aq'); a hydrate such
+  // Regression (fixed): a hydrated salt without a written phase is inferred aqueous ('aq'); a hydrate such
   // as CuSO4·5H2O exists only as a crystal (common practice), and the engine infers the
   // anhydrous CuSO4 as 's'. The water of crystallisation (its H) defeats the "metal salt" rule.
-  test.failing('a hydrate without a written phase is solid, like its anhydrous salt', () => {
+  test('a hydrate without a written phase is solid, like its anhydrous salt', () => {
     expect(phaseOf(parseSpecies('CuSO4'))).toBe('s');
     expect(phaseOf(parseSpecies('CuSO4·5H2O'))).toBe('s');
   });
@@ -214,12 +214,12 @@ describe('formatSpecies: canonical text reads back to the same species', () => {
     expect([back.formula, back.charge, back.phase]).toEqual([s.formula, s.charge, s.phase]);
   });
 
-  // BUG: formatSpecies writes oxovanadium(IV) VO^2+ (formula VO, charge +2) as "VO2+",
+  // Regression (fixed): formatSpecies writes oxovanadium(IV) VO^2+ (formula VO, charge +2) as "VO2+",
   // which reads back as VO2 with charge +1 (dioxovanadium(V)): the one-digit rule makes the
   // 2 a subscript on a polyatomic formula. The same happens to FeOH^2+ ("FeOH2+") and TiO^2+.
   // It corrupts BALANCE output, e.g. "VO^2+ + MnO4- -> VO2^+ + Mn2+" in acid comes back as
   // "5 VO2+ + MnO4- + H2O -> 5 VO2+ + Mn2+ + 2 H+". Expected "VO^2+", got "VO2+".
-  test.failing.each([
+  test.each([
     ['VO^2+', 'VO', 2], // vanadyl, oxovanadium(IV) (common practice)
     ['FeOH^2+', 'FeOH', 2], // hydroxoiron(III) (common practice)
     ['TiO^2+', 'TiO', 2], // titanyl (common practice)
@@ -258,9 +258,9 @@ describe('reactions: coefficients', () => {
     expect(new Set(formatted)).toEqual(new Set(['1/2 O2 + 2 H+ + 2 e- -> H2O']));
   });
 
-  // BUG: the mixed number "1½" reads as 11/2: "½" is rewritten to "1/2 " and the digit before
+  // Regression (fixed): the mixed number "1½" reads as 11/2: "½" is rewritten to "1/2 " and the digit before
   // it is glued on, giving "11/2". Expected 3/2 (or a parse error), got 11/2 silently.
-  test.failing('the mixed number 1½ is 3/2', () => {
+  test('the mixed number 1½ is 3/2', () => {
     expect(formatRational(parseReaction('1½ O2 -> O3').reactants[0]!.coefficient)).toBe('3/2');
   });
 });
@@ -316,7 +316,7 @@ describe('reactions: half-reactions and full reactions are told apart', () => {
     expect(r.reactants[1]!.activity?.value).toBeCloseTo(0.005, 15); // 5 mM = 0.005 mol/L
     expect(r.reactants[2]!.activity).toBeNull();
     const z = parseReaction('Zn2+(aq, 0.1 M) + 2 e- -> Zn(s)');
-    expect(z.reactants[0]!.activity).toEqual({ value: 0.1, unit: 'M' });
+    expect(z.reactants[0]!.activity).toEqual({ value: 0.1, unit: 'M', amount: 0.1 });
   });
 });
 
@@ -368,7 +368,7 @@ describe('cell diagrams (IUPAC Green Book §2.13, from memory: | phase boundary,
     expect(d.bridge).toBe(false);
     expect(d.right).toEqual([]);
     expect(phases(d.left)).toEqual([['Pt 0'], ['H2 0'], ['HCl 0'], ['AgCl 0'], ['Ag 0']]);
-    expect(d.left[2]![0]!.activity).toEqual({ value: 0.01, unit: 'M' });
+    expect(d.left[2]![0]!.activity).toEqual({ value: 0.01, unit: 'M', amount: 0.01 });
   });
 
   test('commas separate species in one phase; inert electrodes are read as species', () => {
@@ -517,18 +517,17 @@ describe('round trip: parse(format(x)) equals x', () => {
     expect(flatten(y)).toEqual(flatten(x));
   });
 
-  // BUG: an inline amount written without a phase gains one in the canonical text:
+  // Regression (fixed): an inline amount written without a phase gains one in the canonical text:
   // "Zn2+(0.1 M)" formats as "Zn2+(aq, 0.1 M)" and "H2(0.5 bar)" as "H2(g, 0.5 bar)", so the
   // re-read species has phase 'aq' / 'g' where the original had none (phaseOf agrees; the
   // written phase field does not). formatNotation's contract is parse(format(x)) equals x.
-  test.failing.each([
-    'Zn2+(0.1 M) + 2 e- -> Zn',
-    'H2(0.5 bar) -> 2 H+ + 2 e-',
-    'Zn | Zn2+(0.1 M) || Cu2+ | Cu',
-  ])('%s keeps "no phase written"', (text) => {
-    const x = parseNotation(text);
-    expect(flatten(parseNotation(formatNotation(x)))).toEqual(flatten(x));
-  });
+  test.each(['Zn2+(0.1 M) + 2 e- -> Zn', 'H2(0.5 bar) -> 2 H+ + 2 e-', 'Zn | Zn2+(0.1 M) || Cu2+ | Cu'])(
+    '%s keeps "no phase written"',
+    (text) => {
+      const x = parseNotation(text);
+      expect(flatten(parseNotation(formatNotation(x)))).toEqual(flatten(x));
+    },
+  );
 });
 
 // ---------------------------------------------------------------------------------------
@@ -590,9 +589,9 @@ describe('parse errors name the position', () => {
     expect(e.message).toContain('Cu2+/Cu');
   });
 
-  // BUG: the empty-text error is the one parse error without a position (position is
+  // Regression (fixed): the empty-text error is the one parse error without a position (position is
   // undefined; every other parse error carries one). Expected position 1, got undefined.
-  test.failing('empty text has a position too', () => {
+  test('empty text has a position too', () => {
     expect(engineErrorOf(() => parseNotation('')).position).toBe(1);
   });
 });

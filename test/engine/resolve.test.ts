@@ -175,12 +175,12 @@ describe('cell diagrams: E = E(right) − E(left)', () => {
     expect(e0(r)).toBeCloseTo(1.0988, 12); // OSX 0.337 − (−0.7618)
   });
 
-  // BUG: a salt solution written with a molar amount but without "(aq)" is inferred solid
+  // Regression (fixed): a salt solution written with a molar amount but without "(aq)" is inferred solid
   // (ZnSO4 is a metal salt) and is not split into its ions, so no electrode fits:
   // resolveReaction('Zn | ZnSO4(0.1 M) || CuSO4(0.1 M) | Cu') throws notFound "No half-reaction
   // in the potentials table fits the left electrode … (Zn, ZnSO4)". The electrolyte module's
   // own documentation lists ZnSO4 without a phase as split. Expected E° = 1.0988 V.
-  test.failing('a salt with a molar amount and no phase is a solution', () => {
+  test('a salt with a molar amount and no phase is a solution', () => {
     const r = resolve('Zn | ZnSO4(0.1 M) || CuSO4(0.1 M) | Cu');
     expect(e0(r)).toBeCloseTo(1.0988, 12); // OSX 0.337 − (−0.7618)
   });
@@ -234,13 +234,13 @@ describe('full reactions are split into two tabulated half-reactions', () => {
     expect(formatReaction(r.left.reaction)).toBe('PbSO4(s) + 2 e- -> Pb + SO4^2-'); // OSX
   });
 
-  // BUG: a full reaction that needs one derived couple fails as ambiguous when the engine
+  // Regression (fixed): a full reaction that needs one derived couple fails as ambiguous when the engine
   // also derives a second copy of a tabulated couple. For "Sn4+ + 2 Fe -> Sn + 2 Fe2+" it
   // pairs the derived Sn4+/Sn (0.00675 V) with the tabulated Fe2+/Fe (−0.447, OSX) and with a
   // derived Fe2+/Fe from Fe3+/Fe and Fe3+/Fe2+ ((3·(−0.037) − 0.771)/2 = −0.441), and throws
   // 'ambiguous' ("splits into half-reactions in more than one way with different E°"). A
   // tabulated row should win over a derived one. Expected E° = 0.00675 + 0.447 = 0.45375, n = 4.
-  test.failing('a tabulated couple is preferred to a derived copy of it', () => {
+  test('a tabulated couple is preferred to a derived copy of it', () => {
     const r = resolve('Sn4+ + 2 Fe -> Sn + 2 Fe2+');
     expect(e0(r)).toBeCloseTo(0.45375, 12); // OSX: (2·0.151 + 2·(−0.1375))/4 − (−0.447)
     expect(electronCount(r)).toBe(4);

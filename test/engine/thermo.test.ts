@@ -220,13 +220,13 @@ describe('bad values are EngineErrors, never NaN or ±Infinity (PRODUCT.md Relia
     );
   });
 
-  // BUG: finite but absurd magnitudes overflow to ±Infinity inside the engine instead of giving
+  // Regression (fixed): finite but absurd magnitudes overflow to ±Infinity inside the engine instead of giving
   // an EngineError: Cr2O7^2-/Cr3+ at pH 1e308 → E = −Infinity (Σ w·log10 a overflows:
   // 14/6 × 1e308); Cu2+/Cu at 1e308 °C → E = −Infinity (R·T overflows in the slope); the same
   // through sweepCases and concentrationCellEmfV. The worksheet layer maps them to #NUM!, but
   // the engine's own contract (PRODUCT.md: no NaN or ±Infinity) is broken. Expected: a finite
   // number or an EngineError ('argument' or 'range').
-  test.failing.each([
+  test.each([
     [
       'potentialV(Cr2O7^2-/Cr3+, pH = 1e308)',
       () =>

@@ -147,6 +147,13 @@ export function combineHalfReactions(reduction: Reaction, oxidation: Reaction): 
   const s1 = scaleStoich(stoichiometry(reduction), div(l, n1));
   const s2 = scaleStoich(stoichiometry(oxidation), neg(div(l, n2)));
   const total = addStoich(s1, s2).filter((e) => !e.species.isElectron);
+  if (total.length === 0) {
+    throw new EngineError(
+      'argument',
+      'The two half-reactions are the same couple: a cell needs two different electrodes (for a concentration cell use CONCCELL).',
+      'reaction',
+    );
+  }
   const ordered = orderCellReaction(total);
   return { reaction: reactionFromStoichiometry(ordered), n: Number(l.num) / Number(l.den) };
 }

@@ -98,7 +98,7 @@ export function parseCellDiagramSource(src: SourceText, argument = 'reaction'): 
 
 function formatPhase(p: CellPhase): string {
   return p
-    .map((c) => (c.activity ? withActivity(c.species, c.activity.value) : formatSpecies(c.species)))
+    .map((c) => (c.activity ? withActivity(c.species, c.activity) : formatSpecies(c.species)))
     .join(', ');
 }
 

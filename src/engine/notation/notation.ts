@@ -38,6 +38,7 @@ export function parseNotation(text: string, argument = 'reaction'): Notation {
       'parse',
       `${argument} is empty: give a half-reaction ("Cu2+ + 2e- -> Cu"), a couple ("Cu2+/Cu"), a cell diagram ("Zn | Zn2+ || Cu2+ | Cu") or a reaction.`,
       argument,
+      1,
     );
   }
   const src = new SourceText(text);

@@ -173,21 +173,40 @@ export function isHalfReaction(r: Reaction): boolean {
 function formatTerm(term: Term): string {
   const c = eq(term.coefficient, ONE) ? '' : formatRational(term.coefficient) + ' ';
   let s = formatSpecies(term.species);
-  if (term.activity) s = withActivity(term.species, term.activity.value, s);
+  if (term.activity) s = withActivity(term.species, term.activity, s);
   return c + s;
 }
 
-/** Append an inline activity to a formatted species: "Zn2+(aq, 0.1 M)", "H2(g, 0.5 bar)". */
+/**
+ * Append an inline activity to a formatted species. The phase is written only
+ * where the species has one written (so the text reads back the same), unless
+ * `showPhase` asks for the effective phase (cell diagrams for people):
+ * "Zn2+(0.1 M)", "Zn2+(aq, 0.1 M)", "H2(g, 0.5 bar)".
+ *
+ * @param activity a number (activity or bar) or the inline activity as written
+ */
 export function withActivity(
   species: Species,
-  value: number,
+  activity: number | InlineActivity,
   formatted = formatSpecies(species, false),
+  showPhase = false,
 ): string {
   const base = formatted.replace(/\((s|l|g|aq)\)$/, '');
   const phase = phaseOf(species);
-  const unit = phase === 'g' ? ' bar' : phase === 'aq' ? ' M' : '';
-  const p = species.phase ?? (phase === 'g' || phase === 'aq' ? phase : null);
-  return p ? `${base}(${p}, ${formatNumber(value)}${unit})` : `${base}(${formatNumber(value)})`;
+  let amount: string;
+  if (typeof activity === 'number') {
+    const unit = phase === 'g' ? ' bar' : phase === 'aq' ? ' M' : '';
+    amount = `${showPhase ? formatNumberForPeople(activity) : formatNumber(activity)}${unit}`;
+  } else {
+    amount = `${formatNumber(activity.amount)}${activity.unit ? ' ' + activity.unit : ''}`;
+  }
+  const p = species.phase ?? (showPhase && (phase === 'g' || phase === 'aq') ? phase : null);
+  return p ? `${base}(${p}, ${amount})` : `${base}(${amount})`;
+}
+
+/** A number with at most 12 significant digits, for text meant to be read. */
+export function formatNumberForPeople(x: number): string {
+  return String(Number(x.toPrecision(12)));
 }
 
 /** Shortest round-tripping text of a number. */

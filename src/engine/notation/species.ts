@@ -37,6 +37,8 @@ export interface InlineActivity {
   readonly value: number;
   /** The unit as written ("M", "bar", "atm", … or "" for a bare number). */
   readonly unit: string;
+  /** The number as written, before unit conversion (so canonical text keeps "10 µM"). */
+  readonly amount: number;
 }
 
 export const ELECTRON: Species = Object.freeze({ formula: 'e', charge: -1, phase: null, isElectron: true });
@@ -109,6 +111,7 @@ export function phaseOf(s: Species): Phase | null {
   if (GAS_FORMULAS.has(s.formula)) return 'g';
   const els = elementsOf(s);
   if (els.size === 1) return 's'; // elements: metals, C, S, P, I2 …
+  if (/[·*]/.test(s.formula)) return 's'; // hydrates: CuSO4·5H2O
   const symbols = Array.from(els.keys());
   // salts, oxides and hydroxides of metals: solid (AgCl, PbSO4, MnO2, Fe(OH)3, Hg2Cl2)
   if (symbols.some((el) => isMetal(el)) && !symbols.includes('H')) return 's';
@@ -196,10 +199,10 @@ function readChargeSuffix(body: string, signs: string): { formula: string; charg
   if (!m) return null;
   const sgn = m[2] === '+' ? 1 : -1;
   if (m[1] !== '') {
-    // explicit magnitude before the sign, e.g. body "Fe", signs "3+": only used by formatting
-    const mag = parseInt(m[1] as string, 10);
-    const split = splitTrailingDigits(body + m[1], sgn);
-    return split ? { formula: split.formula, charge: split.mag * sgn } : { formula: body, charge: mag * sgn };
+    // "Fe" + "3+" as the parser would read "Fe3+": the digits join the formula first
+    const joined = body + m[1];
+    const split = splitTrailingDigits(joined, sgn);
+    return split ? { formula: split.formula, charge: split.mag * sgn } : { formula: joined, charge: sgn };
   }
   const split = splitTrailingDigits(body, sgn);
   return split ? { formula: split.formula, charge: split.mag * sgn } : { formula: body, charge: sgn };
@@ -387,7 +390,7 @@ function readAmount(src: SourceText, at: number, text: string, argument: string)
   if (!u) src.fail(at, `unknown unit "${unit}"; use one of ${INLINE_UNITS.join(', ')}`, argument);
   if (!(value > 0) || !Number.isFinite(value))
     src.fail(at, `an activity or pressure must be positive; got ${m[1] as string}`, argument);
-  return { value: value * u.factor, unit };
+  return { value: value * u.factor, unit, amount: value };
 }
 
 /**

@@ -72,7 +72,17 @@ export function normalizeNotation(input: string): { text: string; origin: number
     }
     const frac = FRACTIONS[ch];
     if (frac !== undefined) {
-      push(frac + ' ', at);
+      // a mixed number "1½" is 3/2: fold the whole part written just before
+      const digits = /(\d+)$/.exec(text);
+      if (digits) {
+        const run = digits[1] as string;
+        const whole = parseInt(run, 10);
+        const [num, den] = frac.split('/').map((x) => parseInt(x, 10)) as [number, number];
+        const start = origin[origin.length - run.length] ?? at;
+        text = text.slice(0, -run.length);
+        origin.length -= run.length;
+        push(`${whole * den + num}/${den} `, start);
+      } else push(frac + ' ', at);
       continue;
     }
     switch (ch) {

@@ -2,7 +2,7 @@
  * Half-reactions as vectors per electron, for exact matching and Gibbs-additive
  * combination of table rows.
  */
-import { type Rational, div, isZero, eq, mul, add, neg, ZERO, sign } from '../rational';
+import { type Rational, div, isZero, eq, mul, add, neg, ZERO, ONE, sign, lcm, gcd, rat } from '../rational';
 import { type Species, speciesKey, sameSpecies, formatSpecies } from '../notation/species';
 import {
   type StoichEntry,
@@ -90,9 +90,25 @@ export function fillPhases(into: StoichMap, from: StoichMap): StoichMap {
 /** A reaction from a map, reactants first (in map order). */
 export function mapToReaction(m: StoichMap): Reaction {
   const entries: StoichEntry[] = [];
-  for (const v of m.values()) if (sign(v.nu) < 0) entries.push(v);
+  for (const v of m.values()) if (sign(v.nu) < 0 && !v.species.isElectron) entries.push(v);
+  for (const v of m.values()) if (sign(v.nu) < 0 && v.species.isElectron) entries.push(v);
   for (const v of m.values()) if (sign(v.nu) > 0) entries.push(v);
   return reactionFromStoichiometry(entries);
+}
+
+/**
+ * The map scaled to its smallest whole coefficients (`2 Fe3+ + 2 e- -> 2 Fe2+` →
+ * `Fe3+ + e- -> Fe2+`), so an electrode's electron count does not depend on how a
+ * table row happens to be scaled.
+ */
+export function smallestWholeMap(m: StoichMap): StoichMap {
+  let l = 1n;
+  for (const v of m.values()) l = lcm(l, v.nu.den);
+  let g = 0n;
+  for (const v of m.values()) g = gcd(g, (v.nu.num * l) / v.nu.den);
+  if (g === 0n) return m;
+  const f = rat(l, g);
+  return eq(f, ONE) ? m : scaleMap(m, f);
 }
 
 /** Map of a parsed reaction. */

@@ -44,6 +44,27 @@ export interface PotentialTable {
   readonly rows: readonly TableRow[];
   readonly userRows: readonly TableRow[];
   readonly problems: readonly TableProblem[];
+  /** user rows that could not be used but whose half-reaction could be read: a lookup that needs one is an error */
+  readonly brokenRows: readonly BrokenRow[];
+}
+
+/** A user row that names a readable half-reaction but cannot be used (bad E°, unbalanced …). */
+export interface BrokenRow {
+  readonly row: number;
+  readonly perElectron: StoichMap;
+  readonly message: string;
+}
+
+function readablePerElectron(text: string): StoichMap | null {
+  try {
+    const n = parseNotation(text, 'half-reaction');
+    if (n.kind !== 'half') return null;
+    const map = reactionMap(n.reaction);
+    const e = electronsOf(map);
+    return sign(e) > 0 ? scaleMap(map, div({ num: 1n, den: 1n }, e)) : null;
+  } catch {
+    return null;
+  }
 }
 
 /** Describe a row's origin for provenance and messages. */
@@ -110,7 +131,8 @@ const BUILTIN_TABLE: { value: PotentialTable | null } = { value: null };
 
 /** The table with only built-in rows. */
 export function defaultTable(): PotentialTable {
-  if (!BUILTIN_TABLE.value) BUILTIN_TABLE.value = { rows: builtinTable(), userRows: [], problems: [] };
+  if (!BUILTIN_TABLE.value)
+    BUILTIN_TABLE.value = { rows: builtinTable(), userRows: [], problems: [], brokenRows: [] };
   return BUILTIN_TABLE.value;
 }
 
@@ -154,7 +176,18 @@ export function readUserTable(cells: readonly (readonly Cell[])[] | null | undef
   if (!cells || cells.length === 0) return defaultTable();
   const userRows: TableRow[] = [];
   const problems: TableProblem[] = [];
+  const brokenRows: BrokenRow[] = [];
   cells.forEach((raw, idx) => {
+    const before = problems.length;
+    readRow(raw, idx);
+    const p = problems[before];
+    if (p && problems.length > before) {
+      const t = raw?.[0];
+      const per = typeof t === 'string' ? readablePerElectron(t.trim()) : null;
+      if (per) brokenRows.push({ row: idx + 1, perElectron: per, message: p.message });
+    }
+  });
+  function readRow(raw: readonly Cell[] | undefined, idx: number): void {
     const rowNo = idx + 1;
     const row = raw ?? [];
     const blank = row.every((c) => isBlankCell(c) || c === 0 || c === false);
@@ -201,8 +234,9 @@ export function readUserTable(cells: readonly (readonly Cell[])[] | null | undef
       if (!isEngineError(e)) throw e;
       problems.push({ row: rowNo, message: `row ${rowNo}: ${e.message}` });
     }
-  });
-  // duplicates within the user's rows
+  }
+  // duplicates within the user's rows; a later duplicate with the same E° is dropped from lookups
+  const dropped = new Set<TableRow>();
   for (let i = 0; i < userRows.length; i++) {
     for (let j = i + 1; j < userRows.length; j++) {
       const a = userRows[i]!;
@@ -214,13 +248,15 @@ export function readUserTable(cells: readonly (readonly Cell[])[] | null | undef
           row: rb,
           message: `rows ${ra} and ${rb} give the same half-reaction (${formatReaction(a.reaction)})${a.e0V === b.e0V ? '' : ` with different E° (${a.e0V} V and ${b.e0V} V)`}; keep one.`,
         });
+        if (a.e0V === b.e0V && a.dE0dTmVperK === b.dE0dTmVperK) dropped.add(b);
       }
     }
   }
   const shadowed = (r: TableRow) =>
     userRows.some((u) => proportionality(u.perElectron, r.perElectron) !== null);
-  const rows = [...userRows, ...builtinTable().filter((r) => !shadowed(r))];
-  return { rows, userRows, problems };
+  const usable = userRows.filter((r) => !dropped.has(r));
+  const rows = [...usable, ...builtinTable().filter((r) => !shadowed(r))];
+  return { rows, userRows, problems, brokenRows };
 }
 
 /** Problems that make a user row unusable for a lookup that needs it: duplicate rows with different E°. */

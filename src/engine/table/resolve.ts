@@ -18,7 +18,7 @@ import {
 import { splitElectrolyte } from '../notation/electrolytes';
 import { type Reaction, formatReaction } from '../notation/reaction';
 import { type Notation, parseNotation } from '../notation/notation';
-import { type CellDiagram, type CellPhase } from '../notation/cellDiagram';
+import { type CellDiagram, type CellPhase, type CellSpecies } from '../notation/cellDiagram';
 import { type Couple } from '../notation/couple';
 import { INERT_ELECTRODES } from '../notation/elements';
 import { assertBalanced } from '../balance/balance';
@@ -34,6 +34,7 @@ import {
   mapToReaction,
   fillPhases,
   sideKeys,
+  smallestWholeMap,
 } from './halfReaction';
 
 /** A table row's share in a resolved standard potential: E° = Σ weight·E°(row). */
@@ -193,9 +194,12 @@ function derivedCandidates(rows: readonly TableRow[], accept: (m: StoichMap) => 
       }
     }
   }
-  // keep one of each proportional result
+  // keep one of each proportional result, and none that only re-derives a tabulated row
   const unique: Candidate[] = [];
-  for (const c of out) if (!unique.some((u) => proportionality(u.perElectron, c.perElectron))) unique.push(c);
+  for (const c of out) {
+    if (rows.some((r) => proportionality(r.perElectron, c.perElectron))) continue;
+    if (!unique.some((u) => proportionality(u.perElectron, c.perElectron))) unique.push(c);
+  }
   return unique;
 }
 
@@ -252,10 +256,12 @@ function toHalf(
       inline,
     };
   }
+  const m = smallestWholeMap(c.map);
+  const e = electronsOf(m);
   return {
-    map: c.map,
-    reaction: mapToReaction(c.map),
-    n: c.n,
+    map: m,
+    reaction: mapToReaction(m),
+    n: Number(e.num) / Number(e.den),
     shares: c.shares,
     derivation: c.derivation,
     inline,
@@ -278,6 +284,7 @@ function resolveHalfMap(
     );
   }
   const perE = scaleMap(target, div(ONE, e));
+  refuseBroken(table, (m) => proportionality(perE, m) !== null, text);
   const direct = table.rows.filter((r) => proportionality(perE, r.perElectron) !== null).map(fromRow);
   const chosen = pickOne(direct, text, table);
   if (chosen) return toHalf(chosen, target, inline, table);
@@ -289,6 +296,25 @@ function resolveHalfMap(
   const d = pickOne(derived, text, table);
   if (d) return toHalf(d, target, inline, table);
   throw notFound(text);
+}
+
+/**
+ * A lookup that a broken row of the user's table would answer is an error: the
+ * user meant that row, and a silent fall-back to the built-in value would hide it.
+ */
+function refuseBroken(
+  table: PotentialTable,
+  matches: (perElectron: StoichMap) => boolean,
+  text: string,
+): void {
+  const broken = table.brokenRows.find((b) => matches(b.perElectron));
+  if (broken && !table.userRows.some((u) => matches(u.perElectron))) {
+    throw new EngineError(
+      'argument',
+      `${quote(text)} needs row ${broken.row} of your table, which cannot be used: ${broken.message.replace(/^row \d+:?\s*/, '')} Fix the row (CHECKTABLE lists every problem).`,
+      'table',
+    );
+  }
 }
 
 function notFound(text: string): EngineError {
@@ -353,6 +379,7 @@ function bestFit(cs: Candidate[], fit: (m: StoichMap) => number | null): Candida
 
 function resolveCouple(c: Couple, text: string, table: PotentialTable): ResolvedHalf {
   const fit = (m: StoichMap) => coupleFit(c, m);
+  refuseBroken(table, (m) => fit(m) !== null, text);
   const user = bestFit(table.userRows.filter((r) => table.rows.includes(r)).map(fromRow), fit);
   const direct = user.length > 0 ? user : bestFit(table.rows.map(fromRow), fit);
   const chosen = pickOne(direct, text, table);
@@ -381,6 +408,14 @@ function combineCell(right: ResolvedHalf, left: ResolvedHalf): { map: StoichMap;
   return { map: m, n: toNumber(l) };
 }
 
+const SOLUTE_UNITS = new Set(['M', 'mol/L', 'mol/l', 'mol/dm3', 'mM', 'uM', 'µM', 'μM', 'm', 'mol/kg']);
+
+/** A species in solution: aqueous (written or inferred), or given with a concentration unit and no phase. */
+function isSolutionSpecies(c: CellSpecies): boolean {
+  if (phaseOf(c.species) === 'aq') return true;
+  return c.species.phase === null && c.activity !== null && SOLUTE_UNITS.has(c.activity.unit);
+}
+
 interface SideSet {
   keys: Map<string, Species>;
   inline: Map<string, number>;
@@ -392,7 +427,7 @@ function sideSet(phases: readonly CellPhase[]): SideSet {
   for (const p of phases)
     for (const cs of p) {
       const ions =
-        cs.species.charge === 0 && phaseOf(cs.species) === 'aq' ? splitElectrolyte(cs.species.formula) : null;
+        cs.species.charge === 0 && isSolutionSpecies(cs) ? splitElectrolyte(cs.species.formula) : null;
       if (ions) {
         for (const { ion, count } of ions) {
           const k = speciesKey(ion);
@@ -454,7 +489,7 @@ function resolveElectrode(side: SideSet, text: string, which: string, table: Pot
 }
 
 function splitNoBridge(phases: readonly CellPhase[]): { left: CellPhase[]; right: CellPhase[] } {
-  const isSolution = (p: CellPhase) => p.some((c) => phaseOf(c.species) === 'aq');
+  const isSolution = (p: CellPhase) => p.some(isSolutionSpecies);
   const first = phases.findIndex(isSolution);
   let last = -1;
   phases.forEach((p, i) => {
@@ -483,6 +518,9 @@ function resolveDiagram(d: CellDiagram, text: string, table: PotentialTable): Re
 
 // ---------------------------------------------------------------------------
 // full reactions
+
+/** Splittings of a full reaction whose E° agree within this are taken as one (V). */
+const AGREEMENT_V = 1e-3;
 
 function resolveFull(r: Reaction, text: string, table: PotentialTable): Resolved {
   assertBalanced(r, text);
@@ -515,7 +553,10 @@ function resolveFull(r: Reaction, text: string, table: PotentialTable): Resolved
       }
     return found;
   };
+  // tier 1: rows whose species all occur in the reaction; tier 2: rows with a species that
+  // cancels between the two halves (Ag in AgCl -> Ag+ + Cl-); tier 3: a derived half-reaction
   let found = tryPairs(direct, false);
+  if (found.length === 0) found = tryPairs(rows.map(fromRow), false);
   if (found.length === 0) {
     const derived = derivedCandidates(rows, inReaction);
     found = tryPairs([...direct, ...derived], true);
@@ -527,14 +568,17 @@ function resolveFull(r: Reaction, text: string, table: PotentialTable): Resolved
       'reaction',
     );
   }
-  // prefer decompositions using user rows; then require one E°
+  // prefer decompositions using user rows; n is the smallest electron count that reproduces
+  // the reaction; splittings with that n must agree on E°
   const userFound = found.filter((f) =>
     [...f.red.shares, ...f.ox.shares].some((s) => s.row.origin.kind === 'user'),
   );
-  const pool = userFound.length > 0 ? userFound : found;
-  // decompositions must agree on ΔG° (n·E°); the electron count is the smallest that reproduces the reaction
-  const nE0 = pool.map((f) => toNumber(f.k) * (candidateE0(f.red) - candidateE0(f.ox)));
-  const distinct = pool.filter((_, i) => Math.abs(nE0[i]! - nE0[0]!) > 1e-9);
+  const pool0 = userFound.length > 0 ? userFound : found;
+  const minK = Math.min(...pool0.map((f) => toNumber(f.k)));
+  const pool = pool0.filter((f) => toNumber(f.k) === minK);
+  const e0s = pool.map((f) => candidateE0(f.red) - candidateE0(f.ox));
+  // splittings that agree within 1 mV (the rounding of published values) are one answer
+  const distinct = pool.filter((_, i) => Math.abs(e0s[i]! - e0s[0]!) > AGREEMENT_V);
   if (distinct.length > 0) {
     const list = pool
       .slice(0, 4)
@@ -550,7 +594,6 @@ function resolveFull(r: Reaction, text: string, table: PotentialTable): Resolved
     .slice()
     .sort(
       (a, b) =>
-        toNumber(a.k) - toNumber(b.k) ||
         Number(!!a.red.derivation || !!a.ox.derivation) - Number(!!b.red.derivation || !!b.ox.derivation),
     )[0]!;
   const k = toNumber(f.k);

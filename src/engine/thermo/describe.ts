@@ -65,7 +65,9 @@ function electrodePhases(
     const p = phaseOf(s);
     const a = activityOf(key, s, side);
     const text =
-      a !== null && (p === 'aq' || p === 'g') ? withActivity(s, a) : formatSpecies({ ...s, phase: p }, true);
+      a !== null && (p === 'aq' || p === 'g')
+        ? withActivity(s, a, formatSpecies(s, false), true)
+        : formatSpecies({ ...s, phase: p }, true);
     if (p === 'aq') solution.push(text);
     else if (p === 'g') gases.push(text);
     else if (p === 'l') liquids.push(text);

@@ -32,6 +32,22 @@ export function checkElectrons(n: number, argName = 'n'): number {
   return n;
 }
 
+/**
+ * A result that overflowed float64 is a range error, never ±Infinity.
+ *
+ * @example
+ * finiteResult(1, 'E') // 1
+ */
+export function finiteResult(x: number, what: string): number {
+  if (!Number.isFinite(x)) {
+    throw new EngineError(
+      'range',
+      `${what} is beyond the number range (the inputs are far outside any real system); check them.`,
+    );
+  }
+  return x;
+}
+
 function checkPotential(e: number, argName: string): number {
   if (!Number.isFinite(e))
     throw new EngineError('argument', `${argName} must be a potential in volts; got ${String(e)}.`, argName);
@@ -48,7 +64,7 @@ function checkPotential(e: number, argName: string): number {
 export function log10EquilibriumConstant(e0V: number, n: number, tempC = 25): number {
   checkPotential(e0V, 'E0');
   checkElectrons(n);
-  return (n * e0V) / slopePerElectronAtKelvin(kelvinFromCelsius(tempC));
+  return finiteResult((n * e0V) / slopePerElectronAtKelvin(kelvinFromCelsius(tempC)), 'log10 K');
 }
 
 /** The largest log10 K whose K is a float64 (log10 of 1.7976931348623157e308). */
@@ -64,7 +80,18 @@ export const MIN_LOG10_K = Math.log10(2.2250738585072014e-308);
  * equilibriumConstantFromLog10(9.838) // 6.89e9
  */
 export function equilibriumConstantFromLog10(log10K: number): number {
-  if (log10K > MAX_LOG10_K || log10K < MIN_LOG10_K) {
+  if (Number.isNaN(log10K)) {
+    throw new EngineError('argument', 'log10 K is not a number; check E° and n.', 'reaction_or_E0');
+  }
+  const k = Math.pow(10, log10K);
+  if (!Number.isFinite(k) || log10K > MAX_LOG10_K || log10K < MIN_LOG10_K) {
+    if (!Number.isFinite(log10K)) {
+      throw new EngineError(
+        'range',
+        `log10 K is ${log10K > 0 ? '+' : '−'}∞; check E° and n.`,
+        'reaction_or_E0',
+      );
+    }
     const value = new Decimal(10).pow(new Decimal(log10K)).toExponential(4);
     throw new EngineError(
       'range',
@@ -72,7 +99,7 @@ export function equilibriumConstantFromLog10(log10K: number): number {
       'reaction_or_E0',
     );
   }
-  return Math.pow(10, log10K);
+  return k;
 }
 
 /**
@@ -84,7 +111,7 @@ export function equilibriumConstantFromLog10(log10K: number): number {
 export function gibbsEnergyKJ(eV: number, n: number): number {
   checkPotential(eV, 'E');
   checkElectrons(n);
-  return (-n * FARADAY_C_PER_MOL * eV) / 1000;
+  return finiteResult((-n * FARADAY_C_PER_MOL * eV) / 1000, 'ΔG');
 }
 
 /**
@@ -92,7 +119,7 @@ export function gibbsEnergyKJ(eV: number, n: number): number {
  *
  * Domain: equal-length lists, each n a positive integer.
  * @example
- * combineStepPotentialsV([0.771, -0.447], [1, 2]) // Fe3+/Fe: −0.0377 V
+ * combineStepPotentialsV([0.771, -0.447], [1, 2]) // Fe3+/Fe: −0.041 V
  */
 export function combineStepPotentialsV(potentialsV: readonly number[], electrons: readonly number[]): number {
   if (potentialsV.length !== electrons.length) {
@@ -112,5 +139,5 @@ export function combineStepPotentialsV(potentialsV: readonly number[], electrons
     num += n * e;
     den += n;
   });
-  return num / den;
+  return finiteResult(num / den, 'the combined E°');
 }

@@ -15,6 +15,7 @@ import {
   isGas,
   formatSpecies,
   parseSpecies,
+  phaseOf,
 } from '../notation/species';
 import { type Resolved, type ResolvedHalf, standardPotentialV } from '../table/resolve';
 import { slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
@@ -206,8 +207,16 @@ function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Bind
     weight[i] = t.weight;
     gas[i] = t.gas ? 1 : 0;
     labels.push((t.side ? `${t.side}:` : '') + formatSpecies(t.species, false));
+    const termPhase = phaseOf(t.species);
     const find = (kind: 'species' | 'pH', side: 'left' | 'right' | null) =>
-      parsed.findIndex((h) => h.kind === kind && h.key === t.key && h.side === side);
+      parsed.findIndex(
+        (h) =>
+          h.kind === kind &&
+          h.key === t.key &&
+          h.side === side &&
+          // a header with a written phase binds only to that phase (Cl2(aq) is not Cl2(g))
+          !(h.species?.phase && termPhase && h.species.phase !== termPhase),
+      );
     let col = -1;
     let ph = false;
     if (t.side) {
@@ -302,7 +311,10 @@ function describe(v: unknown): string {
 export function potentialV(b: Binding, row: ArrayLike<unknown>, tempC: number): number {
   const tempK = kelvinFromCelsius(tempC);
   const s = slopePerElectronAtKelvin(tempK);
-  return standardPotentialV(b.form.resolved, tempC) - s * weightedLogActivity(b, row);
+  const e = standardPotentialV(b.form.resolved, tempC) - s * weightedLogActivity(b, row);
+  if (!Number.isFinite(e))
+    throw new EngineError('range', 'E is beyond the number range; check the values.', 'values');
+  return e;
 }
 
 /** log10 Q for one case. */

@@ -4,7 +4,7 @@
  * bad row does not stop the others. The hot loop allocates nothing per case.
  */
 import { EngineError } from '../errors';
-import { ZERO_CELSIUS_K, slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
+import { ZERO_CELSIUS_K, MAX_TEMP_C, slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
 import { type Resolved, halfE0V25, halfSlopeMvPerK } from '../table/resolve';
 import { type Binding, weightedLogActivity } from './nernstForm';
 
@@ -84,17 +84,18 @@ export function sweepCases(
     try {
       const row = rows.length === 1 ? rows[0]! : (rows[i] ?? empty);
       const sum = weightedLogActivity(b, row);
-      if (quantity === 'log10Q') {
-        values[i] = n * sum;
-        continue;
-      }
-      if (fixedT) values[i] = fixedE0 - fixedS * sum;
+      let x: number;
+      if (quantity === 'log10Q') x = n * sum;
+      else if (fixedT) x = fixedE0 - fixedS * sum;
       else {
         const t = (tempC as (i: number) => number)(i);
         const tK = t + ZERO_CELSIUS_K;
-        if (!(tK > 0) || !Number.isFinite(t)) kelvinFromCelsius(t);
-        values[i] = lin.e0V25 + lin.slopeVPerK * (t - 25) - slopePerElectronAtKelvin(tK) * sum;
+        if (!(tK > 0) || !(t <= MAX_TEMP_C)) kelvinFromCelsius(t);
+        x = lin.e0V25 + lin.slopeVPerK * (t - 25) - slopePerElectronAtKelvin(tK) * sum;
       }
+      if (!Number.isFinite(x))
+        throw new EngineError('range', 'The result is beyond the number range; check the values.', 'values');
+      values[i] = x;
     } catch (e) {
       if (!(e instanceof EngineError)) throw e;
       (errors ??= new Map()).set(i, e);
