@@ -116,9 +116,9 @@ module.exports = async (env = {}, argv = {}) => {
   const serving = Boolean(env.WEBPACK_SERVE);
   // `npm start -- --env http` skips the certificate (a container, a browser-only check).
   const https = serving && !env.http ? await devServerHttpsOptions() : null;
-  if (serving && !https) {
+  if (serving && env.http) {
     console.warn(
-      '[potentia] Dev server on http://localhost:3000/ (Excel needs https: see README, "Install into Excel").',
+      '[potentia] Dev server on http://localhost:3000/ as asked; Excel needs https (README, "Install into Excel").',
     );
   }
 
@@ -181,7 +181,7 @@ module.exports = async (env = {}, argv = {}) => {
     devServer: {
       port: DEV_PORT,
       host: 'localhost',
-      allowedHosts: 'all',
+      // Excel on the web fetches functions.json from its own origin.
       headers: { 'Access-Control-Allow-Origin': '*' },
       static: { directory: path.resolve(__dirname, 'dist') },
       server: https ? { type: 'https', options: https } : 'http',
