@@ -2,13 +2,15 @@
  * Redox couples written `Ox/Red`: `Cu2+/Cu`, `Fe3+/Fe2+`, `AgCl/Ag`,
  * `MnO4-/Mn2+`. Several species on one side are separated by "," or "+".
  */
-import { type Species, scanSpecies, formatSpecies } from './species';
+import { type Species, scanSpecies, formatSpecies, speciesKey } from './species';
 import { SourceText } from './source';
 
 /** A couple: the oxidised and reduced species as named. */
 export interface Couple {
   readonly oxidized: readonly Species[];
   readonly reduced: readonly Species[];
+  /** inline activities written in the couple, by species key ("Cu2+(aq, 5 mM)/Cu") */
+  readonly activities?: ReadonlyMap<string, number>;
 }
 
 /** Index of the couple's slash in normalised text (outside brackets, not a fraction), or −1. */
@@ -30,7 +32,13 @@ export function coupleSlashAt(t: string): number {
   return found;
 }
 
-function parseList(src: SourceText, from: number, to: number, argument: string): Species[] {
+function parseList(
+  src: SourceText,
+  from: number,
+  to: number,
+  argument: string,
+  activities: Map<string, number>,
+): Species[] {
   const out: Species[] = [];
   let i = from;
   const t = src.text;
@@ -39,6 +47,7 @@ function parseList(src: SourceText, from: number, to: number, argument: string):
     if (i >= to) src.fail(i, 'expected a species', argument);
     const s = scanSpecies(src, i, argument);
     out.push(s.species);
+    if (s.activity) activities.set(speciesKey(s.species), s.activity.value);
     i = s.end;
     while (i < to && t[i] === ' ') i++;
     if (i >= to) break;
@@ -71,9 +80,10 @@ export function parseCoupleSource(src: SourceText, argument = 'reaction'): Coupl
       argument,
     );
   if (at < 0) src.fail(0, 'expected a couple written Ox/Red, e.g. "Cu2+/Cu"', argument);
-  const oxidized = parseList(src, 0, at, argument);
-  const reduced = parseList(src, at + 1, src.text.length, argument);
-  return { oxidized, reduced };
+  const activities = new Map<string, number>();
+  const oxidized = parseList(src, 0, at, argument, activities);
+  const reduced = parseList(src, at + 1, src.text.length, argument, activities);
+  return { oxidized, reduced, activities };
 }
 
 /**

@@ -48,6 +48,13 @@ export function countElements(formula: string, offset = 0, fullText = formula): 
       if (ch === '(' || ch === '[') {
         const close = ch === '(' ? ')' : ']';
         const start = i;
+        const roman = /^\((I{1,3}|IV|VI{0,3}|IX)\)/.exec(formula.slice(i));
+        if (roman) {
+          fail(
+            `"${roman[0]}" looks like an oxidation state in Roman numerals, which is not read; write the ion with its charge, e.g. "Fe3+" for iron(III)`,
+            start,
+          );
+        }
         i++;
         const inner = parseGroup(close);
         if (formula[i] !== close) fail(`"${ch}" opened here is not closed`, start);

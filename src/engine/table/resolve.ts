@@ -383,7 +383,7 @@ function resolveCouple(c: Couple, text: string, table: PotentialTable): Resolved
   const user = bestFit(table.userRows.filter((r) => table.rows.includes(r)).map(fromRow), fit);
   const direct = user.length > 0 ? user : bestFit(table.rows.map(fromRow), fit);
   const chosen = pickOne(direct, text, table);
-  if (chosen) return toHalf(chosen, null, new Map(), table);
+  if (chosen) return toHalf(chosen, null, c.activities ?? new Map(), table);
   const els = new Set<string>();
   for (const s of [...c.oxidized, ...c.reduced])
     for (const el of elementsOf(s).keys()) if (el !== 'H' && el !== 'O') els.add(el);
@@ -392,7 +392,7 @@ function resolveCouple(c: Couple, text: string, table: PotentialTable): Resolved
     fit,
   );
   const d = pickOne(derived, text, table);
-  if (d) return toHalf(d, null, new Map(), table);
+  if (d) return toHalf(d, null, c.activities ?? new Map(), table);
   throw notFound(text);
 }
 

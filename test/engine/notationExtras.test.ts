@@ -1,0 +1,40 @@
+/**
+ * Notation edge cases added after review: Roman-numeral oxidation states are
+ * refused rather than misread, and activities written inside a couple are used.
+ */
+import {
+  parseNotation,
+  compiledReaction,
+  bindSpecies,
+  potentialV,
+  EngineError,
+  nernstSlopeV,
+} from '../../src/engine';
+
+describe('Roman numerals are refused, not read as iodine', () => {
+  test.each(['Fe(III) + e- -> Fe(II)', 'Cr(VI)/Cr(III)', 'Fe(II)/Fe'])('%s', (text) => {
+    let err: unknown;
+    try {
+      parseNotation(text);
+    } catch (e) {
+      err = e;
+    }
+    expect(err).toBeInstanceOf(EngineError);
+    expect((err as EngineError).kind).toBe('parse');
+    expect((err as EngineError).message).toMatch(/Roman numerals/);
+  });
+
+  test('a real iodine group in brackets still reads', () => {
+    // common practice: Pb(IO3)2 has two iodate groups
+    expect(() => parseNotation('Pb(IO3)2 + 2 e- -> Pb + 2 IO3-')).not.toThrow();
+  });
+});
+
+describe('activities written inside a couple', () => {
+  test('Cu2+(aq, 5 mM)/Cu uses a(Cu2+) = 0.005', () => {
+    const form = compiledReaction('Cu2+(aq, 5 mM)/Cu', null);
+    const e = potentialV(bindSpecies(form, []), [], 25);
+    // OSX Appendix L (seen): E° = 0.337 V; Nernst slope derived from the SI exact constants
+    expect(e).toBeCloseTo(0.337 + (nernstSlopeV(25) / 2) * Math.log10(0.005), 12);
+  });
+});
