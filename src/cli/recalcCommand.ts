@@ -244,7 +244,11 @@ export async function recalcCommand(argv: string[], io: Io): Promise<number> {
   try {
     summary = recalcWorkbook(wb, progress);
     progress.phase('saving', 1);
-    await wb.xlsx.writeFile(output);
+    try {
+      await wb.xlsx.writeFile(output);
+    } catch (e) {
+      throw new UsageError(`cannot write ${output} (${e instanceof Error ? e.message : String(e)})`);
+    }
     progress.tick(1);
   } finally {
     progress.stop();
