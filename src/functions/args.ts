@@ -17,6 +17,8 @@ export function asGrid(arg: Arg): Grid | null {
   if (arg === undefined || arg === null) return null;
   if (Array.isArray(arg)) {
     if (arg.length === 0) return null;
+    // keep the host's array where it is already a grid, so identity-based caches downstream hold
+    if (arg.every((row) => Array.isArray(row))) return arg;
     return arg.map((row) => (Array.isArray(row) ? row : [row as Scalar]));
   }
   return [[arg]];
