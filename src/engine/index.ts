@@ -64,6 +64,8 @@ export {
 } from './table/resolve';
 export { tableFor, compiledReaction, resolvedReaction, clearCaches } from './cache';
 
+export { filterPotentials, type FilterResult, type FilterRule } from './table/filter';
+
 // thermodynamics
 export {
   type NernstForm,

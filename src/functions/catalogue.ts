@@ -37,10 +37,9 @@ import {
   describeSource,
   describeDiagram,
   BUILTIN_POTENTIALS,
+  filterPotentials,
   tableFor,
   electronsConsumed,
-  parseSpecies,
-  formatSpecies,
   type NernstForm,
   type Binding,
 } from '../engine';
@@ -710,31 +709,18 @@ export function diagram(reaction: Arg, species: Arg, values: Arg, table: Arg): R
 /** The built-in table with a header row, optionally filtered. */
 export function potentials(filter: Arg): Result {
   return guard(() => {
-    const f = readOptionalText(asGrid(filter)?.[0]?.[0], 'filter', 'text such as "Fe" or "Cu2+"');
-    let match: (text: string) => boolean = () => true;
-    if (f) {
-      let speciesText: string | null = null;
-      try {
-        speciesText = formatSpecies(parseSpecies(f, 'filter'), false);
-      } catch {
-        speciesText = null;
-      }
-      const lower = f.toLowerCase();
-      match = (text) => {
-        if (
-          speciesText &&
-          (text.split(/\s+/).some((tok) => tok.replace(/\((s|l|g|aq)\)$/, '') === speciesText) ||
-            text.includes(speciesText))
-        )
-          return true;
-        return text.toLowerCase().includes(lower);
-      };
+    const f = readOptionalText(asGrid(filter)?.[0]?.[0], 'filter', 'text such as "Fe" or "Cu2+"') ?? '';
+    const picked = filterPotentials(BUILTIN_POTENTIALS, f);
+    if (picked.rows.length === 0) {
+      return one(
+        cellError(
+          '#N/A',
+          `No built-in half-reaction matches ${picked.described}. Type an element symbol (Fe), a species (Cu2+), or leave the filter empty for the whole table.`,
+        ),
+      );
     }
-    const rows = BUILTIN_POTENTIALS.filter((r) => match(r.halfReaction));
-    if (rows.length === 0)
-      return one(cellError('#N/A', `No built-in half-reaction matches the filter "${f ?? ''}".`));
     const out: Result = [['Half-reaction', 'E° (V vs SHE, 25 °C)', 'dE°/dT (mV/K)', 'Source']];
-    for (const r of rows) out.push([r.halfReaction, r.e0V, r.dE0dTmVperK ?? '', r.source]);
+    for (const r of picked.rows) out.push([r.halfReaction, r.e0V, r.dE0dTmVperK ?? '', r.source]);
     return out;
   });
 }

@@ -15,13 +15,9 @@
 import {
   type BuiltinPotentialRow,
   compiledReaction,
-  elementsOf,
+  filterPotentials,
   formatSpecies,
-  parseReaction,
-  parseSpecies,
   phaseOf,
-  speciesKey,
-  type Species,
 } from '../engine/index';
 import type { CellBlock, SheetPlan } from './sheetPlan';
 import { asCellText, rangeAddress, sheetRef, uniqueSheetName } from './sheetNames';
@@ -37,71 +33,7 @@ export const POTENTIALS_HEADER = [
 /** The name the sheet gets where the workbook has none of that name. */
 export const POTENTIALS_BASE_NAME = 'Potentials';
 
-/** How a filter was applied. */
-export type FilterRule = 'all' | 'element' | 'species' | 'text';
-
-/** The rows a filter picks, and how it read the filter. */
-export interface FilterResult {
-  readonly rows: readonly BuiltinPotentialRow[];
-  readonly rule: FilterRule;
-  /** e.g. "the element Fe", "the species Cu2+", 'text containing "CN"', "all rows" */
-  readonly described: string;
-}
-
-function speciesOfRow(row: BuiltinPotentialRow): Species[] {
-  const r = parseReaction(row.halfReaction, 'half-reaction');
-  return [...r.reactants, ...r.products].map((t) => t.species).filter((s) => !s.isElectron);
-}
-
-function asElementSymbol(text: string): string | null {
-  if (!/^[A-Z][a-z]?$/.test(text)) return null;
-  try {
-    const s = parseSpecies(text, 'filter');
-    if (s.charge !== 0 || s.formula !== text) return null;
-    const els = elementsOf(s);
-    return els.size === 1 && els.get(text) === 1 ? text : null;
-  } catch {
-    return null;
-  }
-}
-
-/**
- * The built-in rows a filter picks (see the module comment for the rules).
- *
- * @example
- * filterPotentials(BUILTIN_POTENTIALS, 'Cu2+').rule // 'species'
- */
-export function filterPotentials(rows: readonly BuiltinPotentialRow[], filter: string): FilterResult {
-  const f = filter.trim();
-  if (f === '') return { rows, rule: 'all', described: 'all rows' };
-  const element = asElementSymbol(f);
-  if (element) {
-    return {
-      rows: rows.filter((r) => speciesOfRow(r).some((s) => elementsOf(s).has(element))),
-      rule: 'element',
-      described: `the element ${element}`,
-    };
-  }
-  let species: Species | null = null;
-  try {
-    species = parseSpecies(f, 'filter');
-  } catch {
-    species = null;
-  }
-  if (species && !species.isElectron) {
-    const key = speciesKey(species);
-    const picked = rows.filter((r) => speciesOfRow(r).some((s) => speciesKey(s) === key));
-    if (picked.length > 0) {
-      return { rows: picked, rule: 'species', described: `the species ${formatSpecies(species, false)}` };
-    }
-  }
-  const lower = f.toLowerCase();
-  return {
-    rows: rows.filter((r) => r.halfReaction.toLowerCase().includes(lower)),
-    rule: 'text',
-    described: `text containing "${f}"`,
-  };
-}
+export { filterPotentials, type FilterResult, type FilterRule } from '../engine/index';
 
 /** The plan of a potentials sheet, with what the pane tells the user about it. */
 export interface PotentialsSheetPlan extends SheetPlan {

@@ -60,10 +60,10 @@ describe('checkReaction (live validation)', () => {
     expect(caretLine(c.position ?? 1)).toBe('    ^');
   });
 
-  test('empty text is an error without a position', () => {
+  test('empty text is an error at character 1', () => {
     const c = checkReaction('  ');
     expect(c.ok).toBe(false);
-    if (!c.ok) expect(c.position).toBeNull();
+    if (!c.ok) expect(c.position).toBe(1);
   });
 
   test('a couple lists the species the resolved half-reaction needs, H+ included', () => {
