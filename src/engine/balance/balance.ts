@@ -277,7 +277,7 @@ export function balanceSkeleton(
       const where = c.side < 0 ? 'reactant' : 'product';
       throw new EngineError(
         'unbalanced',
-        `${quote(text)} cannot be balanced with ${formatSpecies(c.species)} as a ${where}: the only balance ${x === 0n ? 'leaves it out' : 'puts it on the other side'}. Check the skeleton.`,
+        `${quote(text)} cannot be balanced with ${formatSpecies(c.species)} as a ${where}: the only balance ${x === 0n ? 'leaves it out' : 'puts it on the other side'}. Check the skeleton${medium === null ? ', or, if it takes place in water, give the medium "acid" or "base"' : ''}.`,
         'reaction',
       );
     }
