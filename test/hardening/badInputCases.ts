@@ -1167,6 +1167,15 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'ACTIVITY',
+    argument: 'values',
+    input: 'huge (1e308)',
+    args: ['ZnO2^2-', 1e308, 'davies', 7, 0],
+    expect: NUM(OVERFLOW),
+    says: 'the activity is beyond the number range',
+    bug: 'returns Infinity (γ ≈ 480 from the Davies equation at I = 7 mol/kg, 0 °C, times 1e308)',
+  },
+  {
+    fn: 'ACTIVITY',
     argument: 'model',
     input: 'bad model name',
     args: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], 'foo', null, null],
