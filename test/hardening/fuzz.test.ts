@@ -13,6 +13,8 @@ import fc from 'fast-check';
 import {
   BUILTIN_POTENTIALS,
   EngineError,
+  balanceSkeleton,
+  checkBalance,
   formatNotation,
   formatSpecies,
   listReferences,
@@ -57,6 +59,12 @@ function positiveIntFromEnv(name: string, dflt: number): number {
 const PARSER_RUNS = Math.max(1, Math.round(TOTAL * 0.35));
 const ROUNDTRIP_RUNS = Math.max(1, Math.round(TOTAL * 0.05));
 const PER_FUNCTION_RUNS = Math.max(1, Math.round((TOTAL * 0.6) / CATALOGUE.length));
+
+/**
+ * A cap per test, not a timing assertion: generous (a default run takes seconds), growing with
+ * the run size so that a long run on a slow machine is not cut off by jest's default timeout.
+ */
+const CAP_MS = Math.max(120_000, Math.ceil(TOTAL / 100_000) * 120_000);
 
 const counts = { parser: 0, parserAccepted: 0, roundTrip: 0, catalogue: 0, catalogueErrors: 0 };
 const started = Date.now();
@@ -235,38 +243,54 @@ function expectEngineErrorOnly(f: () => unknown): boolean {
 }
 
 describe('parser fuzz', () => {
-  test(`parseNotation and parseSpecies accept or raise an EngineError (${PARSER_RUNS} strings)`, () => {
-    fc.assert(
-      fc.property(anyText, (text) => {
-        counts.parser++;
-        let accepted = expectEngineErrorOnly(() => parseNotation(text));
-        accepted = expectEngineErrorOnly(() => parseSpecies(text)) || accepted;
-        if (accepted) counts.parserAccepted++;
-      }),
-      { seed: SEED, numRuns: PARSER_RUNS },
-    );
-  });
+  test(
+    `parseNotation and parseSpecies accept or raise an EngineError (${PARSER_RUNS} strings)`,
+    () => {
+      fc.assert(
+        fc.property(anyText, (text) => {
+          counts.parser++;
+          let accepted = expectEngineErrorOnly(() => parseNotation(text));
+          accepted = expectEngineErrorOnly(() => parseSpecies(text)) || accepted;
+          if (accepted) counts.parserAccepted++;
+        }),
+        { seed: SEED, numRuns: PARSER_RUNS },
+      );
+    },
+    CAP_MS,
+  );
 
-  test(`whatever parses formats to canonical text that reads back as the same thing (${ROUNDTRIP_RUNS} strings)`, () => {
-    fc.assert(
-      fc.property(anyText, (text) => {
-        counts.roundTrip++;
-        const n = attempt(() => parseNotation(text));
-        if (n) {
-          const once = formatNotation(n);
-          const again = parseNotation(once);
-          expect(describeNotation(again)).toBe(describeNotation(n));
-          expect(formatNotation(again)).toBe(once);
-        }
-        const s = attempt(() => parseSpecies(text));
-        if (s) {
-          const f = formatSpecies(s);
-          expect(describeSpecies(parseSpecies(f))).toBe(describeSpecies(s));
-        }
-      }),
-      { seed: SEED + 1, numRuns: ROUNDTRIP_RUNS },
-    );
-  });
+  test(
+    `whatever parses formats to canonical text that reads back as the same thing, and balances or raises an EngineError (${ROUNDTRIP_RUNS} strings)`,
+    () => {
+      fc.assert(
+        fc.property(anyText, (text) => {
+          counts.roundTrip++;
+          const n = attempt(() => parseNotation(text));
+          if (n) {
+            const once = formatNotation(n);
+            const again = parseNotation(once);
+            expect(describeNotation(again)).toBe(describeNotation(n));
+            expect(formatNotation(again)).toBe(once);
+            if (n.kind === 'half' || n.kind === 'reaction') {
+              // the balancer on whatever parses: a balanced reaction, or an EngineError
+              checkBalance(n.reaction);
+              for (const medium of [null, 'acid', 'base'] as const) {
+                const b = attempt(() => balanceSkeleton(n.reaction, medium));
+                if (b) expect(checkBalance(b.reaction).problems).toEqual([]);
+              }
+            }
+          }
+          const s = attempt(() => parseSpecies(text));
+          if (s) {
+            const f = formatSpecies(s);
+            expect(describeSpecies(parseSpecies(f))).toBe(describeSpecies(s));
+          }
+        }),
+        { seed: SEED + 1, numRuns: ROUNDTRIP_RUNS },
+      );
+    },
+    CAP_MS,
+  );
 });
 
 /** The value, or null where it raised an EngineError (anything else propagates). */
@@ -538,15 +562,23 @@ describe('catalogue fuzz', () => {
   for (const f of CATALOGUE) {
     const known = KNOWN_BUGS[f.id];
     if (!known) {
-      test(`${f.id} survives random arguments (${PER_FUNCTION_RUNS} calls)`, () =>
-        fuzzFunction(f, false, []));
+      test(
+        `${f.id} survives random arguments (${PER_FUNCTION_RUNS} calls)`,
+        () => fuzzFunction(f, false, []),
+        CAP_MS,
+      );
       continue;
     }
     // BUG (see KNOWN_BUGS): the full-range run fails on its pinned counterexample.
-    test.failing(`${f.id} survives random arguments, extreme magnitudes too (BUG: ${known.bug})`, () =>
-      fuzzFunction(f, false, [known.example]),
+    test.failing(
+      `${f.id} survives random arguments, extreme magnitudes too (BUG: ${known.bug})`,
+      () => fuzzFunction(f, false, [known.example]),
+      CAP_MS,
     );
-    test(`${f.id} survives random arguments of ordinary magnitude (${PER_FUNCTION_RUNS} calls)`, () =>
-      fuzzFunction(f, true, []));
+    test(
+      `${f.id} survives random arguments of ordinary magnitude (${PER_FUNCTION_RUNS} calls)`,
+      () => fuzzFunction(f, true, []),
+      CAP_MS,
+    );
   }
 });
