@@ -612,7 +612,15 @@ export function ionicStrength(species: readonly string[], molalities: readonly n
     }
     if (info.kind === Kind.Ion) sum += m * info.charge * info.charge;
   }
-  return 0.5 * sum;
+  const I = 0.5 * sum;
+  if (!Number.isFinite(I)) {
+    throw new EngineError(
+      'range',
+      'The ionic strength is beyond the number range; check the concentrations (mol/kg).',
+      'values',
+    );
+  }
+  return I;
 }
 
 /**
@@ -682,7 +690,15 @@ export function activities(
       size = info.sizeAngstrom;
     }
     const z = info.charge;
-    out[i] = v * gammaFromLog(logGamma(z * z, sqrtI, I, model, a, b, size), I, model);
+    const ai = v * gammaFromLog(logGamma(z * z, sqrtI, I, model, a, b, size), I, model);
+    if (!Number.isFinite(ai)) {
+      throw new EngineError(
+        'range',
+        `The activity of ${info.label} is beyond the number range; check its concentration.`,
+        'values',
+      );
+    }
+    out[i] = ai;
   }
   return out;
 }

@@ -80,7 +80,15 @@ export function nernstSlopeV(tempC = STANDARD_TEMP_C, n = 1): number {
   if (!Number.isFinite(n) || n <= 0) {
     throw new EngineError('argument', `n (electrons) must be a positive number; got ${String(n)}.`, 'n');
   }
-  return (GAS_CONSTANT_J_PER_MOL_K * tempK * Math.LN10) / (n * FARADAY_C_PER_MOL);
+  const slope = (GAS_CONSTANT_J_PER_MOL_K * tempK * Math.LN10) / (n * FARADAY_C_PER_MOL);
+  if (!Number.isFinite(slope)) {
+    throw new EngineError(
+      'range',
+      `The Nernst slope for n = ${n} is beyond the number range; n is the electron count, e.g. 1 or 2.`,
+      'n',
+    );
+  }
+  return slope;
 }
 
 /** RT ln10 / F at a temperature in kelvin, without checks (hot paths). */

@@ -29,6 +29,19 @@ export function isBlankGrid(g: Grid | null): boolean {
   return g === null || g.every((row) => row.every((c) => isBlank(c)));
 }
 
+/**
+ * True for an optional text argument left empty: null, "", or the 0 some hosts pass for
+ * an empty cell (no text argument has 0 as a meaningful value).
+ */
+export function isEmptyText(v: unknown): boolean {
+  return isBlank(v) || v === 0;
+}
+
+/** True where a text-holding grid (species names, a table) is absent or all empty. */
+export function isEmptyTextGrid(g: Grid | null): boolean {
+  return g === null || g.every((row) => row.every((c) => isEmptyText(c)));
+}
+
 /** A grid's shape as text, e.g. "3×2". */
 export function shapeOf(g: Grid | null): string {
   if (!g) return '0×0';
@@ -89,17 +102,19 @@ export function readOptionalNumber(v: unknown, name: string, unit = ''): number 
  * readText('  Cu2+/Cu ', 'reaction') // 'Cu2+/Cu'
  */
 export function readText(v: unknown, name: string, dflt?: string, what = 'text'): string {
-  if (isBlank(v)) {
+  if (isBlank(v) || (v === 0 && dflt !== undefined)) {
     if (dflt !== undefined) return dflt;
     throw new EngineError('argument', `${name} is missing: give ${what}.`, name);
   }
   if (typeof v === 'string') return v.trim();
+  if (v === 0)
+    throw new EngineError('argument', `${name} is empty (an empty cell reads as 0): give ${what}.`, name);
   throw new EngineError('argument', `${name} must be ${what}; got ${describe(v)}.`, name);
 }
 
 /** Read optional text: null where blank. */
 export function readOptionalText(v: unknown, name: string, what = 'text'): string | null {
-  return isBlank(v) ? null : readText(v, name, undefined, what);
+  return isEmptyText(v) ? null : readText(v, name, undefined, what);
 }
 
 /** Read a positive whole number (electrons). */

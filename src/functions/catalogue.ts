@@ -48,6 +48,7 @@ import {
   asList,
   isBlank,
   isBlankGrid,
+  isEmptyTextGrid,
   readNumber,
   readOptionalNumber,
   readText,
@@ -126,13 +127,13 @@ function one(x: ResultCell): Result {
 
 function tableCells(arg: Arg): TableCells {
   const g = asGrid(arg);
-  return isBlankGrid(g) ? null : (g as TableCells);
+  return isEmptyTextGrid(g) ? null : (g as TableCells);
 }
 
 /** Species names and a values matrix → headers, one row per case. */
 function speciesAndValues(speciesArg: Arg, valuesArg: Arg): { headers: string[]; rows: Scalar[][] | null } {
   const sg = asGrid(speciesArg);
-  const names = isBlankGrid(sg) ? [] : asList(sg, 'species');
+  const names = isEmptyTextGrid(sg) ? [] : asList(sg, 'species');
   const vg = asGrid(valuesArg);
   const headers = names.map((s, i) => {
     if (typeof s !== 'string' || s.trim() === '') {
@@ -171,14 +172,13 @@ function speciesAndValues(speciesArg: Arg, valuesArg: Arg): { headers: string[];
   );
 }
 
-function reactionColumn(arg: Arg, name = 'reaction'): CaseColumn {
+function reactionColumn(
+  arg: Arg,
+  name = 'reaction',
+  what = 'a half-reaction, couple, cell diagram or reaction',
+): CaseColumn {
   const c = caseColumn(asGrid(arg), name);
-  if (!c.cells)
-    throw new EngineError(
-      'argument',
-      `${name} is missing: give a half-reaction, couple, cell diagram or reaction.`,
-      name,
-    );
+  if (!c.cells) throw new EngineError('argument', `${name} is missing: give ${what}.`, name);
   return c;
 }
 
@@ -595,7 +595,7 @@ export function vsRef(potentialArg: Arg, from_ref: Arg, to_ref: Arg, temp_C: Arg
 /** Activity coefficient of one ion. */
 export function actCoef(ion: Arg, ionic_strength: Arg, model: Arg, temp_C: Arg, ion_size: Arg): Result {
   return guard(() => {
-    const ic = reactionColumn(ion, 'ion');
+    const ic = reactionColumn(ion, 'ion', 'an ion such as "Cu2+"');
     const isc = caseColumn(asGrid(ionic_strength), 'ionic_strength');
     const mc = caseColumn(asGrid(model), 'model');
     const tc = tempColumn(temp_C);

@@ -518,17 +518,7 @@ function checkResult(id: string, args: readonly Arg[], r: Result): boolean {
  * a run over ordinary magnitudes (no |x| above 1e300 or below 1e-300) keeps fuzzing the rest.
  * When the lead fixes one, its failing test passes and jest reports it: remove the entry.
  */
-const KNOWN_BUGS: Record<string, { bug: string; example: Arg[] }> = {
-  // BUG: NERNSTSLOPE(25, 5e-324) returns Infinity (RT ln10 / (n F) with n the smallest double); expected #NUM!.
-  NERNSTSLOPE: { bug: 'Infinity at n = 5e-324', example: [25, 5e-324] },
-  // BUG: IONICSTR("V2+", 1e308) returns Infinity (½·z²·m overflows); expected #NUM!.
-  IONICSTR: { bug: 'Infinity at a molality of 1e308', example: ['V2+', 1e308] },
-  // BUG: ACTIVITY("ZnO2^2-", 1e308, "davies", 7, 0) returns Infinity (γ ≈ 480 at I = 7 times 1e308); expected #NUM!.
-  ACTIVITY: {
-    bug: 'Infinity for a molality of 1e308 with γ > 1',
-    example: ['ZnO2^2-', 1e308, 'davies', 7, 0],
-  },
-};
+const KNOWN_BUGS: Record<string, { bug: string; example: Arg[] }> = {};
 
 function isExtreme(x: unknown): boolean {
   if (typeof x === 'number') return Math.abs(x) > 1e300 || (x !== 0 && Math.abs(x) < 1e-300);
