@@ -18,25 +18,57 @@ import * as fs from 'fs';
 import * as os from 'os';
 import * as path from 'path';
 import * as zlib from 'zlib';
+import * as v8 from 'v8';
+import * as vm from 'vm';
 import { potential } from '../src/functions/catalogue';
 import { clearCaches, compiledReaction, FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K } from '../src/engine';
 
 const CASES = 100_000;
+
+v8.setFlagsFromString('--expose-gc');
+const gc = vm.runInNewContext('gc') as (() => void) | undefined;
+
+/** A full collection before each timed run, so one run's garbage is not charged to the next. */
+function collectGarbage(): void {
+  if (typeof gc === 'function') gc();
+}
 
 function median(xs: number[]): number {
   const s = xs.slice().sort((a, b) => a - b);
   return s[Math.floor(s.length / 2)]!;
 }
 
-function timeMs(f: () => unknown, reps: number, warmup = 3): number {
-  for (let i = 0; i < warmup; i++) f();
-  const ts: number[] = [];
-  for (let i = 0; i < reps; i++) {
-    const t0 = process.hrtime.bigint();
+/**
+ * Time two functions alternately (so drift and garbage collection fall on both alike) and
+ * return the median of each and the median of the per-repetition ratios f/g.
+ */
+function pairedMs(
+  f: () => unknown,
+  g: () => unknown,
+  reps: number,
+  warmup = 3,
+): { fMs: number; gMs: number; ratio: number } {
+  for (let i = 0; i < warmup; i++) {
     f();
-    ts.push(Number(process.hrtime.bigint() - t0) / 1e6);
+    g();
   }
-  return median(ts);
+  const fs: number[] = [];
+  const gs: number[] = [];
+  const rs: number[] = [];
+  const clock = (h: () => unknown) => {
+    collectGarbage();
+    const t0 = process.hrtime.bigint();
+    h();
+    return Number(process.hrtime.bigint() - t0) / 1e6;
+  };
+  for (let i = 0; i < reps; i++) {
+    const a = clock(f);
+    const b = clock(g);
+    fs.push(a);
+    gs.push(b);
+    rs.push(a / b);
+  }
+  return { fMs: median(fs), gMs: median(gs), ratio: median(rs) };
 }
 
 function makeCases(): number[][] {
@@ -131,26 +163,39 @@ export async function main(argv: string[]): Promise<void> {
       throw new Error(`mismatch at case ${i}`);
   });
 
-  const sweepMs = timeMs(() => potential(cell, species, rows, 25, null), 15);
-  const handMs = timeMs(() => handLoop(rows, e0), 15);
-  const typedMs = timeMs(() => handLoopTyped(rows, e0), 15);
+  const sweep = pairedMs(
+    () => potential(cell, species, rows, 25, null),
+    () => handLoop(rows, e0),
+    21,
+  );
+  const typed = pairedMs(
+    () => potential(cell, species, rows, 25, null),
+    () => handLoopTyped(rows, e0),
+    21,
+  );
+  const sweepMs = sweep.fMs;
+  const handMs = sweep.gMs;
   log(
-    `1. sweep of ${CASES} cases × 2 species: ${sweepMs.toFixed(2)} ms; hand loop ${handMs.toFixed(2)} ms (typed-array floor ${typedMs.toFixed(2)} ms)`,
+    `1. sweep of ${CASES} cases × 2 species: ${sweepMs.toFixed(2)} ms; hand loop ${handMs.toFixed(2)} ms (typed-array floor ${typed.gMs.toFixed(2)} ms)`,
   );
   log(
-    `   sweep_ratio ${(sweepMs / handMs).toFixed(2)}× (target ≤ 3×, goal 1.5×); vs typed-array floor ${(sweepMs / typedMs).toFixed(2)}×`,
+    `   sweep_ratio ${sweep.ratio.toFixed(2)}× (target ≤ 3×, goal 1.5×); vs typed-array floor ${typed.ratio.toFixed(2)}×`,
   );
 
   const one = [[0.1, 0.01]];
-  const callsMs = timeMs(() => {
-    for (let i = 0; i < CASES; i++) potential(cell, species, one, 25, null);
-  }, 7);
-  const perCallUs = (callsMs * 1000) / CASES;
-  const perCaseUs = (handMs * 1000) / CASES;
+  const calls = pairedMs(
+    () => {
+      for (let i = 0; i < CASES; i++) potential(cell, species, one, 25, null);
+    },
+    () => handLoop(rows, e0),
+    11,
+  );
+  const perCallUs = (calls.fMs * 1000) / CASES;
+  const perCaseUs = (calls.gMs * 1000) / CASES;
   log(
     `2. ${CASES} single-case calls: ${perCallUs.toFixed(3)} µs per call; hand loop ${perCaseUs.toFixed(3)} µs per case`,
   );
-  log(`   call_ratio ${(perCallUs / perCaseUs).toFixed(2)}× (target ≤ 10×)`);
+  log(`   call_ratio ${calls.ratio.toFixed(2)}× (target ≤ 10×)`);
 
   const parseCellUs = coldParseUs('Zn(s) | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu(s)', 200);
   const parseReactionUs = coldParseUs('2 MnO4- + 10 Fe2+ + 16 H+ -> 2 Mn2+ + 10 Fe3+ + 8 H2O', 50);
@@ -173,14 +218,14 @@ export async function main(argv: string[]): Promise<void> {
     );
 
   const figures = {
-    sweep_ratio: round(sweepMs / handMs),
-    call_ratio: round(perCallUs / perCaseUs),
+    sweep_ratio: round(sweep.ratio),
+    call_ratio: round(calls.ratio),
     parse_cell_us: round(parseCellUs, 1),
     parse_reaction_us: round(parseReactionUs, 1),
     recalc_ratio: round(recalc.ratio),
     bundle_kb: round(size.kb, 1),
     bundle_gzip_kb: round(size.gzipKb, 1),
-    sweep_ratio_typed_floor: round(sweepMs / typedMs),
+    sweep_ratio_typed_floor: round(typed.ratio),
   };
   if (json) console.log(JSON.stringify(figures));
 }

@@ -228,7 +228,9 @@ function fastNernst(
   if (t === undefined ? Array.isArray(temp) : t !== null && !(typeof t === 'number' && Number.isFinite(t)))
     return null;
   const k = p.species.length;
-  for (const row of values) if (!Array.isArray(row) || row.length !== k) return null;
+  // ranges from a host are rectangular: the first row's width is every row's
+  const first = values[0];
+  if (!Array.isArray(first) || first.length !== k || !Array.isArray(values[values.length - 1])) return null;
   return sweepToColumn<ResultCell>(
     p.binding,
     values as Scalar[][],

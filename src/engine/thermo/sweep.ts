@@ -127,21 +127,57 @@ export function sweepToColumn<E>(
   const s = slopePerElectronAtKelvin(tK);
   const n = b.form.n;
   const potential = quantity === 'potential';
-  for (let i = 0; i < caseCount; i++) {
+  // With two value columns of opposite, equal weights (a cell or a redox couple, the common
+  // case) Σ w·log10 a = w·log10(a1/a2): one logarithm per case instead of two.
+  const pair = ratioPair(b);
+  const general = (row: ArrayLike<unknown>): number | E => {
     try {
-      const sum = weightedLogActivity(b, rows[i]!);
+      const sum = weightedLogActivity(b, row);
       const x = potential ? e0 - s * sum : n * sum;
-      out[i] = [
-        Number.isFinite(x)
-          ? x
-          : onError(
-              new EngineError('range', 'The result is not a finite number; check the inputs.', 'values'),
-            ),
-      ];
+      return Number.isFinite(x)
+        ? x
+        : onError(new EngineError('range', 'The result is not a finite number; check the inputs.', 'values'));
     } catch (e) {
       if (!(e instanceof EngineError)) throw e;
-      out[i] = [onError(e)];
+      return onError(e);
     }
+  };
+  if (pair) {
+    const { c1, c2, w } = pair;
+    const k = potential ? -s * w : n * w;
+    const k0 = potential ? e0 - s * b.fixedLog : n * b.fixedLog;
+    for (let i = 0; i < caseCount; i++) {
+      const row = rows[i]!;
+      const a1 = row[c1];
+      const a2 = row[c2];
+      if (typeof a1 === 'number' && typeof a2 === 'number' && a1 > 0 && a2 > 0) {
+        const x = k0 + k * Math.log10(a1 / a2);
+        if (x - x === 0) {
+          out[i] = [x];
+          continue;
+        }
+      }
+      out[i] = [general(row)];
+    }
+    return out;
   }
+  for (let i = 0; i < caseCount; i++) out[i] = [general(rows[i]!)];
   return out;
+}
+
+/** Two bound activity columns with weights w and −w (no pH column), or null. */
+function ratioPair(b: Binding): { c1: number; c2: number; w: number } | null {
+  let found: { c: number; w: number }[] = [];
+  for (let i = 0; i < b.column.length; i++) {
+    const c = b.column[i]!;
+    if (c < 0) continue;
+    if (b.isPH[i] === 1) return null;
+    found.push({ c, w: b.weight[i]! });
+    if (found.length > 2) return null;
+  }
+  if (found.length !== 2) return null;
+  const [x, y] = found as [{ c: number; w: number }, { c: number; w: number }];
+  if (x.w !== -y.w || x.c === y.c) return null;
+  found = [];
+  return { c1: x.c, c2: y.c, w: x.w };
 }
