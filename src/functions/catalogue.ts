@@ -172,18 +172,28 @@ function speciesAndValues(speciesArg: Arg, valuesArg: Arg): { headers: string[];
   );
 }
 
+/** A per-case argument (one cell or a column); null cells where omitted. */
+function column(arg: Arg, name: string): CaseColumn {
+  return caseColumn(asGrid(arg), name);
+}
+
+/** A per-case argument that must be given. */
+function requiredColumn(arg: Arg, name: string, what: string): CaseColumn {
+  const c = column(arg, name);
+  if (!c.cells) throw new EngineError('argument', `${name} is missing: give ${what}.`, name);
+  return c;
+}
+
 function reactionColumn(
   arg: Arg,
   name = 'reaction',
   what = 'a half-reaction, couple, cell diagram or reaction',
 ): CaseColumn {
-  const c = caseColumn(asGrid(arg), name);
-  if (!c.cells) throw new EngineError('argument', `${name} is missing: give ${what}.`, name);
-  return c;
+  return requiredColumn(arg, name, what);
 }
 
 function tempColumn(arg: Arg): CaseColumn {
-  return caseColumn(asGrid(arg), 'temp_C');
+  return column(arg, 'temp_C');
 }
 
 function readTemp(c: CaseColumn, i: number): number {
@@ -432,14 +442,8 @@ function logKCases(
   name: string,
 ): { cols: CaseColumn[]; value: (i: number) => number } {
   const cells = tableCells(table);
-  const rc = caseColumn(asGrid(reactionOrE0), name);
-  if (!rc.cells)
-    throw new EngineError(
-      'argument',
-      `${name} is missing: give a reaction or a standard potential in volts.`,
-      name,
-    );
-  const nc = caseColumn(asGrid(nArg), 'n');
+  const rc = requiredColumn(reactionOrE0, name, 'a reaction or a standard potential in volts');
+  const nc = column(nArg, 'n');
   const tc = tempColumn(temp_C);
   return {
     cols: [rc, nc, tc],
@@ -471,14 +475,8 @@ export function eqConst(reaction_or_E0: Arg, n: Arg, temp_C: Arg, table: Arg): R
 export function gibbs(reaction_or_E: Arg, n: Arg, temp_C: Arg, table: Arg): Result {
   return guard(() => {
     const cells = tableCells(table);
-    const rc = caseColumn(asGrid(reaction_or_E), 'reaction_or_E');
-    if (!rc.cells)
-      throw new EngineError(
-        'argument',
-        'reaction_or_E is missing: give a reaction or a potential in volts.',
-        'reaction_or_E',
-      );
-    const nc = caseColumn(asGrid(n), 'n');
+    const rc = requiredColumn(reaction_or_E, 'reaction_or_E', 'a reaction or a potential in volts');
+    const nc = column(n, 'n');
     const tc = tempColumn(temp_C);
     return perCase([rc, nc, tc], (i) => {
       const t = checkTemp(readTemp(tc, i));
@@ -518,7 +516,7 @@ export function balance(reaction: Arg, medium: Arg, table: Arg): Result {
   return guard(() => {
     const cells = tableCells(table);
     const rc = reactionColumn(reaction);
-    const mc = caseColumn(asGrid(medium), 'medium');
+    const mc = column(medium, 'medium');
     return perCase([rc, mc], (i) => {
       const text = readText(at(rc, i), 'reaction', undefined, 'a reaction');
       const m = parseMedium(readOptionalText(at(mc, i), 'medium', '"acid", "base" or empty'));
@@ -535,7 +533,7 @@ export function balance(reaction: Arg, medium: Arg, table: Arg): Result {
 export function nernstSlope(temp_C: Arg, n: Arg): Result {
   return guard(() => {
     const tc = tempColumn(temp_C);
-    const nc = caseColumn(asGrid(n), 'n');
+    const nc = column(n, 'n');
     return perCase([tc, nc], (i) => {
       const t = readTemp(tc, i);
       const ne = readNumber(at(nc, i), 'n', 1);
@@ -558,9 +556,9 @@ export function concCell(
   return guard(() => {
     const cells = tableCells(table);
     const cc = reactionColumn(couple, 'couple');
-    const lc = caseColumn(asGrid(value_left), 'value_left');
-    const rcol = caseColumn(asGrid(value_right), 'value_right');
-    const sc = caseColumn(asGrid(species), 'species');
+    const lc = column(value_left, 'value_left');
+    const rcol = column(value_right, 'value_right');
+    const sc = column(species, 'species');
     const tc = tempColumn(temp_C);
     return perCase([cc, lc, rcol, sc, tc], (i) => {
       const form = compiledReaction(
@@ -578,13 +576,11 @@ export function concCell(
 /** A potential on another reference scale. */
 export function vsRef(potentialArg: Arg, from_ref: Arg, to_ref: Arg, temp_C: Arg, pH: Arg): Result {
   return guard(() => {
-    const pc = caseColumn(asGrid(potentialArg), 'potential');
-    if (!pc.cells)
-      throw new EngineError('argument', 'potential is missing: give a potential in volts.', 'potential');
-    const fc = caseColumn(asGrid(from_ref), 'from_ref');
-    const toc = caseColumn(asGrid(to_ref), 'to_ref');
+    const pc = requiredColumn(potentialArg, 'potential', 'a potential in volts');
+    const fc = column(from_ref, 'from_ref');
+    const toc = column(to_ref, 'to_ref');
     const tc = tempColumn(temp_C);
-    const phc = caseColumn(asGrid(pH), 'pH');
+    const phc = column(pH, 'pH');
     return perCase([pc, fc, toc, tc, phc], (i) => {
       const e = readNumber(at(pc, i), 'potential', undefined, 'V');
       const from = readText(at(fc, i), 'from_ref', undefined, 'a reference electrode name such as "SCE"');
@@ -598,10 +594,10 @@ export function vsRef(potentialArg: Arg, from_ref: Arg, to_ref: Arg, temp_C: Arg
 export function actCoef(ion: Arg, ionic_strength: Arg, model: Arg, temp_C: Arg, ion_size: Arg): Result {
   return guard(() => {
     const ic = reactionColumn(ion, 'ion', 'an ion such as "Cu2+"');
-    const isc = caseColumn(asGrid(ionic_strength), 'ionic_strength');
-    const mc = caseColumn(asGrid(model), 'model');
+    const isc = column(ionic_strength, 'ionic_strength');
+    const mc = column(model, 'model');
     const tc = tempColumn(temp_C);
-    const sc = caseColumn(asGrid(ion_size), 'ion_size');
+    const sc = column(ion_size, 'ion_size');
     return perCase([ic, isc, mc, tc, sc], (i) => {
       const text = readText(at(ic, i), 'ion', undefined, 'an ion such as "Cu2+"');
       const I = readNumber(at(isc, i), 'ionic_strength', undefined, 'mol/kg');
@@ -627,7 +623,7 @@ export function activity(species: Arg, values: Arg, model: Arg, ionic_strength: 
         'species',
       );
     const m = parseActivityModel(readOptionalText(asGrid(model)?.[0]?.[0], 'model'));
-    const isc = caseColumn(asGrid(ionic_strength), 'ionic_strength');
+    const isc = column(ionic_strength, 'ionic_strength');
     const tc = tempColumn(temp_C);
     const n = caseCount({ name: 'values', rows: rows.length }, [isc, tc]);
     const out: Result = [];
