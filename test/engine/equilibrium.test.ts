@@ -17,33 +17,10 @@ import {
   nernstSlopeV,
   standardPotentialV,
 } from '../../src/engine';
-
-// SI 2019 exact constants, written out here so that expectations are independent of the engine.
-const NA = 6.02214076e23; // mol⁻¹
-const R = NA * 1.380649e-23; // J/(mol·K)
-const F = NA * 1.602176634e-19; // C/mol
-/** RT ln10 / F in V (derived from the SI exact constants). */
-const s = (tC: number) => (R * (tC + 273.15) * Math.LN10) / F;
-const S25 = s(25);
+import { F, s, S25, engineErrorOf, expectNear } from './support';
 
 function e0(text: string, tempC = 25): number {
   return standardPotentialV(compiledReaction(text, null).resolved, tempC);
-}
-
-/** Runs `f` and returns the EngineError it throws (fails the test otherwise). */
-function engineErrorOf(f: () => unknown): EngineError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error('expected an EngineError, but nothing was thrown');
-}
-
-function expectNear(actual: number, expected: number, tol: number): void {
-  expect(Number.isFinite(actual)).toBe(true);
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tol);
 }
 
 describe('Sn + 2 Cu2+ ⇌ Sn2+ + 2 Cu+ (OpenStax Chemistry 2e, ch. 17, seen)', () => {

@@ -14,6 +14,7 @@ import {
   potentialV,
   standardPotentialV,
 } from '../../src/engine';
+import { expectNear } from './support';
 
 // SI 2019 exact constants, written out here so that expectations are independent of the engine.
 const NA = 6.02214076e23; // mol⁻¹
@@ -49,11 +50,6 @@ function emf(
   tC = 25,
 ) {
   return potentialV(bindSpecies(compiledReaction(text, table), headers), row, tC);
-}
-
-function expectNear(actual: number, expected: number, tol: number): void {
-  expect(Number.isFinite(actual)).toBe(true);
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tol);
 }
 
 describe('H2 | HCl | AgCl | Ag at 25 °C with measured γ± (Kaye & Laby §3.9.6, seen; E° Bates & Bower 1954, seen)', () => {

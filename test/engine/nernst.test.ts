@@ -7,7 +7,6 @@
  * published E° values, so that they do not depend on the engine's own arithmetic.
  */
 import {
-  EngineError,
   type EngineErrorKind,
   bindSpecies,
   compiledReaction,
@@ -19,6 +18,7 @@ import {
   standardPotentialV,
   sweepCases,
 } from '../../src/engine';
+import { engineErrorOf, expectNear } from './support';
 
 // SI 2019 exact constants, written out here so that expectations are independent of the engine.
 const NA = 6.02214076e23; // mol⁻¹
@@ -36,22 +36,6 @@ function emf(text: string, headers: readonly string[], row: readonly number[], t
 /** E° of a reaction text at a temperature. */
 function e0(text: string, tempC = 25): number {
   return standardPotentialV(compiledReaction(text, null).resolved, tempC);
-}
-
-/** Runs `f` and returns the EngineError it throws (fails the test otherwise). */
-function engineErrorOf(f: () => unknown): EngineError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error('expected an EngineError, but nothing was thrown');
-}
-
-function expectNear(actual: number, expected: number, tol: number): void {
-  expect(Number.isFinite(actual)).toBe(true);
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tol);
 }
 
 describe('Nernst slope RT ln10 / F', () => {
