@@ -284,24 +284,27 @@ function nernstCases(
   const { headers, rows } = speciesAndValues(species, values);
   const tc = quantity === 'potential' ? tempColumn(temp) : caseColumn(null, 'temp_C');
   const n = caseCount(rows ? { name: 'values', rows: rows.length } : null, [rc, tc]);
-  const out: Result = new Array<ResultCell[]>(n);
   const valueRows: readonly Scalar[][] = rows ?? [[]];
   if (rc.cells!.length === 1) {
     const text = readText(rc.cells![0], 'reaction', undefined, 'a reaction');
     const form = compiledReaction(text, cells);
     const b = bindSpecies(form, headers);
-    let temps: number | ((i: number) => number);
-    if (!tc.cells || tc.cells.length === 1) temps = readTemp(tc, 0);
-    else temps = (i: number) => readTemp(tc, i);
-    const res = sweepCases(b, valueRows, temps, quantity, n);
     const sg = asGrid(species);
     lastPrepared =
       sg && sg.length === 1 && typeof reaction === 'string' && text === reaction
         ? { reaction, species: sg[0]!.slice(), table, binding: b }
         : null;
-    return toColumn(res, n);
+    // one temperature: n equals the number of value rows
+    if (!tc.cells || tc.cells.length === 1) {
+      return sweepToColumn<ResultCell>(b, valueRows, readTemp(tc, 0), quantity, toCellError);
+    }
+    return toColumn(
+      sweepCases(b, valueRows, (i: number) => readTemp(tc, i), quantity, n),
+      n,
+    );
   }
   // one reaction per case
+  const out: Result = new Array<ResultCell[]>(n);
   let lastText: string | null = null;
   let lastBinding: Binding | null = null;
   for (let i = 0; i < n; i++) {

@@ -154,17 +154,12 @@ export function combineHalfReactions(reduction: Reaction, oxidation: Reaction): 
       'reaction',
     );
   }
-  const ordered = orderCellReaction(total);
-  return { reaction: reactionFromStoichiometry(ordered), n: Number(l.num) / Number(l.den) };
+  return { reaction: reactionFromStoichiometry(total), n: Number(l.num) / Number(l.den) };
 }
 
 function lcmRational(a: Rational, b: Rational): Rational {
   // lcm(p/q, r/s) = lcm(p·s, r·q) / (q·s)
   return rat(lcm(a.num * b.den, b.num * a.den), a.den * b.den);
-}
-
-function orderCellReaction(entries: StoichEntry[]): StoichEntry[] {
-  return entries;
 }
 
 /** The medium a skeleton equation is balanced in. */

@@ -59,7 +59,7 @@ function part(formula: string, count: number): string[] {
  */
 export function splitElectrolyte(formula: string): { ion: Species; count: number }[] | null {
   for (const c of CATIONS) {
-    if (!formula.startsWith(c.formula.replace(/\d+$/, '')) && !formula.startsWith(c.formula)) continue;
+    if (!formula.startsWith(c.formula.replace(/\d+$/, ''))) continue;
     for (const a of ANIONS) {
       const za = -a.charge;
       const g = gcd(c.charge, za);

@@ -5,7 +5,6 @@
  * Arrows: `->`, `→`, `=`, `<=>`, `⇌` (and `-->`, `<->`, `=>`).
  * Electrons: `e-` or `e`.
  */
-import { EngineError, quote } from '../errors';
 import {
   type Rational,
   ONE,
@@ -15,7 +14,6 @@ import {
   add,
   neg,
   isZero,
-  toNumber,
   sign,
 } from '../rational';
 import { SourceText } from './source';
@@ -253,18 +251,4 @@ export function sameReaction(a: Reaction, b: Reaction): boolean {
       );
     });
   return sameTerms(a.reactants, b.reactants) && sameTerms(a.products, b.products);
-}
-
-/** Coefficient as a float, for thermodynamics. */
-export function nuAsNumber(e: StoichEntry): number {
-  return toNumber(e.nu);
-}
-
-/** Error helper for callers that need a reaction but got other notation. */
-export function notAReaction(text: string, what: string): EngineError {
-  return new EngineError(
-    'parse',
-    `${quote(text)} is ${what}; write a reaction with an arrow, e.g. "Zn + Cu2+ -> Zn2+ + Cu".`,
-    'reaction',
-  );
 }

@@ -115,13 +115,12 @@ function nonHOElements(m: StoichMap): Set<string> {
   return out;
 }
 
-/** Rows whose elements other than H and O all occur in `elements` (and share one, unless `elements` is empty). */
+/** Rows whose elements other than H and O all occur in `elements` (only H/O rows where `elements` is empty). */
 function relevantRows(table: PotentialTable, elements: ReadonlySet<string>): TableRow[] {
   return table.rows.filter((r) => {
     const els = nonHOElements(r.map);
     for (const el of els) if (!elements.has(el)) return false;
-    if (elements.size === 0) return els.size === 0;
-    return els.size > 0 || true;
+    return elements.size > 0 || els.size === 0;
   });
 }
 
@@ -286,14 +285,14 @@ function resolveHalfMap(
   const perE = scaleMap(target, div(ONE, e));
   refuseBroken(table, (m) => proportionality(perE, m) !== null, text);
   const direct = table.rows.filter((r) => proportionality(perE, r.perElectron) !== null).map(fromRow);
-  const chosen = pickOne(direct, text, table);
+  const chosen = pickOne(direct, text);
   if (chosen) return toHalf(chosen, target, inline, table);
   const rows = relevantRows(table, nonHOElements(target));
   const derived = derivedCandidates(
     rows,
     (m) => proportionality(perE, scaleMap(m, div(ONE, electronsOf(m)))) !== null,
   );
-  const d = pickOne(derived, text, table);
+  const d = pickOne(derived, text);
   if (d) return toHalf(d, target, inline, table);
   throw notFound(text);
 }
@@ -325,13 +324,12 @@ function notFound(text: string): EngineError {
   );
 }
 
-function pickOne(cs: Candidate[], text: string, table: PotentialTable): Candidate | null {
+function pickOne(cs: Candidate[], text: string): Candidate | null {
   if (cs.length === 0) return null;
   // user rows take precedence
   const user = cs.filter((c) => c.shares.every((s) => s.row.origin.kind === 'user'));
   const pool = user.length > 0 ? user : cs;
   if (pool.length === 1) return pool[0]!;
-  void table;
   throw new EngineError(
     'ambiguous',
     `${quote(text)} matches ${pool.length} half-reactions: ${describeCandidates(pool)}. Write the half-reaction in full (with phases, and H+ or OH- as it applies) to choose one.`,
@@ -382,7 +380,7 @@ function resolveCouple(c: Couple, text: string, table: PotentialTable): Resolved
   refuseBroken(table, (m) => fit(m) !== null, text);
   const user = bestFit(table.userRows.filter((r) => table.rows.includes(r)).map(fromRow), fit);
   const direct = user.length > 0 ? user : bestFit(table.rows.map(fromRow), fit);
-  const chosen = pickOne(direct, text, table);
+  const chosen = pickOne(direct, text);
   if (chosen) return toHalf(chosen, null, c.activities ?? new Map(), table);
   const els = new Set<string>();
   for (const s of [...c.oxidized, ...c.reduced])
@@ -391,7 +389,7 @@ function resolveCouple(c: Couple, text: string, table: PotentialTable): Resolved
     derivedCandidates(relevantRows(table, els), (m) => fit(m) !== null),
     fit,
   );
-  const d = pickOne(derived, text, table);
+  const d = pickOne(derived, text);
   if (d) return toHalf(d, null, c.activities ?? new Map(), table);
   throw notFound(text);
 }
@@ -479,7 +477,7 @@ function resolveElectrode(side: SideSet, text: string, which: string, table: Pot
       'reaction',
     );
   }
-  const chosen = pickOne(cands, label, table)!;
+  const chosen = pickOne(cands, label)!;
   const inline = new Map<string, number>();
   for (const k of chosen.map.keys()) {
     const v = side.inline.get(k);

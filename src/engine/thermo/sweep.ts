@@ -167,7 +167,7 @@ export function sweepToColumn<E>(
 
 /** Two bound activity columns with weights w and −w (no pH column), or null. */
 function ratioPair(b: Binding): { c1: number; c2: number; w: number } | null {
-  let found: { c: number; w: number }[] = [];
+  const found: { c: number; w: number }[] = [];
   for (let i = 0; i < b.column.length; i++) {
     const c = b.column[i]!;
     if (c < 0) continue;
@@ -178,6 +178,5 @@ function ratioPair(b: Binding): { c1: number; c2: number; w: number } | null {
   if (found.length !== 2) return null;
   const [x, y] = found as [{ c: number; w: number }, { c: number; w: number }];
   if (x.w !== -y.w || x.c === y.c) return null;
-  found = [];
   return { c1: x.c, c2: y.c, w: x.w };
 }
