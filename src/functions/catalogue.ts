@@ -811,3 +811,17 @@ export const CATALOGUE: readonly FunctionSpec[] = [
   { id: 'POTENTIALS', params: [P('filter', true)], impl: potentials },
   { id: 'CHECKTABLE', params: [P('table')], impl: checkTable },
 ];
+
+/**
+ * Calls a catalogue function by id with host-shaped arguments: the one entry point
+ * that the task pane and other in-process clients use, so they compute exactly what
+ * the sheet formula computes.
+ *
+ * @example
+ * callFunction('NERNSTSLOPE', [25]); // [[0.05916…]]
+ */
+export function callFunction(id: string, args: readonly Arg[]): Result {
+  const spec = CATALOGUE.find((s) => s.id === id.toUpperCase());
+  if (!spec) return [[cellError('#N/A', `There is no function ECHEM.${id}; check the name in the function reference.`)]];
+  return spec.impl(...args);
+}
