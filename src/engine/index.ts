@@ -105,3 +105,10 @@ export {
 // activity and reference electrodes
 export * from './activity';
 export * from './references';
+
+// species-header grammar (i11): one reading of `left:Ag+`, `l:Ag+`, `pH`, `left:pH`
+export {
+  type SpeciesHeaderParts,
+  splitSpeciesHeader,
+  canonicalSpeciesHeader,
+} from './notation/speciesHeader';
