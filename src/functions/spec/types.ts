@@ -174,11 +174,11 @@ export interface FunctionSpec {
    * the function returns; `returns`: what the result holds, with its unit, e.g. "E in V vs SHE".
    */
   readonly id: string;
+  readonly params: readonly ParamSpec[];
+  readonly result: ResultShape;
   readonly family: string;
   readonly summary: string;
   readonly returns: string;
-  readonly params: readonly ParamSpec[];
-  readonly result: ResultShape;
   /** At least one; the first is the formula bar's example. */
   readonly examples: readonly ExampleSpec[];
   /** Longer notes for the docs page (conventions, where a default comes from). */
