@@ -668,8 +668,8 @@ describe('reference scales and the Nernst slope', () => {
         const off: string[] = [];
         for (const a of REFS)
           for (const b of REFS) {
-            const ab = num(vsRef(e, a, b, t, ph), `VSREF(${e}, ${a}, ${b})`);
-            const err = Math.abs(num(vsRef(ab, b, a, t, ph), 'VSREF') - e);
+            const ab = num(vsRef(e, a, b, ph, t), `VSREF(${e}, ${a}, ${b})`);
+            const err = Math.abs(num(vsRef(ab, b, a, ph, t), 'VSREF') - e);
             if (!(err <= 1e-12)) off.push(`${a}→${b}→${a}: ${err}`);
           }
         expect(off).toEqual([]);
