@@ -1,6 +1,6 @@
 /**
  * The bad-input catalogue: every function of the catalogue × every input class that applies
- * to it, with the result the contract asks for (PRODUCT.md, "Errors"): the error code, and a
+ * to it, with the result the contract asks for (docs/design.md, "Errors"): the error code, and a
  * fragment of the message (a regular expression) that names the argument or the fix.
  *
  * The cases are of two sorts: derived from the function specs (every parameter gets the input
