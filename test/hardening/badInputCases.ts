@@ -225,7 +225,13 @@ function reactionCases(
 }
 
 /** Temperature cases for a function whose temp_C is at `index` of `base`. */
-function tempCases(fn: string, base: readonly Arg[], index: number, huge = TEMP_HUGE): BadInputCase[] {
+function tempCases(
+  fn: string,
+  base: readonly Arg[],
+  index: number,
+  huge = TEMP_HUGE,
+  hugeSays = 'temp_C must be between 0 and 100 °C (the aqueous range of the data)',
+): BadInputCase[] {
   const at = (t: Arg) => base.map((a, i) => (i === index ? t : a));
   return [
     {
@@ -258,7 +264,7 @@ function tempCases(fn: string, base: readonly Arg[], index: number, huge = TEMP_
       input: 'huge (1e308)',
       args: at(1e308),
       expect: V(huge),
-      says: 'temp_C must be between 0 and 100 °C (the aqueous range of the data)',
+      says: hugeSays,
     },
     {
       fn,
@@ -727,7 +733,13 @@ const HAND_CASES: readonly BadInputCase[] = [
   },
 
   // -------------------------------------------------------------------- NERNSTSLOPE
-  ...tempCases('NERNSTSLOPE', [25, 1], 0, /temp_C must be > −273\.15 °C and ≤ 10000 °C; got 1e\+308 °C/),
+  ...tempCases(
+    'NERNSTSLOPE',
+    [25, 1],
+    0,
+    /temp_C must be > −273\.15 °C and ≤ 10000 °C; got 1e\+308 °C/,
+    'temp_C must be above absolute zero and at most 10000 °C',
+  ),
   {
     fn: 'NERNSTSLOPE',
     argument: 'n',
