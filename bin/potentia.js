@@ -1,32 +1,41 @@
 #!/usr/bin/env node
 /*
- * Launcher for the `potentia` command. It runs the TypeScript sources directly through
- * ts-node in transpile-only mode (no type checking, no build step), so the command works
- * right after `npm ci` on a fresh clone. The compiler options are given here rather than
- * read from a tsconfig, so the command behaves the same from any working directory.
+ * Launcher for the `potentia` command. It runs the compiled JavaScript in build/cli, made
+ * from the TypeScript sources by `npm run build:cli` (run by `npm ci` through the prepare
+ * script, by `npm run build` and by `npm test`). No TypeScript compiler at run time.
  * Calculation by HyperFormula, used under its GPL-3.0 licence (see README, Headless runner).
  */
 'use strict';
 
+const fs = require('fs');
 const path = require('path');
 
 const root = path.resolve(__dirname, '..');
+const entry = path.join(root, 'build', 'cli', 'src', 'cli', 'main.js');
 
-require('ts-node').register({
-  transpileOnly: true,
-  skipProject: true,
-  // Paths are taken relative to the package, so its own sources are compiled (and its
-  // dependencies ignored) wherever it is installed and whatever the working directory.
-  cwd: root,
-  scope: true,
-  scopeDir: root,
-  compilerOptions: {
-    target: 'ES2020',
-    module: 'commonjs',
-    esModuleInterop: true,
-    resolveJsonModule: true,
-    sourceMap: true,
-  },
-});
+/** Compiles the runner once when a checkout has the compiler but no build yet. */
+function buildOnce() {
+  let tsc;
+  try {
+    tsc = require.resolve('typescript/bin/tsc', { paths: [root] });
+  } catch {
+    return false;
+  }
+  process.stderr.write('potentia: compiling the runner into build/cli (once)...\n');
+  const { spawnSync } = require('child_process');
+  const r = spawnSync(process.execPath, [tsc, '-p', path.join(root, 'tsconfig.build-cli.json')], {
+    cwd: root,
+    stdio: 'inherit',
+  });
+  return r.status === 0 && fs.existsSync(entry);
+}
 
-require(path.join(root, 'src', 'cli', 'main.ts')).run();
+if (fs.existsSync(entry) || buildOnce()) {
+  require(entry).run();
+} else {
+  process.stderr.write(
+    'potentia: the runner is not built (build/cli is missing).\n' +
+      'Build it with: npm run build:cli   (npm ci does it too)\n',
+  );
+  process.exitCode = 2;
+}
