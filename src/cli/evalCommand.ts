@@ -12,6 +12,7 @@ import { echemFunctionNames, HF_CONFIG, registerEchemFunctions } from './echemPl
 import { EXIT_CELL_ERRORS, EXIT_OK, UsageError } from './io';
 import type { Io } from './io';
 import { explainError, isHfError, spillSize } from './engineValues';
+import { formulaForEngine } from './formulaText';
 
 /** A computed value as eval reports it. */
 export type EvalCell = number | string | boolean | null | { error: string; message: string };
@@ -72,7 +73,7 @@ export function evaluateFormulas(formulas: readonly string[]): EvalResult[] {
   const names = formulas.map((_, i) => `F${i + 1}`);
   formulas.forEach((f, i) => {
     const text = f.trim();
-    sheets[names[i] as string] = [[text.startsWith('=') ? text : `=${text}`]];
+    sheets[names[i] as string] = [[formulaForEngine(text)]];
   });
   const hf = HyperFormula.buildFromSheets(sheets, { ...HF_CONFIG });
   try {

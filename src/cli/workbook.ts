@@ -20,6 +20,7 @@ import type { CellValue as HfCellValue, RawCellContent } from 'hyperformula';
 import { HF_CONFIG, registerEchemFunctions } from './echemPlugin';
 import { explainError, isHfError, spillSize } from './engineValues';
 import type { HfErrorValue } from './engineValues';
+import { formulaForEngine } from './formulaText';
 
 /** How a formula is stored in the file. */
 export type FormulaKind = 'single' | 'shared-master' | 'shared' | 'array';
@@ -118,14 +119,7 @@ function dateSerial(d: Date): number {
   return (d.getTime() - EXCEL_EPOCH_MS) / 86400000;
 }
 
-/**
- * Formula text as HyperFormula reads it: a leading "=", and without the prefixes that
- * spreadsheet files put before newer functions (`_xlfn.`, `_xlws.`).
- */
-export function formulaForEngine(stored: string): string {
-  const body = stored.startsWith('=') ? stored.slice(1) : stored;
-  return `=${body.replace(/_xlfn\.|_xlws\./gi, '')}`;
-}
+export { formulaForEngine } from './formulaText';
 
 export const ERROR_LITERALS = new Set(['#N/A', '#REF!', '#NAME?', '#DIV/0!', '#NULL!', '#VALUE!', '#NUM!']);
 
