@@ -21,6 +21,8 @@ import { HF_CONFIG, registerEchemFunctions } from './echemPlugin';
 import { explainError, isHfError, spillSize } from './engineValues';
 import type { HfErrorValue } from './engineValues';
 import { formulaForEngine } from './formulaText';
+import { UsageError } from './io';
+import { DEFAULT_MAX_CELLS, ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
 
 /** How a formula is stored in the file. */
 export type FormulaKind = 'single' | 'shared-master' | 'shared' | 'array';
@@ -140,8 +142,15 @@ function valueForEngine(v: ExcelJS.CellValue): RawCellContent {
   return null;
 }
 
-/** Reads a workbook's sheets, values and formulas for HyperFormula. */
-export function loadWorkbook(wb: ExcelJS.Workbook): LoadedWorkbook {
+/**
+ * Reads a workbook's sheets, values and formulas for HyperFormula.
+ *
+ * @param maxCells the most cells an array formula's range may cover (a range larger than
+ *   that, or past the engine's sheet size, is refused as damaged)
+ * @throws UsageError for a sheet larger than the calculation engine holds or an array
+ *   formula whose range is larger than any data
+ */
+export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MAX_CELLS): LoadedWorkbook {
   const sheetNames: string[] = [];
   const sheets: Record<string, RawCellContent[][]> = {};
   const formulas: FormulaCell[] = [];
@@ -149,6 +158,20 @@ export function loadWorkbook(wb: ExcelJS.Workbook): LoadedWorkbook {
   wb.worksheets.forEach((ws, sheetIndex) => {
     const name = ws.name;
     sheetNames.push(name);
+    const lastRow = ws.rowCount;
+    if (lastRow > ENGINE_MAX_ROWS) {
+      throw new UsageError(
+        `sheet "${name}" has data down to row ${lastRow.toLocaleString('en-US')}; the calculation engine holds ` +
+          `${ENGINE_MAX_ROWS.toLocaleString('en-US')} rows a sheet: split the sheet, or clear the cells below row ` +
+          `${ENGINE_MAX_ROWS.toLocaleString('en-US')} that hold stray content`,
+      );
+    }
+    if (ws.columnCount > ENGINE_MAX_COLUMNS) {
+      throw new UsageError(
+        `sheet "${name}" has data in column ${ws.columnCount.toLocaleString('en-US')}; the calculation engine holds ` +
+          `${ENGINE_MAX_COLUMNS.toLocaleString('en-US')} columns a sheet`,
+      );
+    }
     const grid: RawCellContent[][] = [];
     const put = (row: number, col: number, content: RawCellContent): void => {
       while (grid.length <= row) grid.push([]);
@@ -165,6 +188,14 @@ export function loadWorkbook(wb: ExcelJS.Workbook): LoadedWorkbook {
         if (cell.type === ExcelJS.ValueType.Formula && m && m.shareType === 'array' && m.ref) {
           const rg = parseRange(m.ref);
           if (!rg) return;
+          const area = (rg.bottom - rg.top + 1) * (rg.right - rg.left + 1);
+          if (area > maxCells || rg.bottom >= ENGINE_MAX_ROWS || rg.right >= ENGINE_MAX_COLUMNS) {
+            throw new UsageError(
+              `the array formula in ${name}!${a1(Number(cell.row) - 1, Number(cell.col) - 1)} claims the range ${m.ref} ` +
+                `(${area.toLocaleString('en-US')} cells), larger than the sheet's data or the engine's sheet; ` +
+                'the file is damaged: re-enter the formula in a spreadsheet program and save again',
+            );
+          }
           for (let r = rg.top; r <= rg.bottom; r++) {
             for (let c = rg.left; c <= rg.right; c++) {
               if (r !== Number(cell.row) - 1 || c !== Number(cell.col) - 1) covered.add(`${r},${c}`);
@@ -223,7 +254,17 @@ export function loadWorkbook(wb: ExcelJS.Workbook): LoadedWorkbook {
 /** Builds a HyperFormula engine (with the ECHEM functions) and computes the workbook. */
 export function buildEngine(loaded: LoadedWorkbook): { hf: HyperFormula; warnings: string[] } {
   registerEchemFunctions();
-  const hf = HyperFormula.buildFromSheets(loaded.sheets, { ...HF_CONFIG });
+  let hf: HyperFormula;
+  try {
+    hf = HyperFormula.buildFromSheets(loaded.sheets, { ...HF_CONFIG });
+  } catch (e) {
+    // The engine refuses what it cannot hold (sheet size, names): a limit, not a bug.
+    const message = e instanceof Error ? e.message : String(e);
+    if (e instanceof Error && /limit|exceed|size|invalid|sheet/i.test(`${e.name} ${message}`)) {
+      throw new UsageError(`the calculation engine cannot load this workbook: ${message}`);
+    }
+    throw e;
+  }
   const warnings: string[] = [];
   for (const n of loaded.names) {
     try {
