@@ -18,6 +18,7 @@ import { EXIT_CELL_ERRORS, EXIT_INTERNAL, EXIT_OK, EXIT_USAGE, UsageError } from
 import { checkPackage, DEFAULT_LIMITS, DEFAULT_MAX_CELLS, DEFAULT_MAX_UNCOMPRESSED_MB } from './limits';
 import type { ReadLimits } from './limits';
 import { checkOutput, writeFileAtomically } from './safeWrite';
+import { withDynamicArrays } from './dynamicArrays';
 import type { Io } from './io';
 import { buildEngine, loadWorkbook, writeResults } from './workbook';
 import type { RecalcSummary } from './workbook';
@@ -243,7 +244,7 @@ export async function recalcFile(
     progress.phase('saving', 1);
     let data: Uint8Array;
     try {
-      data = await workbookBytes(wb);
+      data = await withDynamicArrays(await workbookBytes(wb), summary.spillAnchors);
     } catch (e) {
       throw new UsageError(`cannot write ${output} (${e instanceof Error ? e.message : String(e)})`);
     }

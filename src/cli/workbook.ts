@@ -12,7 +12,8 @@
  * Writing: each formula cell keeps its formula and gets its newly computed result as the
  * cached value (what a spreadsheet program shows before it recalculates). A formula whose
  * result spills over several cells is written as an array formula over the spill range,
- * with the spilled values in the cells of that range.
+ * with the spilled values in the cells of that range, and then marked as a dynamic array
+ * (dynamicArrays.ts) when the file is saved.
  */
 import ExcelJS from 'exceljs';
 import { HyperFormula } from 'hyperformula';
@@ -65,6 +66,8 @@ export interface RecalcSummary {
   /** Cells written: formula cells plus cells filled by spills. */
   cellsComputed: number;
   errors: CellErrorReport[];
+  /** The anchor cells ("E7") of formulas written over a range, by sheet: written as dynamic arrays. */
+  spillAnchors: Map<string, Set<string>>;
 }
 
 interface FormulaModel {
@@ -311,6 +314,7 @@ export function writeResults(
   onProgress?: (done: number) => void,
 ): RecalcSummary {
   const errors: CellErrorReport[] = [];
+  const spillAnchors = new Map<string, Set<string>>();
   let cellsComputed = 0;
   let done = 0;
   for (const f of loaded.formulas) {
@@ -335,6 +339,9 @@ export function writeResults(
 
     const spills = size.width > 1 || size.height > 1;
     if (spills || f.kind === 'array') {
+      let onSheet = spillAnchors.get(f.sheet);
+      if (onSheet === undefined) spillAnchors.set(f.sheet, (onSheet = new Set()));
+      onSheet.add(a1(f.row, f.col));
       const ref = `${a1(f.row, f.col)}:${a1(f.row + size.height - 1, f.col + size.width - 1)}`;
       cell.value = { formula: f.formula, shareType: 'array', ref, result } as unknown as ExcelJS.CellValue;
       // Cells of the stored array range that the new result no longer covers are emptied.
@@ -382,5 +389,5 @@ export function writeResults(
     done++;
     onProgress?.(done);
   }
-  return { formulas: loaded.formulas.length, cellsComputed, errors };
+  return { formulas: loaded.formulas.length, cellsComputed, errors, spillAnchors };
 }
