@@ -8,4 +8,7 @@ module.exports = {
   },
   moduleFileExtensions: ['ts', 'js', 'json'],
   testTimeout: 60000,
+  // Two workers even on two cores: many suites wait on child processes (the runner, webpack,
+  // LibreOffice, the browser) rather than compute.
+  maxWorkers: 2,
 };
