@@ -88,6 +88,11 @@ export async function ensureCliBuilt(): Promise<void> {
       cwd: ROOT,
       stdio: 'pipe',
     });
+    // Mark the build current (an incremental build that changed nothing keeps its old date),
+    // so the launcher does not rebuild it again in each child process.
+    const info = path.join(ROOT, 'build', 'cli', '.tsbuildinfo');
+    const now = new Date();
+    if (fs.existsSync(info)) fs.utimesSync(info, now, now);
     cliBuilt = true;
   } finally {
     fs.rmdirSync(BUILD_LOCK);
