@@ -17,7 +17,9 @@ const launcher = path.join(root, 'bin', 'potentia.js');
 
 function timed(args) {
   const t0 = process.hrtime.bigint();
-  const r = spawnSync('/usr/bin/time', ['-f', '%M', process.execPath, launcher, ...args], { encoding: 'utf8' });
+  const r = spawnSync('/usr/bin/time', ['-f', '%M', process.execPath, launcher, ...args], {
+    encoding: 'utf8',
+  });
   const seconds = Number(process.hrtime.bigint() - t0) / 1e9;
   if (r.status !== 0) throw new Error(`potentia ${args.join(' ')} failed:\n${r.stdout}\n${r.stderr}`);
   const rssKb = Number((r.stderr.trim().split('\n').pop() || '0').trim());
