@@ -119,3 +119,4 @@ export {
 export { MAX_NOTATION_CHARS } from './notation/source';
 export { MAX_FORMULA_NESTING, MAX_ATOM_COUNT } from './notation/formula';
 export { MAX_CHARGE } from './notation/species';
+export { MAX_COEFFICIENT_PART } from './notation/reaction';

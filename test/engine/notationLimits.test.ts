@@ -91,11 +91,20 @@ describe('exact counts: never rounded', () => {
     expect(e.message).toContain('a charge larger than 12');
   });
 
-  test('coefficients are exact at any size, mixed numbers too', () => {
-    // 123456789012345678901½ = (2·123456789012345678901 + 1)/2 = 246913578024691357803/2, by hand.
-    const r = parseReaction('123456789012345678901½ O2 -> 2 O');
-    expect(r.reactants[0]?.coefficient).toEqual({ num: 246913578024691357803n, den: 2n });
-    expect(formatReaction(r)).toBe('246913578024691357803/2 O2 -> 2 O');
+  test('coefficients are exact up to 2^53 - 1, mixed numbers too', () => {
+    // 4503599627370495½ = (2·4503599627370495 + 1)/2 = 9007199254740991/2 = (2^53 - 1)/2, by hand.
+    const r = parseReaction('4503599627370495½ O2 -> 9007199254740991 O');
+    expect(r.reactants[0]?.coefficient).toEqual({ num: 9007199254740991n, den: 2n });
+    expect(formatReaction(r)).toBe('9007199254740991/2 O2 -> 9007199254740991 O');
+  });
+
+  test('a larger coefficient is refused, not rounded (and no function returns Infinity for it)', () => {
+    const n = `1${'0'.repeat(400)}`;
+    const text = `${n} Cu2+ + 2${n.slice(1)} e- -> ${n} Cu`;
+    expect(engineErrorOf(() => parseReaction(text)).message).toContain('too large to compute with exactly');
+    expect(engineErrorOf(() => parseReaction('123456789012345678901½ O2 -> O2')).kind).toBe('parse');
+    const cell = callFunction('ELECTRONS', [text])[0]?.[0];
+    expect(isCellError(cell)).toBe(true);
   });
 });
 
