@@ -106,6 +106,21 @@ export {
 export * from './activity';
 export * from './references';
 
+// runner and build (issue 10): the cache registry and the parser's limits
+export {
+  registerCache,
+  cacheStats,
+  approximateBytes,
+  ByteBoundedCache,
+  type CacheStats,
+  type CacheLimits,
+  type RegisteredCache,
+} from './cache';
+export { MAX_NOTATION_CHARS } from './notation/source';
+export { MAX_FORMULA_NESTING, MAX_ATOM_COUNT } from './notation/formula';
+export { MAX_CHARGE } from './notation/species';
+export { MAX_COEFFICIENT_PART } from './notation/reaction';
+
 // species-header grammar (i11): one reading of `left:Ag+`, `l:Ag+`, `pH`, `left:pH`
 export {
   type SpeciesHeaderParts,

@@ -4,6 +4,7 @@
  */
 import {
   STANDARD_TEMP_C,
+  registerCache,
   bindSpecies,
   compiledReaction,
   describeDiagram,
@@ -33,8 +34,8 @@ type Quantity = 'potential' | 'log10Q';
 let lastPrepared: { reaction: string; species: Scalar[]; table: Arg; binding: Binding } | null = null;
 
 /**
- * The one-entry cache above, in the shape of the engine's cache registry (name, clear, stats),
- * so that the registry's one clear empties it too.
+ * The one-entry cache above, in the engine's cache registry (name, clear, stats), so that the
+ * registry's one clear empties it too.
  */
 export const LAST_NERNST_CALL_CACHE = {
   name: 'functions.lastNernstCall',
@@ -45,6 +46,7 @@ export const LAST_NERNST_CALL_CACHE = {
     return { name: 'functions.lastNernstCall', entries: lastPrepared ? 1 : 0, bytes: 0 };
   },
 };
+registerCache(LAST_NERNST_CALL_CACHE);
 
 function scalarOf(a: Arg): Scalar | undefined {
   if (!Array.isArray(a)) return a;
