@@ -198,6 +198,12 @@ export interface FunctionSpec {
    * EngineError for a bad case: it becomes that case's error cell.
    */
   readonly perCase?: (a: CaseArgs, call: CallArgs) => ResultCell | ResultCell[];
-  /** The computation over all cases at once (sweeps with a fast path, listings). */
+  /** The computation over all cases at once (sweeps, listings). */
   readonly run?: (call: CallArgs) => Result;
+  /**
+   * Optional, before any argument is read: the same result as the computation for a call of a
+   * shape it recognises (a repeated sweep), or null. It must apply the same checks and the
+   * error policy itself (reader.ts `propagateInputErrors`).
+   */
+  readonly fast?: (args: readonly Arg[]) => Result | null;
 }

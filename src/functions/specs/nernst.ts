@@ -16,7 +16,7 @@ import {
 import type { Arg, Result, ResultCell, Scalar } from '../cellTypes';
 import { asGrid } from '../args';
 import { cellError, toCellError } from '../errorCodes';
-import { finiteCell } from '../spec/reader';
+import { finiteCell, propagateInputErrors } from '../spec/reader';
 import { readTempC } from '../spec/kinds';
 import { ACTIVITIES, OPTIONAL_SPECIES_HEADER, REACTION, SPECIES_HEADER, TABLE, TEMP_C } from '../spec/params';
 import type { CallArgs, FunctionSpec } from '../spec/types';
@@ -31,7 +31,7 @@ const ZN_E0 = 'E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
 type Quantity = 'potential' | 'log10Q';
 
 /** The last prepared single-reaction call: repeated calls skip compiling and binding. */
-let lastPrepared: { reaction: string; species: Scalar[]; table: Arg; binding: Binding } | null = null;
+let lastPrepared: { reaction: string; species: Scalar[]; headers: string[]; table: Arg; binding: Binding } | null = null;
 
 /**
  * The one-entry cache above, in the engine's cache registry (name, clear, stats), so that the
@@ -80,7 +80,8 @@ function fastNernst(args: readonly Arg[], quantity: Quantity): Result | null {
     return null;
   // the one temperature check, also on the fast path
   const tempC = readTempC(t, TEMP_C);
-  return sweepToColumn<ResultCell>(p.binding, values as Scalar[][], tempC, quantity, toCellError);
+  const result = sweepToColumn<ResultCell>(p.binding, values as Scalar[][], tempC, quantity, toCellError);
+  return propagateInputErrors(result, values as Scalar[][], p.headers, 'values');
 }
 
 function toColumn(res: { values: Float64Array; errors: ReadonlyMap<number, unknown> }, n: number): Result {
@@ -107,7 +108,7 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
     const reaction = call.raw('reaction');
     lastPrepared =
       sg && sg.length === 1 && typeof reaction === 'string' && text === reaction
-        ? { reaction, species: sg[0]!.slice(), table: call.raw('table'), binding: b }
+        ? { reaction, species: sg[0]!.slice(), headers, table: call.raw('table'), binding: b }
         : null;
     const temps = quantity === 'potential' ? call.column('temp_C') : null;
     if (!temps || temps.length === 1) return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
@@ -159,13 +160,9 @@ const POTENTIAL: FunctionSpec = {
       source: `E°(O2/H2O) = 1.229 V, OpenStax Chemistry 2e, Appendix L; ${DERIVED}`,
     },
   ],
-  run: (call) => fastNernst(argsOf(call, 5), 'potential') ?? nernstCases(call, 'potential'),
+  fast: (args) => fastNernst(args, 'potential'),
+  run: (call) => nernstCases(call, 'potential'),
 };
-
-function argsOf(call: CallArgs, n: number): Arg[] {
-  const names = ['reaction', 'species', 'values', n === 5 ? 'temp_C' : 'table', 'table'].slice(0, n);
-  return names.map((name) => call.raw(name));
-}
 
 const STDPOTENTIAL: FunctionSpec = {
   id: 'STDPOTENTIAL',
@@ -229,7 +226,8 @@ const LOGQ: FunctionSpec = {
       source: 'derived by hand: log10(0.1/0.01)',
     },
   ],
-  run: (call) => fastNernst(argsOf(call, 4), 'log10Q') ?? nernstCases(call, 'log10Q'),
+  fast: (args) => fastNernst(args, 'log10Q'),
+  run: (call) => nernstCases(call, 'log10Q'),
 };
 
 const CELLNOTATION: FunctionSpec = {
