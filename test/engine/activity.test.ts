@@ -87,7 +87,11 @@ describe('Debye–Hückel constants', () => {
   // to the published 60 °C row (Freeze & Cherry 1979, seen).
   const eps = (t: number): number => 87.74 - 0.40008 * t + 9.398e-4 * t * t - 1.41e-6 * t ** 3;
   const rho = (t: number): number =>
-    (999.83952 + 16.945176 * t - 7.9870401e-3 * t * t - 46.170461e-6 * t ** 3 + 105.56302e-9 * t ** 4 -
+    (999.83952 +
+      16.945176 * t -
+      7.9870401e-3 * t * t -
+      46.170461e-6 * t ** 3 +
+      105.56302e-9 * t ** 4 -
       280.54253e-12 * t ** 5) /
     (1 + 16.87985e-3 * t);
   const aShape = (t: number): number => Math.sqrt(rho(t)) / Math.pow(eps(t) * (t + 273.15), 1.5);

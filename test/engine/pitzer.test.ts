@@ -70,8 +70,23 @@ describe('Pitzer γ± against Robinson & Stokes Appendix 8.10 (25 °C, from memo
   });
 
   it('covers every required salt at four or more molalities up to its limit', () => {
-    const required = ['NaCl', 'KCl', 'LiCl', 'HCl', 'NaOH', 'KOH', 'CaCl2', 'MgCl2', 'ZnCl2', 'Na2SO4', 'K2SO4',
-      'MgSO4', 'CuSO4', 'ZnSO4', 'NiSO4'];
+    const required = [
+      'NaCl',
+      'KCl',
+      'LiCl',
+      'HCl',
+      'NaOH',
+      'KOH',
+      'CaCl2',
+      'MgCl2',
+      'ZnCl2',
+      'Na2SO4',
+      'K2SO4',
+      'MgSO4',
+      'CuSO4',
+      'ZnSO4',
+      'NiSO4',
+    ];
     for (const salt of required) {
       const row = PITZER_BINARY.find((r) => r.salt === salt);
       expect(row).toBeDefined();
@@ -83,10 +98,18 @@ describe('Pitzer γ± against Robinson & Stokes Appendix 8.10 (25 °C, from memo
 
   // Kaye & Laby §3.9.6 (seen; stated accuracy ±0.002): the model within ±0.003
   it.each([
-    ['HCl', 0.01, 0.904], ['NaCl', 0.01, 0.902], ['KCl', 0.01, 0.901],
-    ['HCl', 0.05, 0.830], ['NaCl', 0.05, 0.820], ['KCl', 0.05, 0.816],
-    ['HCl', 0.2, 0.767], ['NaCl', 0.2, 0.735], ['KCl', 0.2, 0.718],
-    ['HCl', 0.4, 0.755], ['NaCl', 0.4, 0.693], ['KCl', 0.4, 0.666],
+    ['HCl', 0.01, 0.904],
+    ['NaCl', 0.01, 0.902],
+    ['KCl', 0.01, 0.901],
+    ['HCl', 0.05, 0.83],
+    ['NaCl', 0.05, 0.82],
+    ['KCl', 0.05, 0.816],
+    ['HCl', 0.2, 0.767],
+    ['NaCl', 0.2, 0.735],
+    ['KCl', 0.2, 0.718],
+    ['HCl', 0.4, 0.755],
+    ['NaCl', 0.4, 0.693],
+    ['KCl', 0.4, 0.666],
   ] as [string, number, number][])('%s %d mol/kg: Kaye & Laby γ± %d within 0.003', (salt, m, kl) => {
     expect(Math.abs(pitzerMeanActivityCoefficient(salt, m) - kl)).toBeLessThanOrEqual(0.003);
   });
@@ -141,7 +164,9 @@ describe('the Pitzer equations (by hand)', () => {
     // at m = 1e-7 only the Debye–Hückel term matters: ln γ± ≈ −A_φ |z+z−| 3√I (b√I ≪ 1)
     const m = 1e-7;
     const I = 3 * m; // Na2SO4
-    expect(Math.log(pitzerMeanActivityCoefficient('Na2SO4', m)) / (-0.3915 * 2 * 3 * Math.sqrt(I))).toBeCloseTo(1, 2);
+    expect(
+      Math.log(pitzerMeanActivityCoefficient('Na2SO4', m)) / (-0.3915 * 2 * 3 * Math.sqrt(I)),
+    ).toBeCloseTo(1, 2);
   });
 });
 
@@ -151,19 +176,29 @@ describe('A_φ(T)', () => {
   });
   // derived here: A_φ = (1/3)√(2πN_Aρ)(e²/(4πε0 εkT))^{3/2}, ε from Malmberg & Maryott 1956 and ρ from
   // Kell 1975 (both from memory); the two descriptions of water agree within 0.004
-  it.each([[0], [25], [50], [75], [100]])('at %d °C agrees with the Debye–Hückel A_φ from ε(T), ρ(T) (derived)', (t) => {
-    const eps = 87.74 - 0.40008 * t + 9.398e-4 * t * t - 1.41e-6 * t ** 3;
-    const rho =
-      (999.83952 + 16.945176 * t - 7.9870401e-3 * t * t - 46.170461e-6 * t ** 3 + 105.56302e-9 * t ** 4 -
-        280.54253e-12 * t ** 5) /
-      (1 + 16.87985e-3 * t);
-    const NA = 6.02214076e23;
-    const e = 1.602176634e-19;
-    const k = 1.380649e-23;
-    const e0 = 8.8541878128e-12; // CODATA 2018
-    const aphi = (1 / 3) * Math.sqrt(2 * Math.PI * NA * rho) * Math.pow((e * e) / (4 * Math.PI * e0 * eps * k * (t + 273.15)), 1.5);
-    expect(Math.abs(pitzerAphi(t) - aphi)).toBeLessThan(0.004);
-  });
+  it.each([[0], [25], [50], [75], [100]])(
+    'at %d °C agrees with the Debye–Hückel A_φ from ε(T), ρ(T) (derived)',
+    (t) => {
+      const eps = 87.74 - 0.40008 * t + 9.398e-4 * t * t - 1.41e-6 * t ** 3;
+      const rho =
+        (999.83952 +
+          16.945176 * t -
+          7.9870401e-3 * t * t -
+          46.170461e-6 * t ** 3 +
+          105.56302e-9 * t ** 4 -
+          280.54253e-12 * t ** 5) /
+        (1 + 16.87985e-3 * t);
+      const NA = 6.02214076e23;
+      const e = 1.602176634e-19;
+      const k = 1.380649e-23;
+      const e0 = 8.8541878128e-12; // CODATA 2018
+      const aphi =
+        (1 / 3) *
+        Math.sqrt(2 * Math.PI * NA * rho) *
+        Math.pow((e * e) / (4 * Math.PI * e0 * eps * k * (t + 273.15)), 1.5);
+      expect(Math.abs(pitzerAphi(t) - aphi)).toBeLessThan(0.004);
+    },
+  );
   it('refuses temperatures outside 0–100 °C', () => {
     for (const t of [-1, 101, NaN]) {
       const err = engineErrorOf(() => pitzerAphi(t));
@@ -183,7 +218,9 @@ describe('NaCl away from 25 °C (Silvester & Pitzer 1977 first derivatives, from
     expect(Math.abs(pitzerMeanActivityCoefficient('NaCl', m, t) - published)).toBeLessThanOrEqual(0.01);
   });
   it('γ± at 1 mol/kg rises with temperature from 0 to 50 °C (Harned & Owen, from memory)', () => {
-    expect(pitzerMeanActivityCoefficient('NaCl', 1, 50)).toBeGreaterThan(pitzerMeanActivityCoefficient('NaCl', 1, 0));
+    expect(pitzerMeanActivityCoefficient('NaCl', 1, 50)).toBeGreaterThan(
+      pitzerMeanActivityCoefficient('NaCl', 1, 0),
+    );
   });
 });
 
@@ -196,7 +233,9 @@ describe('the column form for sweeps', () => {
     ms.forEach((m, i) => expect(out[i]).toBe(pitzerMeanActivityCoefficient('NaCl', m)));
   });
   it('refuses a molality beyond the limit in the column, unless extrapolating', () => {
-    expect(engineErrorOf(() => pitzerMeanActivityCoefficients('KCl', [1, 5]))).toMatchObject({ kind: 'argument' });
+    expect(engineErrorOf(() => pitzerMeanActivityCoefficients('KCl', [1, 5]))).toMatchObject({
+      kind: 'argument',
+    });
     expect(pitzerMeanActivityCoefficients('KCl', [1, 5], 25, { extrapolate: true })[1]).toBeGreaterThan(0.5);
   });
 });

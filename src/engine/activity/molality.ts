@@ -6,7 +6,11 @@
  */
 import { EngineError } from '../errors';
 import { countElements } from '../notation/formula';
-import { SALT_ATOMIC_WEIGHTS, SOLUTION_DENSITIES, type SolutionDensityTable } from '../data/solutionDensities';
+import {
+  SALT_ATOMIC_WEIGHTS,
+  SOLUTION_DENSITIES,
+  type SolutionDensityTable,
+} from '../data/solutionDensities';
 import { parseSalt } from './salt';
 
 /**
@@ -42,7 +46,7 @@ for (const t of SOLUTION_DENSITIES) {
   const M = saltMolarMass(t.salt);
   compiled.set(t.salt, {
     table: t,
-    molarity: Float64Array.from(t.rows, ([w, rho]) => (w / 100) * rho * 1000 / M),
+    molarity: Float64Array.from(t.rows, ([w, rho]) => ((w / 100) * rho * 1000) / M),
     density: Float64Array.from(t.rows, ([, rho]) => rho),
   });
 }
@@ -117,10 +121,18 @@ export function molalityFromMolarity(
   tempC = 25,
 ): number {
   if (typeof molarityMolL !== 'number' || !Number.isFinite(molarityMolL) || molarityMolL < 0) {
-    throw new EngineError('argument', `molarity must be a finite number ≥ 0 mol/L; got ${String(molarityMolL)}.`, 'molarity');
+    throw new EngineError(
+      'argument',
+      `molarity must be a finite number ≥ 0 mol/L; got ${String(molarityMolL)}.`,
+      'molarity',
+    );
   }
   if (typeof tempC !== 'number' || !Number.isFinite(tempC)) {
-    throw new EngineError('argument', `temp_C must be a finite temperature in °C; got ${String(tempC)}.`, 'temp_C');
+    throw new EngineError(
+      'argument',
+      `temp_C must be a finite temperature in °C; got ${String(tempC)}.`,
+      'temp_C',
+    );
   }
   const M = saltMolarMass(saltText);
   let rho: number;
@@ -136,7 +148,12 @@ export function molalityFromMolarity(
     }
     rho = held;
   } else {
-    if (typeof densityGcm3 !== 'number' || !Number.isFinite(densityGcm3) || densityGcm3 < 0.5 || densityGcm3 > 3) {
+    if (
+      typeof densityGcm3 !== 'number' ||
+      !Number.isFinite(densityGcm3) ||
+      densityGcm3 < 0.5 ||
+      densityGcm3 > 3
+    ) {
       throw new EngineError(
         'argument',
         `density_g_cm3 must be a solution density between 0.5 and 3 g/cm³; got ${String(densityGcm3)}.`,

@@ -51,7 +51,12 @@ export function pitzerAphi(tempC: number): number {
 }
 
 function checkAphiTemp(tempC: number): void {
-  if (typeof tempC !== 'number' || !Number.isFinite(tempC) || tempC < APHI_TEMP_RANGE_C[0] || tempC > APHI_TEMP_RANGE_C[1]) {
+  if (
+    typeof tempC !== 'number' ||
+    !Number.isFinite(tempC) ||
+    tempC < APHI_TEMP_RANGE_C[0] ||
+    tempC > APHI_TEMP_RANGE_C[1]
+  ) {
     throw new EngineError(
       'argument',
       `temp_C must be between 0 and 100 °C for the Pitzer model (the aqueous range of its Debye–Hückel slope, ` +
@@ -165,7 +170,11 @@ function fmt(x: number): string {
 /** Range checks of a single-salt evaluation. */
 export function checkSaltRange(c: CompiledPitzerSalt, m: number, tempC: number, extrapolate: boolean): void {
   if (typeof m !== 'number' || !Number.isFinite(m) || m < 0) {
-    throw new EngineError('argument', `molality must be a finite number ≥ 0 mol/kg; got ${String(m)}.`, 'molality');
+    throw new EngineError(
+      'argument',
+      `molality must be a finite number ≥ 0 mol/kg; got ${String(m)}.`,
+      'molality',
+    );
   }
   checkAphiTemp(tempC);
   if (extrapolate) return;
@@ -183,8 +192,10 @@ export function checkSaltRange(c: CompiledPitzerSalt, m: number, tempC: number, 
     const range = t0 === t1 ? `${t0} °C only` : `${t0}–${t1} °C`;
     throw new EngineError(
       'argument',
-      `temp_C ${fmt(tempC)} °C is outside the range of the Pitzer parameters of ${r.salt} (${range}, ${r.source}); ` +
-        `use 25 °C, model "davies" (0–100 °C, I ≤ 0.5 mol/kg), or pass extrapolate to use the 25 °C parameters.`,
+      `temp_C ${fmt(tempC)} °C is outside the range of the Pitzer parameters of ${r.salt} (${range}, ` +
+        `${r.dTemp ? r.dTemp.source : r.source}); use ${t0 === t1 ? '25 °C' : 'a temperature in that range'}, ` +
+        `model "davies" (0–100 °C, I ≤ 0.5 mol/kg), or pass extrapolate to use ` +
+        `${r.dTemp ? 'the linear temperature dependence beyond its range' : 'the 25 °C parameters'}.`,
       'temp_C',
     );
   }
@@ -231,7 +242,12 @@ export function pitzerSaltKernel(
 const scratchParams = new Float64Array(4);
 const scratchOut = new Float64Array(2);
 
-function evaluate(saltText: string, m: number, tempC: number, opts: ActivityOptions | undefined): CompiledPitzerSalt {
+function evaluate(
+  saltText: string,
+  m: number,
+  tempC: number,
+  opts: ActivityOptions | undefined,
+): CompiledPitzerSalt {
   const c = compilePitzerSalt(saltText);
   checkSaltRange(c, m, tempC, opts?.extrapolate === true);
   binaryAt(c.row, tempC, scratchParams);
@@ -250,7 +266,11 @@ function evaluate(saltText: string, m: number, tempC: number, opts: ActivityOpti
 
 function finite(x: number, what: string): number {
   if (!Number.isFinite(x) || x <= 0) {
-    throw new EngineError('range', `the Pitzer model gives ${what} outside the number range here.`, 'molality');
+    throw new EngineError(
+      'range',
+      `the Pitzer model gives ${what} outside the number range here.`,
+      'molality',
+    );
   }
   return x;
 }
@@ -306,7 +326,11 @@ export function pitzerOsmoticCoefficient(
   evaluate(saltText, molalityMolKg, tempC, opts);
   const phi = 1 + (scratchOut[1] as number);
   if (!Number.isFinite(phi)) {
-    throw new EngineError('range', 'the Pitzer model gives an osmotic coefficient outside the number range here.', 'molality');
+    throw new EngineError(
+      'range',
+      'the Pitzer model gives an osmotic coefficient outside the number range here.',
+      'molality',
+    );
   }
   return phi;
 }

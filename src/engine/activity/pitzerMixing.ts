@@ -110,7 +110,10 @@ export interface PitzerMixtureResult {
   readonly totalMolalityMolKg: number;
 }
 
-const labelCache = new Map<string, { label: string; z: number; neutral: boolean; water: boolean; ph: boolean }>();
+const labelCache = new Map<
+  string,
+  { label: string; z: number; neutral: boolean; water: boolean; ph: boolean }
+>();
 
 function readSpecies(text: string) {
   const hit = labelCache.get(text);
@@ -123,7 +126,11 @@ function readSpecies(text: string) {
   else {
     const s = parseSpecies(text, 'species');
     if (s.isElectron) {
-      throw new EngineError('argument', 'species "e-" is the electron, which has no activity in solution.', 'species');
+      throw new EngineError(
+        'argument',
+        'species "e-" is the electron, which has no activity in solution.',
+        'species',
+      );
     }
     const label = formatSpecies(s, false);
     const phase = s.phase;
@@ -185,7 +192,11 @@ export function pitzerMixture(
     const m = molalities[i] as number;
     if (info.ph) {
       if (typeof m !== 'number' || !Number.isFinite(m))
-        throw new EngineError('argument', `the pH value must be a finite number; got ${String(m)}.`, 'values');
+        throw new EngineError(
+          'argument',
+          `the pH value must be a finite number; got ${String(m)}.`,
+          'values',
+        );
       continue;
     }
     if (typeof m !== 'number' || !Number.isFinite(m) || m < 0) {
@@ -262,7 +273,7 @@ export function pitzerMixture(
       pairs[i * na + j] = p;
       alphas[2 * (i * na + j)] = row.alpha1;
       alphas[2 * (i * na + j) + 1] = row.alpha2;
-      maxI = Math.max(maxI, row.maxMolalityMolKg * 0.5 * (c.z * a.z) * (c.z + a.z) / gcdIons(c.z, a.z));
+      maxI = Math.max(maxI, (row.maxMolalityMolKg * 0.5 * (c.z * a.z) * (c.z + a.z)) / gcdIons(c.z, a.z));
     }
   if (!extrapolate) {
     const limit = Math.min(PITZER_MIXTURE_MAX_IONIC_STRENGTH, rowsUsed.length === 0 ? Infinity : maxI);
@@ -380,7 +391,8 @@ export function pitzerMixture(
   for (let i = 0; i < nc; i++) {
     const M = cations[i] as Ion;
     let v = M.z * M.z * F + M.z * CC;
-    for (let j = 0; j < na; j++) v += (anions[j] as Ion).m * (2 * (B[i * na + j] as number) + Z * (C[i * na + j] as number));
+    for (let j = 0; j < na; j++)
+      v += (anions[j] as Ion).m * (2 * (B[i * na + j] as number) + Z * (C[i * na + j] as number));
     for (let k = 0; k < nc; k++) {
       if (k === i) continue;
       const c = cations[k] as Ion;
@@ -390,14 +402,18 @@ export function pitzerMixture(
     }
     for (let j = 0; j < na; j++)
       for (let k = j + 1; k < na; k++)
-        v += (anions[j] as Ion).m * (anions[k] as Ion).m * psi((anions[j] as Ion).label, (anions[k] as Ion).label, M.label);
+        v +=
+          (anions[j] as Ion).m *
+          (anions[k] as Ion).m *
+          psi((anions[j] as Ion).label, (anions[k] as Ion).label, M.label);
     lnC[i] = v;
   }
   const lnA = new Float64Array(na);
   for (let j = 0; j < na; j++) {
     const X = anions[j] as Ion;
     let v = X.z * X.z * F + X.z * CC;
-    for (let i = 0; i < nc; i++) v += (cations[i] as Ion).m * (2 * (B[i * na + j] as number) + Z * (C[i * na + j] as number));
+    for (let i = 0; i < nc; i++)
+      v += (cations[i] as Ion).m * (2 * (B[i * na + j] as number) + Z * (C[i * na + j] as number));
     for (let k = 0; k < na; k++) {
       if (k === j) continue;
       const a = anions[k] as Ion;
@@ -407,7 +423,10 @@ export function pitzerMixture(
     }
     for (let i = 0; i < nc; i++)
       for (let k = i + 1; k < nc; k++)
-        v += (cations[i] as Ion).m * (cations[k] as Ion).m * psi((cations[i] as Ion).label, (cations[k] as Ion).label, X.label);
+        v +=
+          (cations[i] as Ion).m *
+          (cations[k] as Ion).m *
+          psi((cations[i] as Ion).label, (cations[k] as Ion).label, X.label);
     lnA[j] = v;
   }
   const total = ionSum + neutralSum;
@@ -428,7 +447,11 @@ export function pitzerMixture(
     gamma[i] = g;
   }
   if (!Number.isFinite(phi)) {
-    throw new EngineError('range', 'the Pitzer model gives an osmotic coefficient outside the number range.', 'values');
+    throw new EngineError(
+      'range',
+      'the Pitzer model gives an osmotic coefficient outside the number range.',
+      'values',
+    );
   }
   return { gamma, osmoticCoefficient: phi, ionicStrengthMolKg: I, totalMolalityMolKg: total };
 }

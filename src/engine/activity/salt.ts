@@ -45,7 +45,11 @@ export function parseSalt(text: string, argName = 'salt'): SaltIons {
   const hit = cache.get(text);
   if (hit) return hit;
   if (typeof text !== 'string' || text.trim() === '') {
-    throw new EngineError('argument', `${argName} must be a salt formula such as "NaCl" or "CuSO4".`, argName);
+    throw new EngineError(
+      'argument',
+      `${argName} must be a salt formula such as "NaCl" or "CuSO4".`,
+      argName,
+    );
   }
   const s = parseSpecies(text.trim(), argName);
   if (s.isElectron || s.charge !== 0) {

@@ -22,7 +22,11 @@ function phiAndTotal(
 ): [number, number] {
   if (isSpeciesList(saltOrSpecies)) {
     if (!Array.isArray(molalityOrValues)) {
-      throw new EngineError('shape', 'give one molality per species (values must be a row like species).', 'values');
+      throw new EngineError(
+        'shape',
+        'give one molality per species (values must be a row like species).',
+        'values',
+      );
     }
     const r = pitzerMixture(saltOrSpecies, molalityOrValues as readonly number[], tempC, opts);
     return [r.osmoticCoefficient, r.totalMolalityMolKg];

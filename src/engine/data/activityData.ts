@@ -200,6 +200,7 @@ export const ACTIVITY_MODEL_RANGES: Readonly<Record<DebyeHuckelFamilyModel, Acti
     maxIonicStrengthMolKg: 0.5,
     tempRangeC: [0, 100],
     source: 'Davies, Ion Association (1962)',
-    better: 'model "pitzer" with the composition (MEANACTCOEF for a salt, ACTIVITY with species and molalities for a mixture)',
+    better:
+      'model "pitzer" with the composition (MEANACTCOEF for a salt, ACTIVITY with species and molalities for a mixture)',
   },
 };

@@ -43,7 +43,12 @@ export interface PitzerBinaryRow {
    * First temperature derivatives at 25 °C (per K) of β(0), β(1), Cφ, where the source gives
    * them; the parameters then vary linearly in T within the row's temperature range.
    */
-  readonly dTemp?: { readonly beta0: number; readonly beta1: number; readonly cphi: number; readonly source: string };
+  readonly dTemp?: {
+    readonly beta0: number;
+    readonly beta1: number;
+    readonly cphi: number;
+    readonly source: string;
+  };
   /** Temperature range of validity, °C; [25, 25] where the source gives 25 °C only. */
   readonly tempRangeC: readonly [number, number];
 }

@@ -22,7 +22,8 @@ export interface SolutionDensityTable {
   readonly source: string;
 }
 
-const CRC = 'CRC Handbook of Chemistry and Physics, "Concentrative properties of aqueous solutions", 20 °C (from memory)';
+const CRC =
+  'CRC Handbook of Chemistry and Physics, "Concentrative properties of aqueous solutions", 20 °C (from memory)';
 
 /**
  * Solution densities held (NaCl and KCl at 20 °C, CRC Handbook, from memory). Pure water at
@@ -59,10 +60,39 @@ export const SOLUTION_DENSITIES: readonly SolutionDensityTable[] = [
  * SALT_ATOMIC_WEIGHTS.Na // 22.990
  */
 export const SALT_ATOMIC_WEIGHTS: Readonly<Record<string, number>> = {
-  H: 1.008, Li: 6.94, C: 12.011, N: 14.007, O: 15.999, F: 18.998, Na: 22.99, Mg: 24.305, Al: 26.982,
-  S: 32.06, Cl: 35.45, K: 39.098, Ca: 40.078, Cr: 51.996, Mn: 54.938, Fe: 55.845, Co: 58.933,
-  Ni: 58.693, Cu: 63.546, Zn: 65.38, Br: 79.904, Rb: 85.468, Sr: 87.62, Ag: 107.87, Cd: 112.41,
-  In: 114.82, Sn: 118.71, I: 126.9, Cs: 132.91, Ba: 137.33, Ce: 140.12, Hg: 200.59, Tl: 204.38,
+  H: 1.008,
+  Li: 6.94,
+  C: 12.011,
+  N: 14.007,
+  O: 15.999,
+  F: 18.998,
+  Na: 22.99,
+  Mg: 24.305,
+  Al: 26.982,
+  S: 32.06,
+  Cl: 35.45,
+  K: 39.098,
+  Ca: 40.078,
+  Cr: 51.996,
+  Mn: 54.938,
+  Fe: 55.845,
+  Co: 58.933,
+  Ni: 58.693,
+  Cu: 63.546,
+  Zn: 65.38,
+  Br: 79.904,
+  Rb: 85.468,
+  Sr: 87.62,
+  Ag: 107.87,
+  Cd: 112.41,
+  In: 114.82,
+  Sn: 118.71,
+  I: 126.9,
+  Cs: 132.91,
+  Ba: 137.33,
+  Ce: 140.12,
+  Hg: 200.59,
+  Tl: 204.38,
   Pb: 207.2,
 };
 
