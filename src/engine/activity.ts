@@ -309,8 +309,8 @@ function checkModel(model: ActivityModel, allowPitzer = false): void {
   if (model === 'pitzer' && !allowPitzer) {
     throw new EngineError(
       'argument',
-      'model "pitzer" needs the composition, not only the ionic strength: use MEANACTCOEF(salt, molality) ' +
-        'for a salt, or ACTIVITY(species, values, "pitzer") for an ion in a mixture.',
+      'model "pitzer" needs the composition, not only the ionic strength: give the salt and its molality ' +
+        '(mean activity coefficient), or the species and molalities of the whole mixture (activities).',
       'model',
     );
   }
@@ -343,7 +343,7 @@ function checkModelRange(
     throw new EngineError(
       'argument',
       `${argName} ${fmtNumber(ionicStrength)} mol/kg is outside the range of the ${model} model ` +
-        `(I ≤ ${r.maxIonicStrengthMolKg} mol/kg, ${r.source}); use ${r.better}, or set extrapolate to accept ` +
+        `(I ≤ ${r.maxIonicStrengthMolKg} mol/kg, ${r.source}); use ${r.better}, or set extrapolate to TRUE to accept ` +
         `an extrapolation.`,
       argName,
     );

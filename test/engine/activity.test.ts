@@ -452,7 +452,7 @@ describe('bad inputs', () => {
       () => ionActivityCoefficient('Cu2+', 0.1, 'pitzer'),
       'argument',
       'model',
-      /needs the composition.*MEANACTCOEF.*ACTIVITY/,
+      /needs the composition.*salt and its molality.*mixture/,
     ],
     [
       'extended without a known size',

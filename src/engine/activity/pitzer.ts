@@ -183,7 +183,7 @@ export function checkSaltRange(c: CompiledPitzerSalt, m: number, tempC: number, 
     throw new EngineError(
       'argument',
       `molality ${fmt(m)} mol/kg of ${r.salt} is beyond the Pitzer fit (0–${r.maxMolalityMolKg} mol/kg, ${r.source}); ` +
-        `no held model covers it: pass extrapolate to accept an extrapolation.`,
+        `no held model covers it: set extrapolate to TRUE to accept an extrapolation.`,
       'molality',
     );
   }
@@ -194,7 +194,7 @@ export function checkSaltRange(c: CompiledPitzerSalt, m: number, tempC: number, 
       'argument',
       `temp_C ${fmt(tempC)} °C is outside the range of the Pitzer parameters of ${r.salt} (${range}, ` +
         `${r.dTemp ? r.dTemp.source : r.source}); use ${t0 === t1 ? '25 °C' : 'a temperature in that range'}, ` +
-        `model "davies" (0–100 °C, I ≤ 0.5 mol/kg), or pass extrapolate to use ` +
+        `model "davies" (0–100 °C, I ≤ 0.5 mol/kg), or set extrapolate to TRUE to use ` +
         `${r.dTemp ? 'the linear temperature dependence beyond its range' : 'the 25 °C parameters'}.`,
       'temp_C',
     );

@@ -282,7 +282,7 @@ export function pitzerMixture(
         'argument',
         `ionic strength ${fmt(I)} mol/kg is beyond the Pitzer model's range for this solution (I ≤ ${fmt(limit)} ` +
           `mol/kg: the largest binary limit of its salts, and 6 mol/kg for mixtures, ${PITZER_MIXING_SOURCE}); ` +
-          `pass extrapolate to accept an extrapolation.`,
+          `set extrapolate to TRUE to accept an extrapolation.`,
         'values',
       );
     }
@@ -295,7 +295,7 @@ export function pitzerMixture(
         'argument',
         `temp_C ${fmt(tempC)} °C is outside the range of the Pitzer parameters for this solution (${range}; the ` +
           `mixing parameters are 25 °C values, ${PITZER_MIXING_SOURCE}); use 25 °C, model "davies" (0–100 °C, ` +
-          `I ≤ 0.5 mol/kg), or pass extrapolate to use the 25 °C parameters.`,
+          `I ≤ 0.5 mol/kg), or set extrapolate to TRUE to use the 25 °C parameters.`,
         'temp_C',
       );
     }

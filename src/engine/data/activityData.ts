@@ -193,7 +193,8 @@ export const ACTIVITY_MODEL_RANGES: Readonly<Record<DebyeHuckelFamilyModel, Acti
     maxIonicStrengthMolKg: 0.1,
     tempRangeC: [0, 100],
     source: 'extended Debye–Hückel with Kielland ion sizes; common practice',
-    better: 'model "davies" (to 0.5 mol/kg), or "pitzer" with the composition for a stated salt or mixture',
+    better:
+      'model "davies" (to 0.5 mol/kg), or "pitzer" with the composition (a salt and its molality, or the species and molalities of a mixture)',
   },
   davies: {
     model: 'davies',
@@ -201,6 +202,6 @@ export const ACTIVITY_MODEL_RANGES: Readonly<Record<DebyeHuckelFamilyModel, Acti
     tempRangeC: [0, 100],
     source: 'Davies, Ion Association (1962)',
     better:
-      'model "pitzer" with the composition (MEANACTCOEF for a salt, ACTIVITY with species and molalities for a mixture)',
+      'model "pitzer" with the composition (a salt and its molality, or the species and molalities of a mixture)',
   },
 };
