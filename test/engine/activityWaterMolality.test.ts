@@ -2,13 +2,16 @@
  * Water activity from the Pitzer osmotic coefficient, and molarity → molality conversion.
  */
 import {
+  bindSpecies,
+  compiledReaction,
   heldSolutionDensity,
+  potentialV,
   molalityFromMolarity,
   saltMolarMass,
   waterActivity,
   WATER_MOLAR_MASS_KG_PER_MOL,
 } from '../../src/engine';
-import { engineErrorOf } from './support';
+import { engineErrorOf, expectNear, s as slope } from './support';
 
 describe('water activity, ln a_w = −φ M_w Σm', () => {
   it('M_w = 0.01801528 kg/mol (2 × 1.00794 + 15.9994, IUPAC atomic weights; common practice)', () => {
@@ -40,6 +43,17 @@ describe('water activity, ln a_w = −φ M_w Σm', () => {
   it('rejects a salt given with a row of values, and a row given with one number', () => {
     expect(engineErrorOf(() => waterActivity('NaCl', [1] as unknown as number)).kind).toBe('argument');
     expect(engineErrorOf(() => waterActivity(['Na+', 'Cl-'], 1)).kind).toBe('shape');
+  });
+});
+
+describe('the Nernst equation with a(H2O) ≠ 1 from the model', () => {
+  it('O2 + 4 H+ + 4 e- -> 2 H2O in 4 mol/kg NaCl: E shifts by −(s/2)·log10 a_w (derived)', () => {
+    const aw = waterActivity('NaCl', 4);
+    const b = bindSpecies(compiledReaction('O2 + 4 H+ + 4 e- -> 2 H2O', null), ['O2', 'H+', 'H2O']);
+    const shift = potentialV(b, [1, 1, aw], 25) - potentialV(b, [1, 1, 1], 25);
+    // a_w from Robinson & Stokes App. 8.3 φ = 1.1158 at 4 mol/kg (from memory): exp(−1.1158·M_w·8)
+    const awPublished = Math.exp(-1.1158 * 0.01801528 * 8);
+    expectNear(shift, -(slope(25) / 2) * Math.log10(awPublished), 2e-5);
   });
 });
 
