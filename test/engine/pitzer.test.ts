@@ -129,6 +129,16 @@ describe('Pitzer γ± against Robinson & Stokes Appendix 8.10 (25 °C, from memo
   });
 });
 
+describe('plating-bath chlorides held beyond the required salts (Pitzer & Mayorga 1973, from memory)', () => {
+  // Robinson & Stokes Appendix 8.10 (from memory), 0.1 mol/kg only: ±1.5%
+  it.each([
+    ['NiCl2', 0.1, 0.522],
+    ['CuCl2', 0.1, 0.508],
+  ] as [string, number, number][])('%s %d mol/kg: γ± %d', (salt, m, published) => {
+    expect(Math.abs(pitzerMeanActivityCoefficient(salt, m) / published - 1)).toBeLessThanOrEqual(0.015);
+  });
+});
+
 describe('Pitzer osmotic coefficient against Robinson & Stokes Appendix 8.3 (25 °C, from memory)', () => {
   // ±0.005 for 1:1 (fit σ ≈ 0.001–0.002), ±0.01 for CaCl2
   // prettier-ignore

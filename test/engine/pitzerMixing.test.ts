@@ -146,9 +146,9 @@ describe('mixture errors', () => {
     ],
     [
       'a pair without parameters',
-      () => pitzerMixture(['Cu2+', 'Cl-'], [0.1, 0.2]),
+      () => pitzerMixture(['Zn2+', 'OH-'], [0.1, 0.2]),
       'argument',
-      /Cu2\+ – Cl-.*davies/,
+      /Zn2\+ – OH-.*davies/,
     ],
     ['shapes that differ', () => pitzerMixture(['Na+', 'Cl-'], [1]), 'shape', /2 entries/],
     ['a negative molality', () => pitzerMixture(['Na+', 'Cl-'], [-1, -1]), 'argument', /≥ 0 mol\/kg/],

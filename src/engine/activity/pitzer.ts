@@ -278,7 +278,7 @@ function finite(x: number, what: string): number {
 /**
  * Mean activity coefficient γ± (molal scale, dimensionless) of a salt by the Pitzer model.
  *
- * Domain: a salt with held parameters (HCl, LiCl, NaCl, KCl, NaOH, KOH, CaCl2, MgCl2, ZnCl2,
+ * Domain: a salt with held parameters (HCl, LiCl, NaCl, KCl, NaOH, KOH, CaCl2, MgCl2, ZnCl2, NiCl2, CuCl2,
  * Na2SO4, K2SO4, MgSO4, CuSO4, ZnSO4, NiSO4, CaSO4); molality 0 to the salt's published
  * limit (mol/kg); temperature within the parameters' range (25 °C for most salts; 0–50 °C
  * for NaCl). Outside those, an argument error unless `extrapolate`. Precision: the model's

@@ -97,6 +97,8 @@ export const PITZER_BINARY: readonly PitzerBinaryRow[] = [
   { salt: 'CaCl2', cation: 'Ca2+', anion: 'Cl-', beta0: 0.3159, beta1: 1.614, beta2: 0, cphi: -0.00034, alpha1: 2, alpha2: 0, maxMolalityMolKg: 2.5, source: PM73, tempRangeC: T25 },
   { salt: 'MgCl2', cation: 'Mg2+', anion: 'Cl-', beta0: 0.35235, beta1: 1.6815, beta2: 0, cphi: 0.00519, alpha1: 2, alpha2: 0, maxMolalityMolKg: 4.5, source: PM73, tempRangeC: T25 },
   { salt: 'ZnCl2', cation: 'Zn2+', anion: 'Cl-', beta0: 0.2602, beta1: 1.6425, beta2: 0, cphi: -0.088, alpha1: 2, alpha2: 0, maxMolalityMolKg: 1.2, source: PM73, tempRangeC: T25 },
+  { salt: 'NiCl2', cation: 'Ni2+', anion: 'Cl-', beta0: 0.34792, beta1: 1.581, beta2: 0, cphi: -0.00372, alpha1: 2, alpha2: 0, maxMolalityMolKg: 2.5, source: PM73, tempRangeC: T25 },
+  { salt: 'CuCl2', cation: 'Cu2+', anion: 'Cl-', beta0: 0.30802, beta1: 1.3762, beta2: 0, cphi: -0.04043, alpha1: 2, alpha2: 0, maxMolalityMolKg: 2, source: PM73, tempRangeC: T25 },
   // 1:2 (Pitzer & Mayorga 1973)
   { salt: 'Na2SO4', cation: 'Na+', anion: 'SO4^2-', beta0: 0.01958, beta1: 1.113, beta2: 0, cphi: 0.00497, alpha1: 2, alpha2: 0, maxMolalityMolKg: 4, source: PM73, tempRangeC: T25 },
   { salt: 'K2SO4', cation: 'K+', anion: 'SO4^2-', beta0: 0.04995, beta1: 0.7793, beta2: 0, cphi: 0, alpha1: 2, alpha2: 0, maxMolalityMolKg: 0.7, source: PM73, tempRangeC: T25 },

@@ -77,7 +77,7 @@ const MEANACTCOEF: FunctionSpec = {
     },
   ],
   notes: [
-    `Pitzer: ${PM73} and 1974 (2:2 salts); HCl, LiCl, NaCl, KCl, NaOH, KOH, CaCl2, MgCl2, ZnCl2, Na2SO4, K2SO4, MgSO4, CuSO4, ZnSO4, NiSO4, CaSO4, each to its published molality limit; 25 °C (NaCl 0–50 °C).`,
+    `Pitzer: ${PM73} and 1974 (2:2 salts); HCl, LiCl, NaCl, KCl, NaOH, KOH, CaCl2, MgCl2, ZnCl2, NiCl2, CuCl2, Na2SO4, K2SO4, MgSO4, CuSO4, ZnSO4, NiSO4, CaSO4, each to its published molality limit; 25 °C (NaCl 0–50 °C).`,
     'Outside a model’s range the case is #VALUE! with the range and a better model named, unless extrapolate is TRUE.',
     'Results are thermodynamic estimates; plating-bath and battery decisions follow measurement, the applicable standards and licensed practice.',
   ],
