@@ -11,7 +11,7 @@ import {
   pitzerMixture,
   waterActivity,
 } from '../../src/engine';
-import { engineErrorOf } from './support';
+import { engineErrorOf } from '../support';
 
 describe('ranges as data (common practice; Davies 1962)', () => {
   it('limiting 0.005, extended 0.1, davies 0.5 mol/kg; 0–100 °C', () => {

@@ -11,7 +11,7 @@ import {
   waterActivity,
   WATER_MOLAR_MASS_KG_PER_MOL,
 } from '../../src/engine';
-import { engineErrorOf, expectNear, s as slope } from './support';
+import { engineErrorOf, expectNear, s as slope } from '../support';
 
 describe('water activity, ln a_w = −φ M_w Σm', () => {
   it('M_w = 0.01801528 kg/mol (2 × 1.00794 + 15.9994, IUPAC atomic weights; common practice)', () => {

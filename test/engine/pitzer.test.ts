@@ -14,7 +14,7 @@ import {
   pitzerOsmoticCoefficient,
   PITZER_BINARY,
 } from '../../src/engine';
-import { engineErrorOf } from './support';
+import { engineErrorOf } from '../support';
 
 // Robinson & Stokes, Electrolyte Solutions, 2nd ed. (1959), Appendix 8.10, γ± at 25 °C
 // (from memory). Tolerances are relative (fraction of γ±) and state the model's accuracy

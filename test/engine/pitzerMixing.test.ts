@@ -11,7 +11,7 @@ import {
   waterActivity,
 } from '../../src/engine';
 import { pitzerJ } from '../../src/engine/activity/pitzerMixing';
-import { engineErrorOf } from './support';
+import { engineErrorOf } from '../support';
 
 // Seawater S = 35, 25 °C, major ions in mol/kg of water: the reference composition of
 // Millero, Feistel, Wright & McDougall, Deep-Sea Res. I 55, 50 (2008) (from memory), converted
