@@ -104,8 +104,8 @@ const SAMPLES: Record<string, unknown[]> = {
       [0.01, 0.01],
       [0.1, 0.1],
     ],
-    cell('davies'),
     null,
+    cell('davies'),
     null,
     null,
   ],
@@ -115,8 +115,8 @@ const SAMPLES: Record<string, unknown[]> = {
   MOLALITY: [cell('NaCl'), cell(1), null, null],
   COMBINE: [[[0.771, -0.447]], [[1, 2]]],
   SOURCE: [cell('Fe3+/Fe2+'), null],
-  DIAGRAM: [cell('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]], null],
-  POTENTIALS: [cell('Fe')],
+  CELLNOTATION: [cell('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]], null],
+  LISTTABLE: [cell('Fe')],
   CHECKTABLE: [
     [
       ['Half-reaction', 'E° (V)', 'dE°/dT (mV/K)', 'Source'],
