@@ -3,16 +3,22 @@
  * limiting law, the extended Debye–Hückel equation and the Davies equation, single-ion and
  * mean (salt) coefficients, and activities a = γ·m of a composition row.
  *
- * Units: molalities and ionic strength in mol/kg; temperatures in °C (0–60, the range of
- * the Debye–Hückel constants table); ion sizes in Å. All models give log10 γ:
+ * Units: molalities and ionic strength in mol/kg; temperatures in °C (0–100, the range of
+ * the Debye–Hückel constants table); ion sizes in Å; activity coefficients and activities
+ * dimensionless (a = γ·m/m°, m° = 1 mol/kg). The Debye–Hückel family gives log10 γ:
  *
  * - `limiting`:  log10 γ = −A z² √I                                  (I below about 0.005 mol/kg)
  * - `extended`:  log10 γ = −A z² √I / (1 + B å √I)                   (I below about 0.1 mol/kg)
  * - `davies`:    log10 γ = −A z² (√I / (1 + √I) − 0.3 I)              (I up to about 0.5 mol/kg)
  *
- * Results beyond a model's range of validity are still returned (no error): they are
- * extrapolations, and the further out, the worse (see the test file for the deviations from
- * published mean activity coefficients). Neutral species have γ = 1 in every model.
+ * - `pitzer`:    the Pitzer ion-interaction model (./activity/pitzer.ts, ./activity/pitzerMixing.ts);
+ *                it needs the composition (a salt and its molality, or a row of species), not
+ *                only the ionic strength.
+ *
+ * Each model's range of validity is data (ACTIVITY_MODEL_RANGES in data/activityData.ts;
+ * per-salt limits in data/pitzerParameters.ts). Beyond it every function here throws an
+ * argument error naming the range and a better model, unless the caller passes
+ * `{ extrapolate: true }`. Neutral species have γ = 1 in every model.
  *
  * Sources: A and B from Freeze & Cherry, Groundwater (1979), Appendix IV; ion sizes from
  * Kielland, J. Am. Chem. Soc. 59, 1675 (1937) (from memory); the Davies equation with 0.3
@@ -20,16 +26,22 @@
  */
 import { EngineError, quote } from './errors';
 import { formatSpecies, parseSpecies } from './notation/species';
-import { DEBYE_HUCKEL_TABLE, KIELLAND_ION_SIZES } from './data/activityData';
+import { ACTIVITY_MODEL_RANGES, DEBYE_HUCKEL_TABLE, KIELLAND_ION_SIZES } from './data/activityData';
+import { pitzerMeanActivityCoefficient, type ActivityOptions } from './activity/pitzer';
+import { pitzerMixture } from './activity/pitzerMixing';
+import { parseSalt } from './activity/salt';
+
+export type { ActivityOptions } from './activity/pitzer';
 
 /**
- * An activity-coefficient model: Debye–Hückel limiting law (I < ~0.005 mol/kg), extended
- * Debye–Hückel (I < ~0.1 mol/kg), or Davies (I up to ~0.5 mol/kg).
+ * An activity-coefficient model: Debye–Hückel limiting law (I ≤ 0.005 mol/kg), extended
+ * Debye–Hückel (I ≤ 0.1 mol/kg), Davies (I ≤ 0.5 mol/kg), or Pitzer (per salt, up to its
+ * published molality limit; needs the composition).
  *
  * @example
  * const model: ActivityModel = parseActivityModel('edh'); // 'extended'
  */
-export type ActivityModel = 'limiting' | 'extended' | 'davies';
+export type ActivityModel = 'limiting' | 'extended' | 'davies' | 'pitzer';
 
 /**
  * The model used where none is given: Davies (it needs no ion size and is the widest-ranging).
@@ -60,11 +72,14 @@ const MODEL_ALIASES: Readonly<Record<string, ActivityModel>> = {
   extendeddebyehueckel: 'extended',
   debyehuckelextended: 'extended',
   davies: 'davies',
+  pitzer: 'pitzer',
+  hmw: 'pitzer',
 };
 
 const MODEL_HELP =
-  'Use "limiting" (Debye–Hückel limiting law, I < ~0.005 mol/kg), "extended" (extended Debye–Hückel ' +
-  'with an ion size, I < ~0.1 mol/kg) or "davies" (I up to ~0.5 mol/kg); leave it empty for davies.';
+  'Use "limiting" (Debye–Hückel limiting law, I ≤ 0.005 mol/kg), "extended" (extended Debye–Hückel ' +
+  'with an ion size, I ≤ 0.1 mol/kg), "davies" (I ≤ 0.5 mol/kg) or "pitzer" (concentrated salts and ' +
+  'mixtures, from the composition); leave it empty for davies.';
 
 /**
  * Read an activity-model name.
@@ -74,7 +89,8 @@ const MODEL_HELP =
  * underscores and the umlaut do not matter. Accepted: `limiting`, `limiting law`, `dh`,
  * `dhll`, `debye-huckel`, `debye-hückel`, `debye-hueckel`, `debye-hückel limiting` →
  * `limiting`; `extended`, `edh`, `extended dh`, `extended debye-hückel` → `extended`;
- * `davies` → `davies`. An unqualified "Debye–Hückel" means the limiting law.
+ * `davies` → `davies`; `pitzer`, `hmw` → `pitzer`. An unqualified "Debye–Hückel" means the
+ * limiting law.
  *
  * @param text the model as the user wrote it
  * @throws EngineError `argument` for an unknown name, listing the models
@@ -123,7 +139,7 @@ function checkTempC(tempC: number, argName: string): void {
     throw new EngineError(
       'argument',
       `${argName} must be between ${T_MIN} and ${T_MAX} °C, the range of the Debye–Hückel constants ` +
-        `(Freeze & Cherry 1979); got ${tempC} °C.`,
+        `(Freeze & Cherry 1979; 70–100 °C derived from the dielectric constant of water); got ${tempC} °C.`,
       argName,
     );
   }
@@ -148,12 +164,13 @@ function interpolate(column: Float64Array, tempC: number): number {
 /**
  * The Debye–Hückel constant A for log10 γ, in (mol/kg)^−1/2, at a temperature.
  *
- * Domain: 0 ≤ temp_C ≤ 60. Values at 0, 10, 20, 25, 30, 40, 50, 60 °C are the tabulated
- * ones (Freeze & Cherry 1979, App. IV, 4 decimals); between them, linear interpolation
- * (error well below the table's last digit, since A is smooth in T). No allocation.
+ * Domain: 0 ≤ temp_C ≤ 100. Values at 0, 10, 20, 25, 30, 40, 50, 60 °C are the tabulated
+ * ones (Freeze & Cherry 1979, App. IV, 4 decimals); 70, 80, 90, 100 °C are derived from the
+ * dielectric constant (Malmberg & Maryott 1956) and density of water (DEBYE_HUCKEL_DERIVATION);
+ * between rows, linear interpolation (error below 0.0005, since A is smooth in T). No allocation.
  *
  * @param tempC temperature in °C
- * @throws EngineError `argument` outside 0–60 °C or not finite
+ * @throws EngineError `argument` outside 0–100 °C or not finite
  * @example
  * debyeHuckelA(25) // 0.5085
  * debyeHuckelA(15) // 0.5001
@@ -167,11 +184,11 @@ export function debyeHuckelA(tempC: number): number {
  * The Debye–Hückel constant B, in 10^8 cm⁻¹·(mol/kg)^−1/2 (that is, per Å of ion size),
  * at a temperature.
  *
- * Domain: 0 ≤ temp_C ≤ 60; tabulated values (Freeze & Cherry 1979, App. IV) with linear
- * interpolation between them. No allocation.
+ * Domain: 0 ≤ temp_C ≤ 100; tabulated values (Freeze & Cherry 1979, App. IV; 70–100 °C
+ * derived, see {@link debyeHuckelA}) with linear interpolation between them. No allocation.
  *
  * @param tempC temperature in °C
- * @throws EngineError `argument` outside 0–60 °C or not finite
+ * @throws EngineError `argument` outside 0–100 °C or not finite
  * @example
  * debyeHuckelB(25) // 0.3281
  */
@@ -288,12 +305,47 @@ function checkIonicStrength(ionicStrength: number, argName: string): void {
   }
 }
 
-function checkModel(model: ActivityModel): void {
-  if (model !== 'limiting' && model !== 'extended' && model !== 'davies') {
+function checkModel(model: ActivityModel, allowPitzer = false): void {
+  if (model === 'pitzer' && !allowPitzer) {
+    throw new EngineError(
+      'argument',
+      'model "pitzer" needs the composition, not only the ionic strength: give the salt and its molality ' +
+        '(mean activity coefficient), or the species and molalities of the whole mixture (activities).',
+      'model',
+    );
+  }
+  if (model !== 'limiting' && model !== 'extended' && model !== 'davies' && model !== 'pitzer') {
     throw new EngineError(
       'argument',
       `model ${quote(String(model))} is not an activity model. ${MODEL_HELP}`,
       'model',
+    );
+  }
+}
+
+function fmtNumber(x: number): string {
+  return Number(x.toPrecision(6)).toString();
+}
+
+/**
+ * Refuse an ionic strength beyond a Debye–Hückel-family model's range (data:
+ * ACTIVITY_MODEL_RANGES), unless extrapolating.
+ */
+function checkModelRange(
+  model: ActivityModel,
+  ionicStrength: number,
+  opts: ActivityOptions | undefined,
+  argName = 'ionic_strength',
+): void {
+  if (opts?.extrapolate === true || model === 'pitzer') return;
+  const r = ACTIVITY_MODEL_RANGES[model];
+  if (ionicStrength > r.maxIonicStrengthMolKg) {
+    throw new EngineError(
+      'argument',
+      `${argName} ${fmtNumber(ionicStrength)} mol/kg is outside the range of the ${model} model ` +
+        `(I ≤ ${r.maxIonicStrengthMolKg} mol/kg, ${r.source}); use ${r.better}, or set extrapolate to TRUE to accept ` +
+        `an extrapolation.`,
+      argName,
     );
   }
 }
@@ -365,10 +417,13 @@ function missingSizeError(what: string, argName: string): EngineError {
  * - `extended`: −A z² √I / (1 + B å √I), å the ion size in Å (required). Valid below about
  *   0.1 mol/kg.
  * - `davies`: −A z² (√I/(1+√I) − 0.3 I). Valid up to about 0.5 mol/kg; no ion size.
- * Beyond those ranges the value is still returned, as an extrapolation. z = 0 gives 1.
+ * Beyond those ranges (ACTIVITY_MODEL_RANGES): an argument error naming the range and a
+ * better model, unless `opts.extrapolate`. z = 0 gives 1. `pitzer` needs a composition
+ * (argument error pointing to the salt and mixture functions).
  *
- * Domain: charge a whole number (|z| ≤ 12); ionic strength finite ≥ 0 mol/kg; 0 ≤ temp_C ≤
- * 60; ion size, where given, > 0 Å (ignored by `limiting` and `davies`). Precision: float64
+ * Domain: charge a whole number (|z| ≤ 12); ionic strength finite, ≥ 0 and within the
+ * model's range, mol/kg; 0 ≤ temp_C ≤ 100; ion size, where given, > 0 Å (ignored by
+ * `limiting` and `davies`). Precision: float64
  * evaluation of the model; the model itself is the limit (see the validity ranges). No
  * allocation.
  *
@@ -377,8 +432,9 @@ function missingSizeError(what: string, argName: string): EngineError {
  * @param model the activity model
  * @param tempC temperature in °C (default 25)
  * @param ionSizeAngstrom å in Å (extended model)
- * @throws EngineError `argument` for bad inputs or a missing ion size; `range` where the
- *   model is pushed so far that γ leaves the float64 range
+ * @param opts `{ extrapolate: true }` to accept an ionic strength beyond the model's range
+ * @throws EngineError `argument` for bad inputs, a missing ion size, or I beyond the
+ *   model's range; `range` where an extrapolation leaves the float64 range
  * @example
  * activityCoefficient(1, 0.01, 'davies') // 0.9022…
  * activityCoefficient(2, 0.01, 'extended', 25, 6) // 0.6762…
@@ -389,10 +445,12 @@ export function activityCoefficient(
   model: ActivityModel,
   tempC = 25,
   ionSizeAngstrom?: number | null,
+  opts?: ActivityOptions,
 ): number {
   checkModel(model);
   checkTempC(tempC, 'temp_C');
   checkIonicStrength(ionicStrength, 'ionic_strength');
+  checkModelRange(model, ionicStrength, opts);
   checkCharge(charge, 'charge');
   checkSize(ionSizeAngstrom, 'ion_size');
   if (charge === 0) return 1;
@@ -420,15 +478,18 @@ export function activityCoefficient(
  * sweep over one ion does not re-parse.
  *
  * Domain: `ion` any species text the engine reads ("Cu2+", "SO₄²⁻", "left:Ag+"); ionic
- * strength finite ≥ 0 mol/kg; 0 ≤ temp_C ≤ 60; ion size > 0 Å where given.
+ * strength finite ≥ 0 mol/kg and within the model's range (unless `opts.extrapolate`);
+ * 0 ≤ temp_C ≤ 100; ion size > 0 Å where given.
  *
  * @param ionText the ion
  * @param ionicStrength I in mol/kg
  * @param model the activity model (default `davies`)
  * @param tempC temperature in °C (default 25)
  * @param ionSizeAngstrom å in Å, overriding Kielland's value
+ * @param opts `{ extrapolate: true }` to accept an ionic strength beyond the model's range
  * @throws EngineError `parse` for bad species text; `argument` for bad numbers, the
- *   electron or "pH", or a missing ion size with the extended model; `range` (see above)
+ *   electron or "pH", a missing ion size with the extended model, or I beyond the model's
+ *   range (e.g. Cu2+ at I = 4.7 mol/kg with Davies); `range` (see above)
  * @example
  * ionActivityCoefficient('Cl-', 0.01, 'extended') // 0.8989…
  * ionActivityCoefficient('SO4^2-', 0.1) // 0.3735… (Davies)
@@ -439,6 +500,7 @@ export function ionActivityCoefficient(
   model: ActivityModel = DEFAULT_ACTIVITY_MODEL,
   tempC = 25,
   ionSizeAngstrom?: number | null,
+  opts?: ActivityOptions,
 ): number {
   const info = speciesInfo(ionText, 'ion');
   if (info.kind === Kind.PH) {
@@ -447,6 +509,7 @@ export function ionActivityCoefficient(
   checkModel(model);
   checkTempC(tempC, 'temp_C');
   checkIonicStrength(ionicStrength, 'ionic_strength');
+  checkModelRange(model, ionicStrength, opts);
   checkSize(ionSizeAngstrom, 'ion_size');
   if (info.kind === Kind.Neutral) return 1;
   let size = 0;
@@ -466,41 +529,119 @@ export function ionActivityCoefficient(
 }
 
 /**
- * The mean activity coefficient γ± of an electroneutral salt of a cation of charge z+ and an
- * anion of charge z−: log10 γ± = (ν+ log10 γ+ + ν− log10 γ−)/(ν+ + ν−), with ν+ = |z−|/g and
- * ν− = z+/g (g the greatest common divisor), e.g. Na2SO4: ν+ = 2, ν− = 1.
+ * The mean activity coefficient γ± (dimensionless) of a salt, in two forms.
  *
- * For `limiting` and `davies` this is the familiar log10 γ± = −A |z+ z−| f(I). Models and
- * validity as in {@link activityCoefficient}; the extended model needs both ion sizes.
+ * **Salt form** `meanActivityCoefficient(salt, molality, [model], [tempC], [opts])`: the salt
+ * by formula ("NaCl", "CuSO4", "K2SO4"), its molality m in mol/kg, the model (default
+ * `pitzer`). Pitzer uses the salt's parameters (see pitzerMeanActivityCoefficient: held
+ * salts, molality limit, temperature range); the Debye–Hückel family uses I = ½ m (ν+ z+² +
+ * ν− z−²) and, for `extended`, Kielland's sizes of both ions.
+ *
+ * **Charge form** `meanActivityCoefficient(z+, z−, I, model, [tempC], [cationSizeA],
+ * [anionSizeA], [opts])`: log10 γ± = (ν+ log10 γ+ + ν− log10 γ−)/(ν+ + ν−), with
+ * ν+ = |z−|/g and ν− = z+/g (g the greatest common divisor), e.g. Na2SO4: ν+ = 2, ν− = 1.
+ * For `limiting` and `davies` this is log10 γ± = −A |z+ z−| f(I); the extended model needs
+ * both ion sizes; `pitzer` needs the salt form.
  *
  * Domain: cation charge a positive whole number, anion charge a negative whole number;
- * ionic strength finite ≥ 0 mol/kg (for a single salt of molality m, I = ½ m (ν+ z+² + ν− z−²),
- * e.g. I = m for 1:1, see {@link ionicStrength}); 0 ≤ temp_C ≤ 60. No allocation.
+ * ionic strength or molality finite ≥ 0 mol/kg and within the model's range (argument error
+ * naming the range and a better model unless `opts.extrapolate`); 0 ≤ temp_C ≤ 100.
+ * Precision: Pitzer about ±0.005 for 1:1 salts to 6 mol/kg, ±2% for 2:1/1:2, more for 2:2
+ * (see the tests); the Debye–Hückel family as {@link activityCoefficient}. No allocation.
  *
- * @param cationCharge z+ (> 0)
- * @param anionCharge z− (< 0)
- * @param ionicStrength I in mol/kg
- * @param model the activity model
- * @param tempC temperature in °C (default 25)
- * @param cationSizeA the cation's å in Å (extended)
- * @param anionSizeA the anion's å in Å (extended)
- * @throws EngineError `argument` for bad inputs or missing sizes; `range` (see above)
+ * @throws EngineError `argument` for bad inputs, missing sizes or out of range; `notFound`
+ *   for a salt without Pitzer parameters; `parse` for bad salt text; `range` (see above)
  * @example
- * meanActivityCoefficient(1, -1, 0.01, 'extended', 25, ionSizeAngstrom('Na+'), ionSizeAngstrom('Cl-')) // 0.9006…
+ * meanActivityCoefficient('NaCl', 0.5) // 0.6796… (Pitzer)
+ * meanActivityCoefficient('CuSO4', 0.1, 'pitzer') // 0.1478…
  * meanActivityCoefficient(1, -1, 0.05, 'davies') // 0.8217…
  */
+export function meanActivityCoefficient(
+  salt: string,
+  molalityMolKg: number,
+  model?: ActivityModel | null,
+  tempC?: number,
+  opts?: ActivityOptions,
+): number;
 export function meanActivityCoefficient(
   cationCharge: number,
   anionCharge: number,
   ionicStrength: number,
   model: ActivityModel,
-  tempC = 25,
+  tempC?: number,
   cationSizeA?: number | null,
   anionSizeA?: number | null,
+  opts?: ActivityOptions,
+): number;
+export function meanActivityCoefficient(
+  first: string | number,
+  second: number,
+  third?: number | ActivityModel | null,
+  fourth?: ActivityModel | number,
+  fifth?: number | ActivityOptions,
+  cationSizeA?: number | null,
+  anionSizeA?: number | null,
+  opts?: ActivityOptions,
+): number {
+  if (typeof first === 'string') {
+    return saltMeanActivityCoefficient(
+      first,
+      second,
+      (third ?? 'pitzer') as ActivityModel,
+      (fourth ?? 25) as number,
+      fifth as ActivityOptions | undefined,
+    );
+  }
+  return chargeMeanActivityCoefficient(
+    first,
+    second,
+    third as number,
+    fourth as ActivityModel,
+    (fifth ?? 25) as number,
+    cationSizeA,
+    anionSizeA,
+    opts,
+  );
+}
+
+function saltMeanActivityCoefficient(
+  saltText: string,
+  molality: number,
+  model: ActivityModel,
+  tempC: number,
+  opts: ActivityOptions | undefined,
+): number {
+  checkModel(model, true);
+  if (model === 'pitzer') return pitzerMeanActivityCoefficient(saltText, molality, tempC, opts);
+  const ions = parseSalt(saltText);
+  checkIonicStrength(molality, 'molality');
+  const I =
+    0.5 * molality * (ions.nuCation * ions.zCation * ions.zCation + ions.nuAnion * ions.zAnion * ions.zAnion);
+  let sizeP: number | null = null;
+  let sizeN: number | null = null;
+  if (model === 'extended') {
+    sizeP = ionSizeAngstrom(ions.cation);
+    sizeN = ionSizeAngstrom(ions.anion);
+    if (sizeP === null) throw missingSizeError(quote(ions.cation), 'cation_size');
+    if (sizeN === null) throw missingSizeError(quote(ions.anion), 'anion_size');
+  }
+  return chargeMeanActivityCoefficient(ions.zCation, ions.zAnion, I, model, tempC, sizeP, sizeN, opts);
+}
+
+function chargeMeanActivityCoefficient(
+  cationCharge: number,
+  anionCharge: number,
+  ionicStrength: number,
+  model: ActivityModel,
+  tempC: number,
+  cationSizeA: number | null | undefined,
+  anionSizeA: number | null | undefined,
+  opts: ActivityOptions | undefined,
 ): number {
   checkModel(model);
   checkTempC(tempC, 'temp_C');
   checkIonicStrength(ionicStrength, 'ionic_strength');
+  checkModelRange(model, ionicStrength, opts);
   checkCharge(cationCharge, 'cation_charge');
   checkCharge(anionCharge, 'anion_charge');
   if (!(cationCharge > 0)) {
@@ -632,16 +773,21 @@ export function ionicStrength(species: readonly string[], molalities: readonly n
  * unchanged (it is already an activity scale). The extended model takes each ion's size
  * from Kielland's table; an ion without one is an error (use `davies`, or {@link
  * ionActivityCoefficient} with an ion size). Models and validity as in
- * {@link activityCoefficient}.
+ * {@link activityCoefficient}. With `pitzer`, each ion's γ comes from the Pitzer mixture
+ * model of the whole row (single-ion coefficients in the Pitzer/HMW convention; the row must
+ * be electrically neutral and every cation–anion pair held; see pitzerMixture), and
+ * `givenIonicStrength` must be empty.
  *
  * Domain: equal lengths; values finite ≥ 0 mol/kg (pH any finite number); ionic strength,
- * where given, finite ≥ 0 mol/kg; 0 ≤ temp_C ≤ 60. Allocates only the result array.
+ * where given, finite ≥ 0 mol/kg and within the model's range (unless `opts.extrapolate`);
+ * 0 ≤ temp_C ≤ 100. Allocates only the result array.
  *
  * @param species species texts, one per value
- * @param values molalities in mol/kg (gas pressures, pH as they are)
+ * @param values molalities in mol/kg (gas pressures in bar, pH as they are)
  * @param model the activity model
  * @param givenIonicStrength I in mol/kg; null/undefined to compute it from the row
  * @param tempC temperature in °C (default 25)
+ * @param opts `{ extrapolate: true }` to accept results beyond the model's range
  * @throws EngineError `shape`, `parse`, `argument`, `range` as described above
  * @example
  * activities(['Na+', 'Cl-'], [0.01, 0.01], 'davies') // [0.009022…, 0.009022…]
@@ -653,9 +799,11 @@ export function activities(
   model: ActivityModel,
   givenIonicStrength?: number | null,
   tempC = 25,
+  opts?: ActivityOptions,
 ): number[] {
   checkShape(species, values);
-  checkModel(model);
+  checkModel(model, true);
+  if (model === 'pitzer') return pitzerActivities(species, values, givenIonicStrength, tempC, opts);
   checkTempC(tempC, 'temp_C');
   let I: number;
   if (givenIonicStrength === null || givenIonicStrength === undefined) {
@@ -664,6 +812,7 @@ export function activities(
     checkIonicStrength(givenIonicStrength, 'ionic_strength');
     I = givenIonicStrength;
   }
+  checkModelRange(model, I, opts);
   const a = interpolate(TABLE_A, tempC);
   const b = model === 'extended' ? interpolate(TABLE_B, tempC) : 0;
   const sqrtI = Math.sqrt(I);
@@ -699,6 +848,30 @@ export function activities(
       );
     }
     out[i] = ai;
+  }
+  return out;
+}
+
+function pitzerActivities(
+  species: readonly string[],
+  values: readonly number[],
+  givenIonicStrength: number | null | undefined,
+  tempC: number,
+  opts: ActivityOptions | undefined,
+): number[] {
+  if (givenIonicStrength !== null && givenIonicStrength !== undefined) {
+    throw new EngineError(
+      'argument',
+      'the pitzer model computes the ionic strength from the composition; leave ionic_strength empty.',
+      'ionic_strength',
+    );
+  }
+  const gamma = pitzerMixture(species, values, tempC, opts).gamma;
+  const out = new Array<number>(species.length);
+  for (let i = 0; i < species.length; i++) {
+    const info = speciesInfo(species[i] as string, 'species');
+    const v = values[i] as number;
+    out[i] = info.kind === Kind.Ion ? v * (gamma[i] as number) : v;
   }
   return out;
 }

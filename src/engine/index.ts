@@ -127,3 +127,25 @@ export {
   splitSpeciesHeader,
   canonicalSpeciesHeader,
 } from './notation/speciesHeader';
+
+// activity: Pitzer model, water activity, molality (issue 13)
+export {
+  pitzerAphi,
+  pitzerMeanActivityCoefficient,
+  pitzerOsmoticCoefficient,
+  pitzerMeanActivityCoefficients,
+  compilePitzerSalt,
+  APHI_TEMP_RANGE_C,
+  type CompiledPitzerSalt,
+} from './activity/pitzer';
+export {
+  pitzerMixture,
+  pitzerIonActivityCoefficients,
+  type PitzerMixtureResult,
+} from './activity/pitzerMixing';
+export { waterActivity, osmoticCoefficient, WATER_MOLAR_MASS_KG_PER_MOL } from './activity/waterActivity';
+export { molalityFromMolarity, saltMolarMass, heldSolutionDensity } from './activity/molality';
+export { parseSalt, type SaltIons } from './activity/salt';
+export { PITZER_BINARY, PITZER_THETA, PITZER_PSI, type PitzerBinaryRow } from './data/pitzerParameters';
+export { ACTIVITY_MODEL_RANGES, type ActivityModelRange } from './data/activityData';
+export { SOLUTION_DENSITIES } from './data/solutionDensities';

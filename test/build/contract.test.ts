@@ -97,7 +97,7 @@ const SAMPLES: Record<string, unknown[]> = {
   NERNSTSLOPE: [[[0], [25], [50]], cell(1)],
   CONCCELL: [cell('Ag+/Ag'), cell(0.01), cell(1), null, null, null],
   VSREF: [cell(-0.85), cell('Cu/CuSO4'), cell('SCE'), null, null],
-  ACTCOEF: [cell('Ca2+'), cell(0.01), cell('extended'), null, null],
+  ACTCOEF: [cell('Ca2+'), cell(0.01), cell('extended'), null, null, null],
   ACTIVITY: [
     [['Na+', 'Cl-']],
     [
@@ -107,8 +107,12 @@ const SAMPLES: Record<string, unknown[]> = {
     null,
     cell('davies'),
     null,
+    null,
   ],
   IONICSTR: [[['Na+', 'SO4^2-']], [[0.02, 0.01]]],
+  MEANACTCOEF: [cell('NaCl'), cell(1), null, null, null],
+  WATERACTIVITY: [cell('NaCl'), cell(1), null, null],
+  MOLALITY: [cell('NaCl'), cell(1), null, null],
   COMBINE: [[[0.771, -0.447]], [[1, 2]]],
   SOURCE: [cell('Fe3+/Fe2+'), null],
   CELLNOTATION: [cell('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]], null],

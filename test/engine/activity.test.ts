@@ -64,12 +64,44 @@ describe('Debye–Hückel constants', () => {
     }
   });
 
-  it.each([[-0.1], [60.5], [-300], [NaN], [Infinity]])('rejects %d °C, stating the valid range', (t) => {
+  it.each([[-0.1], [100.5], [-300], [NaN], [Infinity]])('rejects %d °C, stating the valid range', (t) => {
     for (const f of [debyeHuckelA, debyeHuckelB, (x: number) => activityCoefficient(1, 0.01, 'davies', x)]) {
       const err = engineErrorOf(() => f(t));
       expect(err.kind).toBe('argument');
       expect(err.argument).toBe('temp_C');
-      expect(err.message).toMatch(/0 and 60/);
+      expect(err.message).toMatch(/0 and 100/);
+    }
+  });
+
+  // 70–100 °C: derived by hand here from the dielectric constant of water (Malmberg &
+  // Maryott, J. Res. NBS 56, 1 (1956): ε = 87.740 − 0.40008 t + 9.398e-4 t² − 1.410e-6 t³, from
+  // memory) and its density (Kell 1975, from memory), A ∝ √ρ/(εT)^1.5, B ∝ √(ρ/(εT)), scaled
+  // to the published 60 °C row (Freeze & Cherry 1979, seen).
+  const eps = (t: number): number => 87.74 - 0.40008 * t + 9.398e-4 * t * t - 1.41e-6 * t ** 3;
+  const rho = (t: number): number =>
+    (999.83952 +
+      16.945176 * t -
+      7.9870401e-3 * t * t -
+      46.170461e-6 * t ** 3 +
+      105.56302e-9 * t ** 4 -
+      280.54253e-12 * t ** 5) /
+    (1 + 16.87985e-3 * t);
+  const aShape = (t: number): number => Math.sqrt(rho(t)) / Math.pow(eps(t) * (t + 273.15), 1.5);
+  const bShape = (t: number): number => Math.sqrt(rho(t) / (eps(t) * (t + 273.15)));
+  it.each([[70], [80], [90], [100], [85]])('at %d °C: A and B from ε(T) and ρ(T) (derived)', (t) => {
+    expect(debyeHuckelA(t)).toBeCloseTo((0.5425 * aShape(t)) / aShape(60), 3);
+    expect(debyeHuckelB(t)).toBeCloseTo((0.3338 * bShape(t)) / bShape(60), 3);
+  });
+
+  it('the same derivation reproduces the published 10–50 °C rows (Freeze & Cherry 1979, seen)', () => {
+    for (const [t, a, b] of [
+      [10, 0.496, 0.3258],
+      [25, 0.5085, 0.3281],
+      [40, 0.5221, 0.3305],
+      [50, 0.5319, 0.3321],
+    ] as const) {
+      expect(Math.abs((0.5425 * aShape(t)) / aShape(60) - a)).toBeLessThan(0.001);
+      expect(Math.abs((0.3338 * bShape(t)) / bShape(60) - b)).toBeLessThan(0.0003);
     }
   });
 });
@@ -167,12 +199,20 @@ describe('models against published mean activity coefficients, 25 °C', () => {
   );
 
   it('shows the limits: beyond the stated ranges the models deviate by more than 0.03', () => {
+    const x = { extrapolate: true };
     // Kaye & Laby §3.9.6 (seen): KCl 0.4 m γ± 0.666; Davies gives 0.7312 (observed +0.065)
     expect(meanActivityCoefficient(1, -1, 0.4, 'davies') - 0.666).toBeGreaterThan(0.03);
     // Kaye & Laby §3.9.6 (seen): HCl 0.4 m γ± 0.755; extended DH gives 0.6995 (observed −0.056)
-    expect(0.755 - meanActivityCoefficient(1, -1, 0.4, 'extended', 25, 9, 3)).toBeGreaterThan(0.03);
+    expect(0.755 - meanActivityCoefficient(1, -1, 0.4, 'extended', 25, 9, 3, x)).toBeGreaterThan(0.03);
     // Kaye & Laby §3.9.6 (seen): NaCl 0.05 m γ± 0.820; the limiting law gives 0.7697 (observed −0.050)
-    expect(0.82 - meanActivityCoefficient(1, -1, 0.05, 'limiting')).toBeGreaterThan(0.03);
+    expect(0.82 - meanActivityCoefficient(1, -1, 0.05, 'limiting', 25, null, null, x)).toBeGreaterThan(0.03);
+    // and without the explicit extrapolate flag those two are refused, naming the range
+    expect(engineErrorOf(() => meanActivityCoefficient(1, -1, 0.4, 'extended', 25, 9, 3)).message).toMatch(
+      /I ≤ 0\.1 mol\/kg/,
+    );
+    expect(engineErrorOf(() => meanActivityCoefficient(1, -1, 0.05, 'limiting')).message).toMatch(
+      /I ≤ 0\.005 mol\/kg/,
+    );
   });
 });
 
@@ -228,10 +268,10 @@ describe('the model equations', () => {
 
   it('gives γ = 1 for neutral species in every model', () => {
     for (const model of MODELS) {
-      expect(activityCoefficient(0, 0.3, model)).toBe(1);
-      expect(ionActivityCoefficient('H2O', 0.3, model)).toBe(1);
-      expect(ionActivityCoefficient('O2(g)', 0.3, model)).toBe(1);
-      expect(ionActivityCoefficient('C6H12O6', 0.3, model)).toBe(1); // no ion size needed
+      expect(activityCoefficient(0, 0.003, model)).toBe(1);
+      expect(ionActivityCoefficient('H2O', 0.003, model)).toBe(1);
+      expect(ionActivityCoefficient('O2(g)', 0.003, model)).toBe(1);
+      expect(ionActivityCoefficient('C6H12O6', 0.003, model)).toBe(1); // no ion size needed
     }
   });
 
@@ -244,10 +284,10 @@ describe('properties', () => {
   it('limiting law: γ decreases with I, and a larger |z| gives a smaller γ', () => {
     fc.assert(
       fc.property(
-        fc.double({ min: 1e-9, max: 0.5, noNaN: true }),
-        fc.double({ min: 1e-9, max: 0.5, noNaN: true }),
+        fc.double({ min: 1e-9, max: 0.005, noNaN: true }),
+        fc.double({ min: 1e-9, max: 0.005, noNaN: true }),
         fc.integer({ min: 1, max: 4 }),
-        fc.double({ min: 0, max: 60, noNaN: true }),
+        fc.double({ min: 0, max: 100, noNaN: true }),
         (i1, i2, z, t) => {
           const lo = Math.min(i1, i2);
           const hi = Math.max(i1, i2);
@@ -262,15 +302,16 @@ describe('properties', () => {
     );
   });
 
-  it('every model: 0 < γ ≤ 1 below I = 0.5 and never NaN', () => {
+  it('every model: 0 < γ ≤ 1 inside its range and never NaN', () => {
+    const maxI: Record<string, number> = { limiting: 0.005, extended: 0.1, davies: 0.5 };
     fc.assert(
       fc.property(
-        fc.double({ min: 0, max: 0.5, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
         fc.integer({ min: -4, max: 4 }),
         fc.constantFrom(...MODELS),
         fc.double({ min: 2.5, max: 11, noNaN: true }),
-        (I, z, model, size) => {
-          const g = activityCoefficient(z, I, model, 25, size);
+        (frac, z, model, size) => {
+          const g = activityCoefficient(z, frac * (maxI[model] as number), model, 25, size);
           expect(g).toBeGreaterThan(0);
           expect(g).toBeLessThanOrEqual(1);
         },
@@ -304,7 +345,7 @@ describe('activities of a row', () => {
 
   it('keeps the shape of values', () => {
     expect(activities([], [], 'davies')).toEqual([]);
-    expect(activities(['K+', 'NO3-', 'H2O'], [0.1, 0.1, 1], 'limiting')).toHaveLength(3);
+    expect(activities(['K+', 'NO3-', 'H2O'], [0.001, 0.001, 1], 'limiting')).toHaveLength(3);
   });
 
   it('accepts left:/right: qualified species when the ionic strength is given', () => {
@@ -328,15 +369,17 @@ describe('model names', () => {
     ['edh', 'extended'],
     ['extended Debye-Hückel', 'extended'],
     ['extended_debye_hueckel', 'extended'],
+    ['Pitzer', 'pitzer'],
+    ['HMW', 'pitzer'],
   ] as [string | null | undefined, ActivityModel][])('%j → %s', (text, model) => {
     expect(parseActivityModel(text)).toBe(model);
   });
 
   it('rejects an unknown model, listing the models', () => {
-    const err = engineErrorOf(() => parseActivityModel('pitzer'));
+    const err = engineErrorOf(() => parseActivityModel('bromley'));
     expect(err.kind).toBe('argument');
     expect(err.argument).toBe('model');
-    expect(err.message).toMatch(/limiting.*extended.*davies/);
+    expect(err.message).toMatch(/limiting.*extended.*davies.*pitzer/);
   });
 });
 
@@ -391,10 +434,17 @@ describe('bad inputs', () => {
     ],
     [
       'unknown model',
-      () => activityCoefficient(1, 0.1, 'pitzer' as ActivityModel),
+      () => activityCoefficient(1, 0.1, 'bromley' as ActivityModel),
       'argument',
       'model',
       /davies/,
+    ],
+    [
+      'pitzer from the ionic strength alone',
+      () => ionActivityCoefficient('Cu2+', 0.1, 'pitzer'),
+      'argument',
+      'model',
+      /needs the composition.*salt and its molality.*mixture/,
     ],
     [
       'extended without a known size',
@@ -466,10 +516,10 @@ describe('bad inputs', () => {
     ],
     [
       'temperature out of the table',
-      () => ionActivityCoefficient('Na+', 0.01, 'davies', 80),
+      () => ionActivityCoefficient('Na+', 0.01, 'davies', 120),
       'argument',
       'temp_C',
-      /0 and 60/,
+      /0 and 100/,
     ],
   ] as [string, () => unknown, EngineErrorKind, string, RegExp][])('%s', (_label, f, kind, arg, message) => {
     const err = engineErrorOf(f);
@@ -478,19 +528,22 @@ describe('bad inputs', () => {
     expect(err.message).toMatch(message);
   });
 
-  it('reports a range error instead of Infinity far outside the Davies range', () => {
+  it('refuses I = 1e4 outside the Davies range, and gives a range error instead of Infinity when extrapolating', () => {
     // Davies' −0.3 I term grows without bound: at I = 1e4 log γ ≈ +1500
-    const err = engineErrorOf(() => activityCoefficient(1, 1e4, 'davies'));
+    const refused = engineErrorOf(() => activityCoefficient(1, 1e4, 'davies'));
+    expect(refused.kind).toBe('argument');
+    expect(refused.message).toMatch(/I ≤ 0\.5 mol\/kg.*pitzer/);
+    const err = engineErrorOf(() => activityCoefficient(1, 1e4, 'davies', 25, null, { extrapolate: true }));
     expect(err.kind).toBe('range');
     expect(err.argument).toBe('ionic_strength');
   });
 
-  it('never returns NaN or ±Infinity over a grid of inputs', () => {
+  it('never returns NaN or ±Infinity over a grid of inputs (extrapolating)', () => {
     for (const model of MODELS)
       for (const z of [-3, -1, 0, 2, 4])
         for (const I of [0, 1e-12, 0.001, 0.5, 5, 50])
-          for (const t of [0, 17.3, 60]) {
-            const g = activityCoefficient(z, I, model, t, 5);
+          for (const t of [0, 17.3, 60, 100]) {
+            const g = activityCoefficient(z, I, model, t, 5, { extrapolate: true });
             expect(Number.isFinite(g)).toBe(true);
           }
   });

@@ -897,6 +897,18 @@ const HAND_CASES: readonly BadInputCase[] = [
     says: 'as if omitted: the one species that can differ',
   },
   ...tempCases('CONCCELL', ['Ag+/Ag', 0.01, 0.1, null, 25, null], 4),
+  // concentrated solutions (issue 13)
+  ...tempCases('MEANACTCOEF', ['NaCl', 1, null, 25, null], 3),
+  ...tempCases('WATERACTIVITY', ['NaCl', 1, 25, null], 2),
+  ...tempCases('MOLALITY', ['NaCl', 1, 1.04, 25], 3),
+  {
+    fn: 'MEANACTCOEF',
+    argument: 'model',
+    input: 'bad model name',
+    args: ['NaCl', 1, 'foo', null, null],
+    expect: V(/model "foo" is not an activity model\. Use "limiting".*"pitzer"/),
+    says: 'not an activity model: lists the models',
+  },
 
   // -------------------------------------------------------------------- VSREF
   {
@@ -1051,8 +1063,8 @@ const HAND_CASES: readonly BadInputCase[] = [
     argument: 'ionic_strength',
     input: 'huge (1e308)',
     args: ['Cu2+', 1e308, null, null, null],
-    expect: NUM(/outside the number range; the model does not apply there/),
-    says: 'outside the number range: the model does not apply at that ionic strength',
+    expect: V(/outside the range of the davies model \(I ≤ 0\.5 mol\/kg/),
+    says: 'outside the range of the davies model (I ≤ 0.5 mol/kg): names a better model and the extrapolate flag',
   },
   {
     fn: 'ACTCOEF',
@@ -1090,9 +1102,9 @@ const HAND_CASES: readonly BadInputCase[] = [
     fn: 'ACTCOEF',
     argument: 'temp_C',
     input: 'temperature outside the model range',
-    args: ['Cu2+', 0.1, null, null, 80],
-    expect: V(/temp_C must be between 0 and 60 °C/),
-    says: 'temp_C must be between 0 and 60 °C',
+    args: ['Cu2+', 0.1, null, null, 120],
+    expect: V(/temp_C must be between 0 and 100 °C/),
+    says: 'temp_C must be between 0 and 100 °C',
   },
   {
     fn: 'ACTCOEF',
@@ -1195,8 +1207,8 @@ const HAND_CASES: readonly BadInputCase[] = [
     argument: 'values',
     input: 'huge (1e308)',
     args: ['ZnO2^2-', 1e308, 7, 'davies', 0],
-    expect: NUM(OVERFLOW),
-    says: 'the activity is beyond the number range',
+    expect: V(/outside the range of the davies model \(I ≤ 0\.5 mol\/kg/),
+    says: 'I = 7 mol/kg is outside the range of the davies model (I ≤ 0.5 mol/kg)',
   },
   {
     fn: 'ACTIVITY',

