@@ -45,7 +45,8 @@ ${EPH_CAUTION}
 function numberOption(value: string | undefined, name: string, fallback: number): number {
   if (value === undefined) return fallback;
   const x = Number(value);
-  if (value.trim() === '' || !Number.isFinite(x)) throw new UsageError(`${name} must be a number; got "${value}"`);
+  if (value.trim() === '' || !Number.isFinite(x))
+    throw new UsageError(`${name} must be a number; got "${value}"`);
   return x;
 }
 
@@ -55,7 +56,8 @@ function writeOutput(file: string, text: string, force: boolean, io: Io): void {
     return;
   }
   if (file.trim() === '') throw new UsageError('an output file name is empty');
-  if (fs.existsSync(file) && !force) throw new UsageError(`${file} already exists: add --force to replace it, or choose another name`);
+  if (fs.existsSync(file) && !force)
+    throw new UsageError(`${file} already exists: add --force to replace it, or choose another name`);
   const dir = path.dirname(path.resolve(file));
   if (!fs.existsSync(dir)) throw new UsageError(`the folder for the output does not exist: ${dir}`);
   try {
@@ -107,7 +109,10 @@ export function ephCommand(argv: string[], io: Io): number {
   try {
     const diagram = ephDiagram(element, activity, tempC, defaultEphWindow(element, pHMin, pHMax));
     const rows = ephLineRows(element, activity, tempC, pHMin, pHMax);
-    const table = [[...EPH_LINE_HEADER], ...rows.map((r) => [r[0], r[1], fmt(r[2]), fmt(r[3]), fmt(r[4]), fmt(r[5])])];
+    const table = [
+      [...EPH_LINE_HEADER],
+      ...rows.map((r) => [r[0], r[1], fmt(r[2]), fmt(r[3]), fmt(r[4]), fmt(r[5])]),
+    ];
     if (values.svg !== undefined) {
       const svg = renderEphSvg(diagram, values.ref !== undefined ? { referenceScale: values.ref } : {});
       writeOutput(values.svg, svg, values.force, io);
@@ -116,7 +121,11 @@ export function ephCommand(argv: string[], io: Io): number {
     if (values.svg === undefined && values.csv === undefined) io.out(toAligned(table));
     if (values.svg !== undefined && values.svg !== '-') {
       const regions = diagram.regions.map((r) => `${r.species} (${r.cls})`).join(', ');
-      io.err(`wrote ${values.svg}: ${diagram.element.name}, regions ${regions}` + (diagram.absent.length ? `; no region: ${diagram.absent.join(', ')}` : '') + '\n');
+      io.err(
+        `wrote ${values.svg}: ${diagram.element.name}, regions ${regions}` +
+          (diagram.absent.length ? `; no region: ${diagram.absent.join(', ')}` : '') +
+          '\n',
+      );
     }
     return EXIT_OK;
   } catch (e) {

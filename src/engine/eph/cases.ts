@@ -66,11 +66,16 @@ export function predominantCases(
   let n = 1;
   for (const [name, c] of cols) {
     const len = columnLength(name, c);
-    if (len === 0) throw new EngineError('shape', `${name} is empty: give a value or a column of cases.`, name);
+    if (len === 0)
+      throw new EngineError('shape', `${name} is empty: give a value or a column of cases.`, name);
     if (len !== 1) {
       if (n !== 1 && len !== n) {
         const other = cols.find(([, o]) => columnLength('', o) === n)?.[0] ?? 'another argument';
-        throw new EngineError('shape', `${name} has ${len} cases but ${other} has ${n}: give columns of one length, or single values.`, name);
+        throw new EngineError(
+          'shape',
+          `${name} has ${len} cases but ${other} has ${n}: give columns of one length, or single values.`,
+          name,
+        );
       }
       n = len;
     }
@@ -124,7 +129,14 @@ export function classifySpecies(element: string, species: string): EphClass {
 }
 
 /** The header of {@link ephLineRows}. */
-export const EPH_LINE_HEADER = ['species A', 'species B', 'pH1', 'E1 (V vs SHE)', 'pH2', 'E2 (V vs SHE)'] as const;
+export const EPH_LINE_HEADER = [
+  'species A',
+  'species B',
+  'pH1',
+  'E1 (V vs SHE)',
+  'pH2',
+  'E2 (V vs SHE)',
+] as const;
 
 /** One row of the lines table. */
 export type EphLineRow = readonly [string, string, number, number, number, number];
@@ -150,7 +162,14 @@ export function ephLineRows(
   gibbs: SpeciesGibbs = defaultSpeciesGibbs,
 ): EphLineRow[] {
   const d = ephDiagram(element, activity, tempC, defaultEphWindow(element, pHMin, pHMax), gibbs);
-  const rows: EphLineRow[] = d.boundaries.map((b) => [b.speciesA, b.speciesB, b.from.pH, b.from.E, b.to.pH, b.to.E]);
+  const rows: EphLineRow[] = d.boundaries.map((b) => [
+    b.speciesA,
+    b.speciesB,
+    b.from.pH,
+    b.from.E,
+    b.to.pH,
+    b.to.E,
+  ]);
   for (const w of d.waterLines) {
     const [ox, red] = w.name === 'hydrogen' ? ['H+', 'H2(g)'] : ['O2(g)', 'H2O(l)'];
     rows.push([ox, red, w.from.pH, w.from.E, w.to.pH, w.to.E]);

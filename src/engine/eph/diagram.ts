@@ -71,7 +71,11 @@ const RECORDS = new Map<string, SpeciesThermoRecord>(EPH_SPECIES.map((r) => [r.s
 export const defaultSpeciesGibbs: SpeciesGibbs = (speciesText, tempC) => {
   const r = RECORDS.get(speciesText);
   if (!r) {
-    throw new EngineError('notFound', `No thermodynamic record for ${quote(speciesText)} in the E–pH species data.`, 'species');
+    throw new EngineError(
+      'notFound',
+      `No thermodynamic record for ${quote(speciesText)} in the E–pH species data.`,
+      'species',
+    );
   }
   if (r.dfHkJ === undefined) return r.dfGkJ;
   const tK = tempC + ZERO_CELSIUS_K;
@@ -142,8 +146,14 @@ export function findEphElement(element: string): EphElement {
  * checkEphTemp(25) // 25
  */
 export function checkEphTemp(tempC: number): number {
-  if (typeof tempC !== 'number' || !Number.isFinite(tempC) || tempC < EPH_LIMITS.tempMinC || tempC > EPH_LIMITS.tempMaxC) {
-    const hint = typeof tempC === 'number' && tempC > 250 && tempC < 400 ? ' It looks like kelvin: give °C.' : '';
+  if (
+    typeof tempC !== 'number' ||
+    !Number.isFinite(tempC) ||
+    tempC < EPH_LIMITS.tempMinC ||
+    tempC > EPH_LIMITS.tempMaxC
+  ) {
+    const hint =
+      typeof tempC === 'number' && tempC > 250 && tempC < 400 ? ' It looks like kelvin: give °C.' : '';
     throw new EngineError(
       'argument',
       `temp_C must be between 0 and 100 °C for aqueous E–pH diagrams; got ${String(tempC)}.${hint}`,
@@ -193,7 +203,11 @@ export function checkEphPH(pH: number, argName = 'pH'): number {
  * checkEphPotential(-0.5) // -0.5
  */
 export function checkEphPotential(potentialV: number, argName = 'E_V'): number {
-  if (typeof potentialV !== 'number' || !Number.isFinite(potentialV) || Math.abs(potentialV) > EPH_LIMITS.potentialMaxAbsV) {
+  if (
+    typeof potentialV !== 'number' ||
+    !Number.isFinite(potentialV) ||
+    Math.abs(potentialV) > EPH_LIMITS.potentialMaxAbsV
+  ) {
     throw new EngineError(
       'argument',
       `${argName} must be a potential in V vs SHE within ±10 V; got ${String(potentialV)}. Give volts, not millivolts.`,
@@ -223,10 +237,15 @@ export function ephStoichiometry(speciesText: string, symbol: string): Stoich {
   const atoms = counts.get(symbol) ?? 0;
   for (const el of counts.keys()) {
     if (el !== symbol && el !== 'O' && el !== 'H') {
-      throw new EngineError('argument', `E–pH species ${quote(speciesText)} holds ${el}; only ${symbol}, O and H are allowed.`, 'species');
+      throw new EngineError(
+        'argument',
+        `E–pH species ${quote(speciesText)} holds ${el}; only ${symbol}, O and H are allowed.`,
+        'species',
+      );
     }
   }
-  if (atoms <= 0) throw new EngineError('argument', `E–pH species ${quote(speciesText)} holds no ${symbol}.`, 'species');
+  if (atoms <= 0)
+    throw new EngineError('argument', `E–pH species ${quote(speciesText)} holds no ${symbol}.`, 'species');
   const o = (counts.get('O') ?? 0) / atoms;
   const h = 2 * o - (counts.get('H') ?? 0) / atoms;
   const n = sp.charge / atoms + h;
@@ -303,7 +322,13 @@ export function ephPlanes(
       g0V: (gKJ * 1000) / FARADAY_C_PER_MOL,
     });
   });
-  const result: EphPlanes = Object.freeze({ element: el, activity, tempC, slopeV: slopeV(tempC), planes: Object.freeze(planes) });
+  const result: EphPlanes = Object.freeze({
+    element: el,
+    activity,
+    tempC,
+    slopeV: slopeV(tempC),
+    planes: Object.freeze(planes),
+  });
   if (useCache) {
     if (planeCache.size >= PLANE_CACHE_LIMIT) planeCache.clear();
     planeCache.set(key, result);
@@ -544,7 +569,11 @@ export function defaultEphWindow(element: string, pHMin = 0, pHMax = 14): EphWin
  * @example
  * waterLines(25, DEFAULT_EPH_WINDOW)[1].interceptV // ≈ 1.2288
  */
-export function waterLines(tempC: number, w: EphWindow, gibbs: SpeciesGibbs = defaultSpeciesGibbs): EphWaterLine[] {
+export function waterLines(
+  tempC: number,
+  w: EphWindow,
+  gibbs: SpeciesGibbs = defaultSpeciesGibbs,
+): EphWaterLine[] {
   checkEphTemp(tempC);
   const s = slopeV(tempC);
   const e0O2 = (-gibbs('H2O(l)', tempC) * 1000) / (2 * FARADAY_C_PER_MOL);
@@ -651,7 +680,10 @@ export function ephDiagram(
       let j = P.edge;
       if (!present.has(j)) j = stableIndex(p, mx, my);
       if (!present.has(j) || j === i) continue;
-      const key = i < j ? `${i}|${j}|${P.x.toFixed(9)}|${P.y.toFixed(9)}` : `${j}|${i}|${Q.x.toFixed(9)}|${Q.y.toFixed(9)}`;
+      const key =
+        i < j
+          ? `${i}|${j}|${P.x.toFixed(9)}|${P.y.toFixed(9)}`
+          : `${j}|${i}|${Q.x.toFixed(9)}|${Q.y.toFixed(9)}`;
       if (seen.has(key)) continue;
       seen.add(key);
       const lo = i < j ? i : j;

@@ -25,7 +25,17 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
     {
       symbol: 'Fe',
       name: 'iron',
-      species: ['Fe(s)', 'Fe2+', 'Fe3+', 'FeOH 2+', 'HFeO2-', 'Fe(OH)2(s)', 'Fe(OH)3(s)', 'Fe3O4(s)', 'Fe2O3(s)'],
+      species: [
+        'Fe(s)',
+        'Fe2+',
+        'Fe3+',
+        'FeOH 2+',
+        'HFeO2-',
+        'Fe(OH)2(s)',
+        'Fe(OH)3(s)',
+        'Fe3O4(s)',
+        'Fe2O3(s)',
+      ],
       note:
         'Anhydrous solids Fe3O4 and Fe2O3 (Pourbaix 1966, Fig. 4 convention); Fe(OH)2 and Fe(OH)3 are ' +
         'in the set but are metastable (Fe(OH)2 disproportionates to Fe + Fe3O4; Fe(OH)3 lies above Fe2O3), ' +
@@ -55,8 +65,7 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
       symbol: 'Ni',
       name: 'nickel',
       species: ['Ni(s)', 'Ni2+', 'Ni(OH)2(s)', 'HNiO2-', 'Ni3O4(s)', 'Ni2O3(s)', 'NiO2(s)'],
-      note:
-        'Ni(OH)2 as the Ni(II) solid; the higher oxides Ni3O4, Ni2O3, NiO2 with Atlas values (NBS gives none).',
+      note: 'Ni(OH)2 as the Ni(II) solid; the higher oxides Ni3O4, Ni2O3, NiO2 with Atlas values (NBS gives none).',
     },
     {
       symbol: 'Cr',
@@ -95,6 +104,10 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
         'solubility of Ag2O (minimum about 4e-6 near pH 12) exceeds the activity, so Ag2O has no region.',
     },
   ].map((e) =>
-    Object.freeze({ ...e, eMinV: e.symbol === 'Mg' || e.symbol === 'Al' ? -3 : -2, species: Object.freeze([...e.species]) }),
+    Object.freeze({
+      ...e,
+      eMinV: e.symbol === 'Mg' || e.symbol === 'Al' ? -3 : -2,
+      species: Object.freeze([...e.species]),
+    }),
   ),
 );

@@ -22,14 +22,16 @@ export interface EphSvgOptions {
 }
 
 /** The caution printed on every diagram. */
-export const EPH_CAUTION = 'Thermodynamic estimate; kinetics and local chemistry decide; follow applicable standards.';
+export const EPH_CAUTION =
+  'Thermodynamic estimate; kinetics and local chemistry decide; follow applicable standards.';
 
 /** Fill colours and patterns by class (Okabe–Ito hues, lightened). */
-export const EPH_CLASS_STYLE: Readonly<Record<EphClass, { fill: string; ink: string; label: string }>> = Object.freeze({
-  immunity: { fill: '#cfe3f3', ink: '#0072b2', label: 'immunity' },
-  corrosion: { fill: '#fbd9b5', ink: '#d55e00', label: 'corrosion' },
-  passivation: { fill: '#cdeedd', ink: '#009e73', label: 'passivation' },
-});
+export const EPH_CLASS_STYLE: Readonly<Record<EphClass, { fill: string; ink: string; label: string }>> =
+  Object.freeze({
+    immunity: { fill: '#cfe3f3', ink: '#0072b2', label: 'immunity' },
+    corrosion: { fill: '#fbd9b5', ink: '#d55e00', label: 'corrosion' },
+    passivation: { fill: '#cdeedd', ink: '#009e73', label: 'passivation' },
+  });
 
 function esc(text: string): string {
   return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
@@ -41,7 +43,12 @@ function num(x: number): string {
 
 /** An activity as people write it: 1e-6, 0.01, 1. */
 function activityText(a: number): string {
-  return a < 1e-3 ? a.toExponential().replace(/\.?0+e/, 'e').replace('e-', 'e-') : String(a);
+  return a < 1e-3
+    ? a
+        .toExponential()
+        .replace(/\.?0+e/, 'e')
+        .replace('e-', 'e-')
+    : String(a);
 }
 
 function niceStep(span: number, target: number): number {
@@ -54,7 +61,8 @@ function niceStep(span: number, target: number): number {
 function ticks(lo: number, hi: number, target: number): number[] {
   const step = niceStep(hi - lo, target);
   const out: number[] = [];
-  for (let v = Math.ceil(lo / step - 1e-9) * step; v <= hi + 1e-9; v += step) out.push(Math.round(v / step) * step);
+  for (let v = Math.ceil(lo / step - 1e-9) * step; v <= hi + 1e-9; v += step)
+    out.push(Math.round(v / step) * step);
   return out;
 }
 
@@ -116,11 +124,17 @@ export function renderEphSvg(diagram: EphDiagram, options: EphSvgOptions = {}): 
   out.push('</defs>');
   out.push(`<rect width="${W}" height="${H}" fill="#ffffff"/>`);
   const fillOf = (c: EphClass): string =>
-    c === 'corrosion' ? 'url(#eph-hatch)' : c === 'passivation' ? 'url(#eph-dots)' : EPH_CLASS_STYLE.immunity.fill;
+    c === 'corrosion'
+      ? 'url(#eph-hatch)'
+      : c === 'passivation'
+        ? 'url(#eph-dots)'
+        : EPH_CLASS_STYLE.immunity.fill;
   out.push('<g class="regions">');
   for (const r of diagram.regions) {
     const pts = r.polygon.map((p) => `${num(X(p.pH))},${num(Y(p.E))}`).join(' ');
-    out.push(`<polygon class="region ${r.cls}" data-species="${esc(r.species)}" data-class="${r.cls}" points="${pts}" fill="${fillOf(r.cls)}" stroke="none"/>`);
+    out.push(
+      `<polygon class="region ${r.cls}" data-species="${esc(r.species)}" data-class="${r.cls}" points="${pts}" fill="${fillOf(r.cls)}" stroke="none"/>`,
+    );
   }
   out.push('</g>');
   out.push('<g class="boundaries" stroke="#222222" stroke-width="1.6" fill="none">');
@@ -130,7 +144,9 @@ export function renderEphSvg(diagram: EphDiagram, options: EphSvgOptions = {}): 
     );
   }
   out.push('</g>');
-  out.push('<g class="water" stroke="#555555" stroke-width="1.2" stroke-dasharray="6 4" clip-path="url(#eph-plot)">');
+  out.push(
+    '<g class="water" stroke="#555555" stroke-width="1.2" stroke-dasharray="6 4" clip-path="url(#eph-plot)">',
+  );
   for (const l of diagram.waterLines) {
     out.push(
       `<line class="water-line" data-couple="${esc(l.couple)}" x1="${num(X(l.from.pH))}" y1="${num(Y(l.from.E))}" x2="${num(X(l.to.pH))}" y2="${num(Y(l.to.E))}"/>`,
@@ -152,7 +168,9 @@ export function renderEphSvg(diagram: EphDiagram, options: EphSvgOptions = {}): 
   out.push(`<rect x="${left}" y="${top}" width="${pw}" height="${ph}" fill="none" stroke="#000000"/>`);
   out.push('<g class="axis pH" font-size="11" text-anchor="middle">');
   for (const t of ticks(w.pHMin, w.pHMax, 8)) {
-    out.push(`<line x1="${num(X(t))}" y1="${top + ph}" x2="${num(X(t))}" y2="${top + ph + 5}" stroke="#000000"/>`);
+    out.push(
+      `<line x1="${num(X(t))}" y1="${top + ph}" x2="${num(X(t))}" y2="${top + ph + 5}" stroke="#000000"/>`,
+    );
     out.push(`<text class="tick" x="${num(X(t))}" y="${top + ph + 18}">${num(t)}</text>`);
   }
   out.push(`<text class="axis-title" x="${left + pw / 2}" y="${top + ph + 36}" font-size="12">pH</text>`);
@@ -173,7 +191,9 @@ export function renderEphSvg(diagram: EphDiagram, options: EphSvgOptions = {}): 
     out.push(`<g class="axis ref" data-reference="${esc(ref.id)}" font-size="11" text-anchor="start">`);
     for (const t of ticks(lo, hi, 8)) {
       const y = Y(t - shift);
-      out.push(`<line x1="${left + pw}" y1="${num(y)}" x2="${left + pw + 5}" y2="${num(y)}" stroke="#000000"/>`);
+      out.push(
+        `<line x1="${left + pw}" y1="${num(y)}" x2="${left + pw + 5}" y2="${num(y)}" stroke="#000000"/>`,
+      );
       out.push(`<text class="tick" x="${left + pw + 8}" y="${num(y + 4)}">${num(t)}</text>`);
     }
     const xr = W - 14;
@@ -182,7 +202,9 @@ export function renderEphSvg(diagram: EphDiagram, options: EphSvgOptions = {}): 
     );
     out.push('</g>');
   }
-  out.push(`<text class="title" x="${W / 2}" y="20" text-anchor="middle" font-size="14" font-weight="bold">${esc(`E–pH diagram: ${el.name} (${el.symbol})`)}</text>`);
+  out.push(
+    `<text class="title" x="${W / 2}" y="20" text-anchor="middle" font-size="14" font-weight="bold">${esc(`E–pH diagram: ${el.name} (${el.symbol})`)}</text>`,
+  );
   out.push(
     `<text class="subtitle" x="${W / 2}" y="37" text-anchor="middle" font-size="12">${esc(`dissolved species at activity ${activityText(diagram.activity)}, ${diagram.tempC} °C, 1 bar; dashed: water stability (H2, O2 at 1 bar)`)}</text>`,
   );
@@ -191,12 +213,16 @@ export function renderEphSvg(diagram: EphDiagram, options: EphSvgOptions = {}): 
   let lx = left;
   out.push('<g class="legend" font-size="11">');
   for (const c of ['immunity', 'corrosion', 'passivation'] as const) {
-    out.push(`<rect x="${lx}" y="${ly}" width="14" height="12" fill="${fillOf(c)}" stroke="#000000" stroke-width="0.5"/>`);
+    out.push(
+      `<rect x="${lx}" y="${ly}" width="14" height="12" fill="${fillOf(c)}" stroke="#000000" stroke-width="0.5"/>`,
+    );
     out.push(`<text x="${lx + 20}" y="${ly + 10}">${EPH_CLASS_STYLE[c].label}</text>`);
     lx += 110;
   }
   out.push('</g>');
-  out.push(`<text class="caution" x="${left}" y="${H - 10}" font-size="11" fill="#333333">${esc(EPH_CAUTION)}</text>`);
+  out.push(
+    `<text class="caution" x="${left}" y="${H - 10}" font-size="11" fill="#333333">${esc(EPH_CAUTION)}</text>`,
+  );
   out.push('</svg>');
   return out.join('\n') + '\n';
 }

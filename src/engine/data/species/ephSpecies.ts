@@ -53,7 +53,14 @@ export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [
   // aluminium
   { species: 'Al(s)', dfGkJ: 0, dfHkJ: 0, sJK: 28.33, cpJK: 24.35, source: NBS }, // [table]
   { species: 'Al3+', dfGkJ: -485.0, dfHkJ: -531, sJK: -321.7, source: NBS }, // [table]
-  { species: 'Al2O3(s)', dfGkJ: -1582.3, dfHkJ: -1675.7, sJK: 50.92, cpJK: 79.04, source: `${NBS}; corundum` },
+  {
+    species: 'Al2O3(s)',
+    dfGkJ: -1582.3,
+    dfHkJ: -1675.7,
+    sJK: 50.92,
+    cpJK: 79.04,
+    source: `${NBS}; corundum`,
+  },
   { species: 'AlO2-', dfGkJ: -830.9, dfHkJ: -930.9, sJK: -36.8, source: NBS },
 
   // nickel
@@ -95,7 +102,14 @@ export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [
   { species: 'Mg(s)', dfGkJ: 0, dfHkJ: 0, sJK: 32.68, cpJK: 24.89, source: NBS }, // [table]
   { species: 'Mg2+', dfGkJ: -454.8, dfHkJ: -466.85, sJK: -138.1, source: NBS }, // [table]
   { species: 'MgO(s)', dfGkJ: -569.43, dfHkJ: -601.7, sJK: 26.94, cpJK: 37.15, source: NBS },
-  { species: 'Mg(OH)2(s)', dfGkJ: -833.51, dfHkJ: -924.54, sJK: 63.18, cpJK: 77.03, source: `${NBS}; brucite` },
+  {
+    species: 'Mg(OH)2(s)',
+    dfGkJ: -833.51,
+    dfHkJ: -924.54,
+    sJK: 63.18,
+    cpJK: 77.03,
+    source: `${NBS}; brucite`,
+  },
 
   // silver
   { species: 'Ag(s)', dfGkJ: 0, dfHkJ: 0, sJK: 42.55, cpJK: 25.351, source: NBS }, // [table]
