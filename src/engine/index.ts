@@ -106,6 +106,13 @@ export {
 export * from './activity';
 export * from './references';
 
+// species-header grammar (i11): one reading of `left:Ag+`, `l:Ag+`, `pH`, `left:pH`
+export {
+  type SpeciesHeaderParts,
+  splitSpeciesHeader,
+  canonicalSpeciesHeader,
+} from './notation/speciesHeader';
+
 // E–pH (Pourbaix) diagrams
 export { EPH_ELEMENTS, type EphElement } from './eph/elements';
 export {
