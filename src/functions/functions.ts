@@ -323,6 +323,69 @@ export function CHECKTABLE(table: any[][]): any[][] {
   return toExcel(implementation('CHECKTABLE'), table);
 }
 
+/**
+ * The thermodynamically stable species of an element at a potential and pH (E–pH / Pourbaix diagram). Example: =ECHEM.PREDOMINANT("Fe", -1, 7) gives Fe(s).
+ * @customfunction PREDOMINANT
+ * @helpurl https://localhost:3000/taskpane.html#ref-predominant
+ * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
+ * @param E_V Electrode potential in V vs SHE; one cell or a column of cases
+ * @param pH pH of the solution; one cell or a column of cases; −2–16
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default: 0.000001)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @returns Species text, e.g. "Fe2O3(s)", one row per case
+ */
+export function PREDOMINANT(
+  element: any[][],
+  E_V: any[][],
+  pH: any[][],
+  activity?: any[][],
+  temp_C?: any[][],
+): any[][] {
+  return toExcel(implementation('PREDOMINANT'), element, E_V, pH, activity, temp_C);
+}
+
+/**
+ * Immunity, corrosion or passivation: the class of the stable species of an element at a potential and pH. Example: =ECHEM.EPHCLASS("Zn", -0.5, 4) gives corrosion.
+ * @customfunction EPHCLASS
+ * @helpurl https://localhost:3000/taskpane.html#ref-ephclass
+ * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
+ * @param E_V Electrode potential in V vs SHE; one cell or a column of cases
+ * @param pH pH of the solution; one cell or a column of cases; −2–16
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default: 0.000001)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @returns "immunity" (the metal), "corrosion" (a dissolved species) or "passivation" (a solid oxide or hydroxide), one row per case
+ */
+export function EPHCLASS(
+  element: any[][],
+  E_V: any[][],
+  pH: any[][],
+  activity?: any[][],
+  temp_C?: any[][],
+): any[][] {
+  return toExcel(implementation('EPHCLASS'), element, E_V, pH, activity, temp_C);
+}
+
+/**
+ * An element's E–pH diagram as line segments (species A, species B, pH1, E1, pH2, E2) plus the two water lines, for an XY chart. Example: =ECHEM.EPHLINES("Zn") gives {species A, species B, pH1, E1 (V vs SHE), pH2, E2 (V vs SHE); Zn(s), ZnO2 2-, 13.9804, -1.36492, 14, -1.36725; Zn(s), HZnO2-, 10.0177, -1.01328, 13.9804, -1.36492; Zn(s), ZnO(s), 8.77163, -0.939563, 10.0177, -1.01328; … (10 rows)}.
+ * @customfunction EPHLINES
+ * @helpurl https://localhost:3000/taskpane.html#ref-ephlines
+ * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (default 1e-6); > 0, ≤ 1 (default: 0.000001)
+ * @param [temp_C] Temperature in °C, 0–100; 0–100 °C (default: 25)
+ * @param [pH_min] Lowest pH of the lines; −2–16 (default: 0)
+ * @param [pH_max] Highest pH of the lines; −2–16 (default: 14)
+ * @returns Rows under a header: species A | species B | pH1 | E1 (V vs SHE) | pH2 | E2 (V vs SHE)
+ */
+export function EPHLINES(
+  element: any[][],
+  activity?: any[][],
+  temp_C?: any[][],
+  pH_min?: any[][],
+  pH_max?: any[][],
+): any[][] {
+  return toExcel(implementation('EPHLINES'), element, activity, temp_C, pH_min, pH_max);
+}
+
 // Excel finds each function by its id. Guarded so that the page also loads outside Excel.
 if (typeof CustomFunctions !== 'undefined') {
   CustomFunctions.associate('POTENTIAL', POTENTIAL);
@@ -345,4 +408,7 @@ if (typeof CustomFunctions !== 'undefined') {
   CustomFunctions.associate('SOURCE', SOURCE);
   CustomFunctions.associate('LISTTABLE', LISTTABLE);
   CustomFunctions.associate('CHECKTABLE', CHECKTABLE);
+  CustomFunctions.associate('PREDOMINANT', PREDOMINANT);
+  CustomFunctions.associate('EPHCLASS', EPHCLASS);
+  CustomFunctions.associate('EPHLINES', EPHLINES);
 }
