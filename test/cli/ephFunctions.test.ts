@@ -24,7 +24,7 @@ describe('PREDOMINANT', () => {
     // engine test)
     const r = callFunction('PREDOMINANT', ['Ag', 0.6, 11.5, [[1e-4], [1e-6]], 25]);
     expect(r).toEqual([['Ag2O(s)'], ['Ag+']]);
-    expect(callFunction('PREDOMINANT', ['Cu', 0.2, 10])).toEqual([['Cu2O(s)']]);
+    expect(callFunction('PREDOMINANT', ['Cu', 0, 10])).toEqual([['Cu2O(s)']]);
   });
   test('a bad case gives an error in its own cell; the others compute', () => {
     const r = callFunction('PREDOMINANT', ['Zn', [[-0.5], [-0.5]], [[4], [20]]]);
