@@ -630,3 +630,48 @@ describe('bad inputs', () => {
     expect(findEphElement('aluminum').symbol).toBe('Al');
   });
 });
+
+describe('exact regions agree with the pointwise minimum everywhere', () => {
+  /** Inside or on a counter-clockwise convex polygon (cross products ≥ −tol). */
+  function inside(poly: readonly { pH: number; E: number }[], x: number, y: number): boolean {
+    for (let k = 0; k < poly.length; k++) {
+      const p = poly[k] as { pH: number; E: number };
+      const q = poly[(k + 1) % poly.length] as { pH: number; E: number };
+      if ((q.pH - p.pH) * (y - p.E) - (q.E - p.E) * (x - p.pH) < -1e-9) return false;
+    }
+    return true;
+  }
+  test.each([
+    [1e-6, 25],
+    [1e-4, 25],
+    [1, 25],
+    [1e-8, 0],
+    [1e-6, 100],
+  ])('activity %p, %p °C: every grid point lies in the region of its stable species', (a, t) => {
+    for (const el of EPH_ELEMENTS) {
+      const d = ephDiagram(el.symbol, a, t);
+      const w = d.window;
+      for (let i = 0; i <= 40; i++) {
+        for (let j = 0; j <= 40; j++) {
+          const x = w.pHMin + ((w.pHMax - w.pHMin) * (j + 0.37)) / 41;
+          const y = w.eMinV + ((w.eMaxV - w.eMinV) * (i + 0.61)) / 41;
+          const sp = predominantSpecies(el.symbol, y, x, a, t).species;
+          const r = d.regions.find((q) => q.species === sp);
+          expect({ el: el.symbol, x, y, sp, hit: r !== undefined && inside(r.polygon, x, y) }).toEqual({
+            el: el.symbol,
+            x,
+            y,
+            sp,
+            hit: true,
+          });
+        }
+      }
+    }
+  });
+  test('a window edge through a boundary (pH_min at Zn2+/ZnO, by hand 8.772) leaves no sliver region', () => {
+    const pH0 = (logK(-147.06 + G_H2O + 318.3) - LOG_A) / 2;
+    const d = ephDiagram('Zn', A, 25, { pHMin: pH0, pHMax: 14, eMinV: -2, eMaxV: 2 });
+    expect(d.regions.map((r) => r.species)).not.toContain('Zn2+');
+    expect(d.regions.map((r) => r.species)).toEqual(['Zn(s)', 'ZnO(s)', 'HZnO2-', 'ZnO2 2-']);
+  });
+});
