@@ -39,7 +39,7 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
       note:
         'Anhydrous solids Fe3O4 and Fe2O3 (Pourbaix 1966, Fig. 4 convention); Fe(OH)2 and Fe(OH)3 are ' +
         'in the set but are metastable (Fe(OH)2 disproportionates to Fe + Fe3O4; Fe(OH)3 lies above Fe2O3), ' +
-        'so they never predominate. NBS Fe2+ (−78.90 kJ/mol) puts Fe/Fe2+ about 30 mV above the Atlas.',
+        'so they never predominate. Fe2+ and Fe3+ from the measured E° of their couples.',
     },
     {
       symbol: 'Cu',
@@ -73,7 +73,7 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
       species: ['Cr(s)', 'Cr2+', 'Cr3+', 'Cr2O3(s)', 'CrO2-', 'HCrO4-', 'CrO4 2-'],
       note:
         'Anhydrous Cr2O3 as the solid; dichromate left out (a dimer: at 1e-6 it never predominates); ' +
-        'Cr2+, Cr3+ and CrO2- with Atlas values.',
+        'Cr2+ and Cr3+ from the measured E° of Cr2+/Cr and Cr3+/Cr; CrO2- with an Atlas value.',
     },
     {
       symbol: 'Pb',
