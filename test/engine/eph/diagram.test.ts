@@ -531,21 +531,32 @@ describe('temperature', () => {
     expectNear(o?.interceptV as number, 1.229, 0.0005);
     expectNear(o?.slopeVPerPH as number, -0.05916, 1e-5);
   });
-  test('water lines at 60 °C: slope −RT ln10/F; O2 line by Gibbs–Helmholtz from NBS ΔfH°, ΔfG° of water', () => {
+  // Gibbs–Helmholtz with constant ΔCp, by hand: ΔG(T) = ΔG° − (T − T0)ΔS° + ΔCp[(T − T0) − T ln(T/T0)]
+  const gh = (dGkJ: number, dSJK: number, dCpJK: number, tC: number): number => {
+    const T = tC + 273.15;
+    return dGkJ - ((T - 298.15) * dSJK) / 1000 + (dCpJK * (T - 298.15 - T * Math.log(T / 298.15))) / 1000;
+  };
+  // NBS (from memory): S° H2O(l) 69.91, H2(g) 130.684, O2(g) 205.138; Cp° 75.291, 28.824, 29.355
+  test('water lines at 60 °C: slope −RT ln10/F; O2 line from ΔrG°(T) of 2H2O -> O2 + 4H+ + 4e-', () => {
     const [h, o] = waterLines(60, defaultEphWindow('Fe'));
     expectNear(h?.slopeVPerPH as number, -s(60), 1e-12);
-    // ΔfG°(333.15 K) = ΔfH° − T(ΔfH° − ΔfG°)/298.15, ΔfH° = −285.83
-    const g60 = -285.83 - (333.15 * (-285.83 - G_H2O)) / 298.15;
-    expectNear(o?.interceptV as number, (-g60 * 1000) / (2 * F), 1e-9);
+    // ΔrS° = S°(O2) + 4·½S°(H2) − 2S°(H2O) (electrons ½S°(H2), H+ 0); ΔrCp° likewise
+    const dS = 205.138 + 2 * 130.684 - 2 * 69.91;
+    const dCp = 29.355 + 2 * 28.824 - 2 * 75.291;
+    const dG = gh(-2 * G_H2O, dS, dCp, 60);
+    expectNear(o?.interceptV as number, (dG * 1000) / (4 * F), 1e-9);
     // published dE°/dT of O2/H2O about −0.846 mV/K (from memory): 1.229 − 0.846e-3·35 ≈ 1.1994
     expectNear(o?.interceptV as number, 1.229 - 0.846e-3 * 35, 0.002);
   });
-  test('Zn/Zn2+ at 60 °C by hand (Gibbs–Helmholtz; NBS ΔfH° − ΔfG° of Zn2+ = −153.89 + 147.06)', () => {
-    const T = 333.15;
-    const h = G_ZN2 + (-153.89 + 147.06);
-    const g = h - (T * (h - G_ZN2)) / 298.15;
+  test('Zn/Zn2+ at 60 °C by hand (NBS S°: Zn2+ −112.1, Zn 41.63; Cp°: Zn2+ 46, Zn 25.40)', () => {
+    // Zn -> Zn2+ + 2e-: ΔrS° = S°(Zn2+) + 2·½S°(H2) − S°(Zn), ΔrCp° likewise
+    const dS = -112.1 + 130.684 - 41.63;
+    const dCp = 46 + 28.824 - 25.4;
     const d = ephDiagram('Zn', A, 60);
-    expectLine(d, 'Zn(s)', 'Zn2+', e0(g, 2) + (s(60) / 2) * LOG_A, 0);
+    expectLine(d, 'Zn(s)', 'Zn2+', e0(gh(G_ZN2, dS, dCp, 60), 2) + (s(60) / 2) * LOG_A, 0);
+    // the temperature coefficient of E°(Zn2+/Zn) is near the published +0.119 mV/K (from memory)
+    const e60 = e0(gh(G_ZN2, dS, dCp, 60), 2);
+    expectNear((e60 - e0(G_ZN2, 2)) / 35, 0.119e-3, 0.02e-3);
   });
   test('the boundaries move with temperature and the planes are recomputed per temperature', () => {
     const a = ephDiagram('Cu', A, 25);
