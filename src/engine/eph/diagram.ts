@@ -70,9 +70,10 @@ interface FormationTerms {
   readonly cpKJK: number;
 }
 
-const formationCache = new Map<string, FormationTerms>();
+/** A species' record by its text ("Fe2+", "Fe2O3(s)", "H2(g)"); throws where there is none. */
+export type SpeciesRecordLookup = (speciesText: string) => SpeciesThermoRecord;
 
-function recordOf(speciesText: string): SpeciesThermoRecord {
+function ephRecord(speciesText: string): SpeciesThermoRecord {
   const r = RECORDS.get(speciesText);
   if (!r) {
     throw new EngineError(
@@ -85,60 +86,66 @@ function recordOf(speciesText: string): SpeciesThermoRecord {
 }
 
 /**
- * ΔfG°, ΔfS° and ΔfCp° of the formation of a species from its elements (and, for an ion, the
- * electrons of the SHE convention: S°(e-) = ½S°(H2), Cp°(e-) = ½Cp°(H2), ΔfG°(e-) = 0).
- * ΔfS° from the absolute S° of the species and its elements; where the species has no S°,
- * from (ΔfH° − ΔfG°)/T0; where it has neither, 0. A species without Cp° contributes none
- * (the elements' and electrons' still count), so that Σν·ΔfCp° of a reaction is Σν·Cp°.
+ * A {@link SpeciesGibbs} built on any record lookup (the E–pH records by default; the species
+ * data layer's `findSpeciesRecord` once merged): Gibbs–Helmholtz with a constant heat capacity
+ * of formation,
+ * ΔfG°(T) = ΔfG° − (T − T0)·ΔfS° + ΔfCp°·[(T − T0) − T ln(T/T0)], T0 = 298.15 K.
+ *
+ * ΔfS° and ΔfCp° are those of the formation from the elements (H2(g), O2(g), the metal(s)) and,
+ * for an ion, the electrons of the SHE convention (S°(e-) = ½S°(H2), Cp°(e-) = ½Cp°(H2),
+ * ΔfG°(e-) = 0). ΔfS° from the absolute S°; where a record has no S°, (ΔfH° − ΔfG°)/T0; where
+ * it has neither, 0 (ΔfG° keeps its 25 °C value). A species without Cp° contributes none, so
+ * that Σν·ΔfG°(T) over a reaction is the reaction's own Gibbs–Helmholtz expression with
+ * ΔrS° = Σν·S° and ΔrCp° = Σν·Cp° (element and electron terms cancel).
+ *
+ * @example
+ * const gibbs = makeSpeciesGibbs((t) => myRecords.get(t)!);
+ * gibbs('H2O(l)', 60) // ≈ −231.41 kJ/mol
  */
-function formationTerms(speciesText: string): FormationTerms {
-  const hit = formationCache.get(speciesText);
-  if (hit) return hit;
-  const r = recordOf(speciesText);
-  const sp = parseSpecies(speciesText);
-  const h2 = recordOf('H2(g)');
-  const sE = (h2.sJK ?? 0) / 2;
-  const cpE = (h2.cpJK ?? 0) / 2;
-  // elements -> X^z + z e-: the electrons count on the product side (z < 0 for anions)
-  let sEl = sp.charge * sE;
-  let cpEl = sp.charge * cpE;
-  for (const [el, count] of elementsOf(sp)) {
-    const state = ELEMENT_STATE[el];
-    const ref = state ? recordOf(state.species) : RECORDS.get(`${el}(s)`);
-    const per = state ? state.per : 1;
-    sEl -= count * per * (ref?.sJK ?? 0);
-    cpEl -= count * per * (ref?.cpJK ?? 0);
-  }
-  let sJK: number;
-  if (r.sJK !== undefined) sJK = r.sJK + sEl;
-  else if (r.dfHkJ !== undefined) sJK = ((r.dfHkJ - r.dfGkJ) / T0_K) * 1000;
-  else sJK = 0;
-  const terms = { gKJ: r.dfGkJ, sKJK: sJK / 1000, cpKJK: ((r.cpJK ?? 0) + cpEl) / 1000 };
-  formationCache.set(speciesText, terms);
-  return terms;
+export function makeSpeciesGibbs(lookup: SpeciesRecordLookup): SpeciesGibbs {
+  const cache = new Map<string, FormationTerms>();
+  const terms = (speciesText: string): FormationTerms => {
+    const hit = cache.get(speciesText);
+    if (hit) return hit;
+    const r = lookup(speciesText);
+    const sp = parseSpecies(speciesText);
+    const h2 = lookup('H2(g)');
+    // elements -> X^z + z e-: the electrons count on the product side (z < 0 for anions)
+    let sEl = (sp.charge * (h2.sJK ?? 0)) / 2;
+    let cpEl = (sp.charge * (h2.cpJK ?? 0)) / 2;
+    for (const [el, count] of elementsOf(sp)) {
+      const state = ELEMENT_STATE[el];
+      const ref = lookup(state ? state.species : `${el}(s)`);
+      const per = state ? state.per : 1;
+      sEl -= count * per * (ref.sJK ?? 0);
+      cpEl -= count * per * (ref.cpJK ?? 0);
+    }
+    let sJK: number;
+    if (r.sJK !== undefined) sJK = r.sJK + sEl;
+    else if (r.dfHkJ !== undefined) sJK = ((r.dfHkJ - r.dfGkJ) / T0_K) * 1000;
+    else sJK = 0;
+    const t = { gKJ: r.dfGkJ, sKJK: sJK / 1000, cpKJK: ((r.cpJK ?? 0) + cpEl) / 1000 };
+    cache.set(speciesText, t);
+    return t;
+  };
+  return (speciesText, tempC) => {
+    const f = terms(speciesText);
+    const tK = tempC + ZERO_CELSIUS_K;
+    if (tK === T0_K) return f.gKJ;
+    return f.gKJ - (tK - T0_K) * f.sKJK + f.cpKJK * (tK - T0_K - tK * Math.log(tK / T0_K));
+  };
 }
 
 /**
- * The default {@link SpeciesGibbs}, built on EPH_SPECIES: Gibbs–Helmholtz with a constant
- * heat capacity of formation,
- * ΔfG°(T) = ΔfG° − (T − T0)·ΔfS° + ΔfCp°·[(T − T0) − T ln(T/T0)], T0 = 298.15 K, with ΔfS°
- * and ΔfCp° as {@link formationTerms} gives them. Summed over a reaction this is the
- * reaction's own Gibbs–Helmholtz expression with ΔrS° = Σν·S° and ΔrCp° = Σν·Cp° (element
- * and electron terms cancel), the same model as the species data layer's reaction
- * thermodynamics. Species with neither S° nor ΔfH° keep ΔfG°(25 °C) (the element notes say
- * which). Domain 0–100 °C (checked by callers).
+ * The default {@link SpeciesGibbs}: {@link makeSpeciesGibbs} on the records of EPH_SPECIES.
+ * Domain 0–100 °C (checked by callers).
  *
  * @throws EngineError (`notFound`) for a species without a record
  * @example
  * defaultSpeciesGibbs('H2O(l)', 25) // −237.129
  * defaultSpeciesGibbs('H2O(l)', 60) // ≈ −231.41
  */
-export const defaultSpeciesGibbs: SpeciesGibbs = (speciesText, tempC) => {
-  const f = formationTerms(speciesText);
-  const tK = tempC + ZERO_CELSIUS_K;
-  if (tK === T0_K) return f.gKJ;
-  return f.gKJ - (tK - T0_K) * f.sKJK + f.cpKJK * (tK - T0_K - tK * Math.log(tK / T0_K));
-};
+export const defaultSpeciesGibbs: SpeciesGibbs = makeSpeciesGibbs(ephRecord);
 
 /** Whether a species is the metal, a dissolved species or a solid other than the metal. */
 export type EphPhaseKind = 'metal' | 'dissolved' | 'solid';

@@ -23,6 +23,7 @@ import {
   defaultEphWindow,
   EPH_ELEMENTS,
   EPH_SPECIES,
+  makeSpeciesGibbs,
   findEphElement,
   parseSpecies,
   elementsOf,
@@ -710,5 +711,22 @@ describe('exact regions agree with the pointwise minimum everywhere', () => {
     const d = ephDiagram('Zn', A, 25, { pHMin: pH0, pHMax: 14, eMinV: -2, eMaxV: 2 });
     expect(d.regions.map((r) => r.species)).not.toContain('Zn2+');
     expect(d.regions.map((r) => r.species)).toEqual(['Zn(s)', 'ZnO(s)', 'HZnO2-', 'ZnO2 2-']);
+  });
+});
+
+describe('an injected data source', () => {
+  test('makeSpeciesGibbs on another lookup moves the lines (Atlas ΔfG°(Fe2+) = −84.94 kJ/mol, from memory)', () => {
+    const records = new Map(EPH_SPECIES.map((r) => [r.species, r]));
+    const atlas = makeSpeciesGibbs((t) => {
+      if (t === 'Fe2+') return { species: 'Fe2+', dfGkJ: -84.94, source: 'Atlas' };
+      const r = records.get(t);
+      if (!r) throw new Error(t);
+      return r;
+    });
+    const d = ephDiagram('Fe', A, 25, defaultEphWindow('Fe'), atlas);
+    // Atlas: Fe2+ + 2e- -> Fe, E = −0.440 + 0.0295 log a (from memory)
+    expectLine(d, 'Fe(s)', 'Fe2+', e0(-84.94, 2) + (S25 / 2) * LOG_A, 0);
+    expectNear(boundary(d, 'Fe(s)', 'Fe2+').interceptV as number, -0.617, 0.002);
+    expect(predominantSpecies('Fe', -0.5, 4, A, 25, atlas).species).toBe('Fe2+');
   });
 });
