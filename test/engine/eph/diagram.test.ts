@@ -29,7 +29,7 @@ import {
   elementsOf,
 } from '../../../src/engine';
 import type { EphDiagram, EphBoundary } from '../../../src/engine';
-import { F, R, S25, s, engineErrorOf, expectNear } from '../support';
+import { F, R, S25, s, engineErrorOf, expectNear } from '../../support';
 
 const A = 1e-6;
 const LOG_A = -6;
