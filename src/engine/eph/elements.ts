@@ -45,7 +45,9 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
       symbol: 'Cu',
       name: 'copper',
       species: ['Cu(s)', 'Cu+', 'Cu2+', 'Cu2O(s)', 'CuO(s)', 'HCuO2-', 'CuO2 2-'],
-      note: 'Cu2O and CuO (tenorite) as the solids; Cu+ disproportionates and never predominates at 1e-6.',
+      note:
+        'Cu2O and CuO (tenorite) as the solids; at 1e-6 Cu+ disproportionates (by 0.2 kJ/mol) and has no region; ' +
+        'at 1e-7 it has a narrow one.',
     },
     {
       symbol: 'Zn',
@@ -101,7 +103,7 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
       species: ['Ag(s)', 'Ag+', 'Ag2O(s)', 'AgO(s)', 'Ag(OH)2-'],
       note:
         'Ag2O and AgO as the solids (AgO with an Atlas value); Ag(OH)2- as the anion. At 1e-6 the ' +
-        'solubility of Ag2O (minimum about 4e-6 near pH 12) exceeds the activity, so Ag2O has no region.',
+        'solubility of Ag2O (minimum about 2e-6 near pH 12) exceeds the activity, so Ag2O has no region.',
     },
   ].map((e) =>
     Object.freeze({
