@@ -249,6 +249,17 @@ describe('copper', () => {
     expect(dG).toBeLessThan(0);
     expect(d.absent).toContain('Cu+');
   });
+  test('at 1e-7 Cu+ gains a narrow region (2Cu+ -> Cu + Cu2+: ΔG = 65.49 − 2·49.98 + RT ln(1e7) > 0)', () => {
+    expect(65.49 - 2 * 49.98 + (R * 298.15 * Math.log(1e7)) / 1000).toBeGreaterThan(0);
+    const d7 = ephDiagram('Cu', 1e-7);
+    const r = d7.regions.find((x) => x.species === 'Cu+');
+    expect(r).toBeDefined();
+    // between Cu+/Cu (E = 0.518 + s log a, from ΔfG°(Cu+) = 49.98) and Cu2+/Cu+ at pH 1
+    const eLow = e0(49.98, 1) + S25 * -7;
+    const eHigh = e0(65.49 - 49.98, 1);
+    expect(eHigh).toBeGreaterThan(eLow);
+    expect(predominantSpecies('Cu', (eLow + eHigh) / 2, 1, 1e-7).species).toBe('Cu+');
+  });
 });
 
 describe('zinc', () => {
