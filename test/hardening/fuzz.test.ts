@@ -464,7 +464,10 @@ const PLAUSIBLE: Record<string, fc.Arbitrary<Arg>> = {
   electrons: fc.oneof(rowOf(fc.integer({ min: 1, max: 6 })), rowOf(anyScalar)) as fc.Arbitrary<Arg>,
   filter: fc.oneof(speciesName, fc.constantFrom('Fe', 'Cu2+', 'Ag', ''), mutatedText) as fc.Arbitrary<Arg>,
   // E–pH functions
-  element: fc.oneof(fc.constantFrom('Fe', 'Cu', 'zn', 'Al', 'Ni', 'Cr', 'Pb', 'Sn', 'Mg', 'Ag', ''), mutatedText) as fc.Arbitrary<Arg>,
+  element: fc.oneof(
+    fc.constantFrom('Fe', 'Cu', 'zn', 'Al', 'Ni', 'Cr', 'Pb', 'Sn', 'Mg', 'Ag', ''),
+    mutatedText,
+  ) as fc.Arbitrary<Arg>,
   E_V: cellOrColumn(fc.oneof(fc.double({ min: -3, max: 3, noNaN: true }), anyNumber)),
   activity: cellOrColumn(fc.oneof(fc.double({ min: 1e-12, max: 1, noNaN: true }), anyNumber)),
   pH_min: fc.oneof(fc.double({ min: -2, max: 16, noNaN: true }), anyNumber) as fc.Arbitrary<Arg>,
