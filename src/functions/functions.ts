@@ -294,17 +294,11 @@ export function CHECKTABLE(table: any[][]): any[][] {
  * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
  * @param E_V Electrode potential in V vs SHE; one cell or a column of cases
  * @param pH pH of the solution; one cell or a column of cases; −2–16
- * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default: 0.000001)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default 0.000001)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns Species text, e.g. "Fe2O3(s)", one row per case
  */
-export function PREDOMINANT(
-  element: any[][],
-  E_V: any[][],
-  pH: any[][],
-  activity?: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function PREDOMINANT(element: any[][], E_V: any[][], pH: any[][], activity?: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('PREDOMINANT'), element, E_V, pH, activity, temp_C);
 }
 
@@ -315,17 +309,11 @@ export function PREDOMINANT(
  * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
  * @param E_V Electrode potential in V vs SHE; one cell or a column of cases
  * @param pH pH of the solution; one cell or a column of cases; −2–16
- * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default: 0.000001)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default 0.000001)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns "immunity" (the metal), "corrosion" (a dissolved species) or "passivation" (a solid oxide or hydroxide), one row per case
  */
-export function EPHCLASS(
-  element: any[][],
-  E_V: any[][],
-  pH: any[][],
-  activity?: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function EPHCLASS(element: any[][], E_V: any[][], pH: any[][], activity?: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('EPHCLASS'), element, E_V, pH, activity, temp_C);
 }
 
@@ -334,19 +322,13 @@ export function EPHCLASS(
  * @customfunction EPHLINES
  * @helpurl https://localhost:3000/taskpane.html#ref-ephlines
  * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
- * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (default 1e-6); > 0, ≤ 1 (default: 0.000001)
- * @param [temp_C] Temperature in °C, 0–100; 0–100 °C (default: 25)
- * @param [pH_min] Lowest pH of the lines; −2–16 (default: 0)
- * @param [pH_max] Highest pH of the lines; −2–16 (default: 14)
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (default 1e-6); > 0, ≤ 1 (default 0.000001)
+ * @param [temp_C] Temperature in °C, 0–100; 0–100 °C (default 25)
+ * @param [pH_min] Lowest pH of the lines; −2–16 (default 0)
+ * @param [pH_max] Highest pH of the lines; −2–16 (default 14)
  * @returns Rows under a header: species A | species B | pH1 | E1 (V vs SHE) | pH2 | E2 (V vs SHE)
  */
-export function EPHLINES(
-  element: any[][],
-  activity?: any[][],
-  temp_C?: any[][],
-  pH_min?: any[][],
-  pH_max?: any[][],
-): any[][] {
+export function EPHLINES(element: any[][], activity?: any[][], temp_C?: any[][], pH_min?: any[][], pH_max?: any[][]): any[][] {
   return toExcel(implementation('EPHLINES'), element, activity, temp_C, pH_min, pH_max);
 }
 
