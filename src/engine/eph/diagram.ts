@@ -725,7 +725,6 @@ export function ephDiagram(
   }
   // boundaries: each edge of region i whose label is a plane, with the neighbour confirmed
   const boundaries: EphBoundary[] = [];
-  const seen = new Set<string>();
   const scaleX = w.pHMax - w.pHMin;
   const scaleY = w.eMaxV - w.eMinV;
   for (const i of present) {
@@ -745,12 +744,8 @@ export function ephDiagram(
       let j = P.edge;
       if (!present.has(j)) j = stableIndex(p, mx, my);
       if (!present.has(j) || j === i) continue;
-      const key =
-        i < j
-          ? `${i}|${j}|${P.x.toFixed(9)}|${P.y.toFixed(9)}`
-          : `${j}|${i}|${Q.x.toFixed(9)}|${Q.y.toFixed(9)}`;
-      if (seen.has(key)) continue;
-      seen.add(key);
+      // each boundary lies on both polygons: take it from the region listed first
+      if (j < i) continue;
       const lo = i < j ? i : j;
       const hi = i < j ? j : i;
       const A = p.planes[lo] as EphPlane;

@@ -1,8 +1,8 @@
 /** E–pH (Pourbaix) diagrams: the stable species per case, its class, and the diagram's lines. */
-import { EPH_ELEMENTS, EPH_LINE_HEADER, ephLineRows, predominantCases, isEngineError } from '../../engine';
+import { EPH_ELEMENTS, EPH_LINE_HEADER, ephLineRows, predominantSpecies } from '../../engine';
 import type { Result } from '../cellTypes';
 import { TEMP_C } from '../spec/params';
-import type { FunctionSpec, ParamSpec } from '../spec/types';
+import type { CaseArgs, FunctionSpec, ParamSpec } from '../spec/types';
 
 const ELEMENT: ParamSpec = {
   name: 'element',
@@ -33,24 +33,20 @@ const ACTIVITY: ParamSpec = {
 };
 
 const NOTES = [
-  'Thermodynamic estimate from standard Gibbs energies of formation (NBS tables, Wagman et al. 1982; some values from Pourbaix, Atlas of Electrochemical Equilibria, 1966); kinetics and local chemistry decide, follow applicable standards.',
-  'Solids at activity 1, water at activity 1, 1 bar; the species sets are listed in DEVELOPERS.md, "E–pH diagrams".',
+  'Thermodynamic estimate (species data: NBS 1982, measured E°, some Pourbaix 1966 values; solids and water at activity 1, 1 bar); kinetics and local chemistry decide; follow applicable standards. Species sets: DEVELOPERS.md, "E–pH diagrams".',
 ];
 
-/** The species text or class of one case, through the engine's column path (planes cached). */
+/** The species text or class of one case (the planes are cached per element, activity and T). */
 function oneCase(mode: 'species' | 'class') {
-  return (a: import('../spec/types').CaseArgs): string => {
-    const r = predominantCases(
+  return (a: CaseArgs): string => {
+    const r = predominantSpecies(
       a.text('element'),
       a.num('E_V'),
       a.num('pH'),
       a.num('activity'),
       a.num('temp_C'),
-      mode,
-    )[0];
-    if (r === undefined) return '';
-    if (isEngineError(r)) throw r;
-    return r as string;
+    );
+    return mode === 'class' ? r.cls : r.species;
   };
 }
 

@@ -45,6 +45,26 @@ function measured(
 }
 
 const OSX = 'OpenStax Chemistry 2e, Appendix L';
+const u = undefined;
+
+/** One record from its values (kJ/mol, J/(mol·K)); absent values as `u`; NBS unless named. */
+function rec(
+  species: string,
+  g: number,
+  h?: number,
+  s?: number,
+  cp?: number,
+  source = NBS,
+): SpeciesThermoRecord {
+  return {
+    species,
+    dfGkJ: g,
+    ...(h === undefined ? {} : { dfHkJ: h }),
+    ...(s === undefined ? {} : { sJK: s }),
+    ...(cp === undefined ? {} : { cpJK: cp }),
+    source,
+  };
+}
 const G_FE2 = 2 * F_KJ * -0.447; // Fe2+ + 2e- -> Fe
 const G_SN2 = 2 * F_KJ * -0.1375; // Sn2+ + 2e- -> Sn
 // PbSO4 + 2e- -> Pb + SO4 2- (−0.3505 V) with NBS ΔfG°(SO4 2-) = −744.53; then
@@ -54,41 +74,41 @@ const G_PBO2 = G_PBSO4 + 2 * -237.129 + 744.53 + 2 * F_KJ * 1.69;
 
 export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [
   // water and its ions
-  { species: 'H2O(l)', dfGkJ: -237.129, dfHkJ: -285.83, sJK: 69.91, cpJK: 75.291, source: NBS }, // [table]
+  rec('H2O(l)', -237.129, -285.83, 69.91, 75.291), // [table]
   { species: 'H+', dfGkJ: 0, dfHkJ: 0, sJK: 0, cpJK: 0, source: `${NBS} (convention)` }, // [table]
-  { species: 'OH-', dfGkJ: -157.244, dfHkJ: -229.994, sJK: -10.75, cpJK: -148.5, source: NBS }, // [table]
-  { species: 'O2(g)', dfGkJ: 0, dfHkJ: 0, sJK: 205.138, cpJK: 29.355, source: NBS }, // [table]
-  { species: 'H2(g)', dfGkJ: 0, dfHkJ: 0, sJK: 130.684, cpJK: 28.824, source: NBS }, // [table]
+  rec('OH-', -157.244, -229.994, -10.75, -148.5), // [table]
+  rec('O2(g)', 0, 0, 205.138, 29.355), // [table]
+  rec('H2(g)', 0, 0, 130.684, 28.824), // [table]
 
   // iron
-  { species: 'Fe(s)', dfGkJ: 0, dfHkJ: 0, sJK: 27.28, cpJK: 25.1, source: NBS }, // [table]
+  rec('Fe(s)', 0, 0, 27.28, 25.1), // [table]
   measured('Fe2+', { g: -78.9, h: -89.1, s: -137.7 }, 2, -0.447, 0, 'Fe2+ + 2 e- -> Fe'), // [table]
   measured('Fe3+', { g: -4.7, h: -48.5, s: -315.9 }, 1, 0.771, G_FE2, 'Fe3+ + e- -> Fe2+'), // [table]
-  { species: 'FeOH 2+', dfGkJ: -229.41, dfHkJ: -290.8, sJK: -142, source: NBS },
-  { species: 'HFeO2-', dfGkJ: -377.7, source: NBS },
-  { species: 'Fe(OH)2(s)', dfGkJ: -486.5, dfHkJ: -569.0, sJK: 88, source: NBS },
-  { species: 'Fe(OH)3(s)', dfGkJ: -696.5, dfHkJ: -823.0, sJK: 106.7, source: NBS },
-  { species: 'Fe3O4(s)', dfGkJ: -1015.4, dfHkJ: -1118.4, sJK: 146.4, cpJK: 143.43, source: NBS },
-  { species: 'Fe2O3(s)', dfGkJ: -742.2, dfHkJ: -824.2, sJK: 87.4, cpJK: 103.85, source: NBS },
+  rec('FeOH 2+', -229.41, -290.8, -142),
+  rec('HFeO2-', -377.7),
+  rec('Fe(OH)2(s)', -486.5, -569.0, 88),
+  rec('Fe(OH)3(s)', -696.5, -823.0, 106.7),
+  rec('Fe3O4(s)', -1015.4, -1118.4, 146.4, 143.43),
+  rec('Fe2O3(s)', -742.2, -824.2, 87.4, 103.85),
 
   // copper
-  { species: 'Cu(s)', dfGkJ: 0, dfHkJ: 0, sJK: 33.15, cpJK: 24.435, source: NBS }, // [table]
-  { species: 'Cu+', dfGkJ: 49.98, dfHkJ: 71.67, sJK: 40.6, source: NBS }, // [table]
-  { species: 'Cu2+', dfGkJ: 65.49, dfHkJ: 64.77, sJK: -99.6, source: NBS }, // [table]
-  { species: 'Cu2O(s)', dfGkJ: -146.0, dfHkJ: -168.6, sJK: 93.14, cpJK: 63.64, source: NBS },
-  { species: 'CuO(s)', dfGkJ: -129.7, dfHkJ: -157.3, sJK: 42.63, cpJK: 42.3, source: NBS },
-  { species: 'HCuO2-', dfGkJ: -258.5, source: NBS },
-  { species: 'CuO2 2-', dfGkJ: -183.6, source: NBS },
+  rec('Cu(s)', 0, 0, 33.15, 24.435), // [table]
+  rec('Cu+', 49.98, 71.67, 40.6), // [table]
+  rec('Cu2+', 65.49, 64.77, -99.6), // [table]
+  rec('Cu2O(s)', -146.0, -168.6, 93.14, 63.64),
+  rec('CuO(s)', -129.7, -157.3, 42.63, 42.3),
+  rec('HCuO2-', -258.5),
+  rec('CuO2 2-', -183.6),
 
   // zinc
-  { species: 'Zn(s)', dfGkJ: 0, dfHkJ: 0, sJK: 41.63, cpJK: 25.4, source: NBS }, // [table]
+  rec('Zn(s)', 0, 0, 41.63, 25.4), // [table]
   measured('Zn2+', { g: -147.06, h: -153.89, s: -112.1, cp: 46 }, 2, -0.7618, 0, 'Zn2+ + 2 e- -> Zn'), // [table]
-  { species: 'ZnO(s)', dfGkJ: -318.3, dfHkJ: -348.28, sJK: 43.64, cpJK: 40.25, source: NBS },
-  { species: 'HZnO2-', dfGkJ: -464.0, source: NBS },
-  { species: 'ZnO2 2-', dfGkJ: -384.2, source: NBS },
+  rec('ZnO(s)', -318.3, -348.28, 43.64, 40.25),
+  rec('HZnO2-', -464.0),
+  rec('ZnO2 2-', -384.2),
 
   // aluminium
-  { species: 'Al(s)', dfGkJ: 0, dfHkJ: 0, sJK: 28.33, cpJK: 24.35, source: NBS }, // [table]
+  rec('Al(s)', 0, 0, 28.33, 24.35), // [table]
   measured('Al3+', { g: -485.0, h: -531, s: -321.7 }, 3, -1.662, 0, 'Al3+ + 3 e- -> Al'), // [table]
   {
     species: 'Al2O3(s)',
@@ -98,15 +118,15 @@ export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [
     cpJK: 79.04,
     source: `${NBS}; corundum`,
   },
-  { species: 'AlO2-', dfGkJ: -830.9, dfHkJ: -930.9, sJK: -36.8, source: NBS },
+  rec('AlO2-', -830.9, -930.9, -36.8),
 
   // nickel
-  { species: 'Ni(s)', dfGkJ: 0, dfHkJ: 0, sJK: 29.87, cpJK: 26.07, source: NBS }, // [table]
+  rec('Ni(s)', 0, 0, 29.87, 26.07), // [table]
   measured('Ni2+', { g: -45.6, h: -54.0, s: -128.9 }, 2, -0.257, 0, 'Ni2+ + 2 e- -> Ni'), // [table]
-  { species: 'Ni(OH)2(s)', dfGkJ: -447.2, dfHkJ: -529.7, sJK: 88, source: NBS }, // [table: NiO2/Ni(OH)2]
-  { species: 'HNiO2-', dfGkJ: -349.2, source: NBS },
-  { species: 'Ni3O4(s)', dfGkJ: -711.9, source: POURBAIX },
-  { species: 'Ni2O3(s)', dfGkJ: -469.7, source: POURBAIX },
+  rec('Ni(OH)2(s)', -447.2, -529.7, 88), // [table: NiO2/Ni(OH)2]
+  rec('HNiO2-', -349.2),
+  rec('Ni3O4(s)', -711.9, u, u, u, POURBAIX),
+  rec('Ni2O3(s)', -469.7, u, u, u, POURBAIX),
   {
     // NiO2 + 2H2O + 2e- -> Ni(OH)2 + 2OH- (0.49 V) with NBS Ni(OH)2, OH-, H2O
     species: 'NiO2(s)',
@@ -115,23 +135,23 @@ export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [
   }, // [table]
 
   // chromium
-  { species: 'Cr(s)', dfGkJ: 0, dfHkJ: 0, sJK: 23.77, cpJK: 23.35, source: NBS }, // [table]
+  rec('Cr(s)', 0, 0, 23.77, 23.35), // [table]
   {
     species: 'Cr2+',
     dfGkJ: 2 * F_KJ * -0.913,
     source: `derived: ΔfG° from E°(Cr2+/Cr) = −0.913 V (CRC Handbook, 92nd ed.), from memory`,
   },
   { species: 'Cr3+', dfGkJ: 3 * F_KJ * -0.744, source: `derived: ΔfG° from E°(Cr3+/Cr) = −0.744 V (${OSX})` }, // [table]
-  { species: 'Cr2O3(s)', dfGkJ: -1058.1, dfHkJ: -1139.7, sJK: 81.2, cpJK: 118.74, source: NBS },
-  { species: 'CrO2-', dfGkJ: -535.9, source: POURBAIX },
-  { species: 'HCrO4-', dfGkJ: -764.7, dfHkJ: -878.2, sJK: 184.1, source: NBS },
-  { species: 'CrO4 2-', dfGkJ: -727.75, dfHkJ: -881.15, sJK: 50.21, source: NBS },
+  rec('Cr2O3(s)', -1058.1, -1139.7, 81.2, 118.74),
+  rec('CrO2-', -535.9, u, u, u, POURBAIX),
+  rec('HCrO4-', -764.7, -878.2, 184.1),
+  rec('CrO4 2-', -727.75, -881.15, 50.21),
 
   // lead
-  { species: 'Pb(s)', dfGkJ: 0, dfHkJ: 0, sJK: 64.81, cpJK: 26.44, source: NBS }, // [table]
+  rec('Pb(s)', 0, 0, 64.81, 26.44), // [table]
   measured('Pb2+', { g: -24.43, h: -1.7, s: 10.5 }, 2, -0.1262, 0, 'Pb2+ + 2 e- -> Pb'), // [table]
   { species: 'PbO(s)', dfGkJ: -187.89, dfHkJ: -217.32, sJK: 68.7, cpJK: 45.77, source: `${NBS}; yellow` }, // [table]
-  { species: 'Pb3O4(s)', dfGkJ: -601.2, dfHkJ: -718.4, sJK: 211.3, cpJK: 146.9, source: NBS },
+  rec('Pb3O4(s)', -601.2, -718.4, 211.3, 146.9),
   {
     species: 'PbO2(s)',
     dfGkJ: G_PBO2,
@@ -140,21 +160,21 @@ export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [
     cpJK: 64.64,
     source: `ΔfG° from the measured E° of PbSO4/Pb (−0.3505 V) and PbO2/PbSO4 (1.69 V) (${OSX}) with NBS SO4 2- and H2O; ΔfH° moved with it, S° and Cp° from the ${NBS}`,
   }, // [table]
-  { species: 'HPbO2-', dfGkJ: -338.9, source: NBS },
+  rec('HPbO2-', -338.9),
 
   // tin
   { species: 'Sn(s)', dfGkJ: 0, dfHkJ: 0, sJK: 51.55, cpJK: 26.99, source: `${NBS}; white tin` }, // [table]
   measured('Sn2+', { g: -27.2, h: -8.8, s: -17 }, 2, -0.1375, 0, 'Sn2+ + 2 e- -> Sn'), // [table]
   measured('Sn4+', { g: 2.5, h: 30.5, s: -117 }, 2, 0.151, G_SN2, 'Sn4+ + 2 e- -> Sn2+'), // [table]
-  { species: 'SnO(s)', dfGkJ: -256.9, dfHkJ: -285.8, sJK: 56.5, cpJK: 44.31, source: NBS },
-  { species: 'SnO2(s)', dfGkJ: -519.6, dfHkJ: -580.7, sJK: 52.3, cpJK: 52.59, source: NBS },
-  { species: 'HSnO2-', dfGkJ: -410.0, source: NBS },
-  { species: 'SnO3 2-', dfGkJ: -574.1, source: POURBAIX },
+  rec('SnO(s)', -256.9, -285.8, 56.5, 44.31),
+  rec('SnO2(s)', -519.6, -580.7, 52.3, 52.59),
+  rec('HSnO2-', -410.0),
+  rec('SnO3 2-', -574.1, u, u, u, POURBAIX),
 
   // magnesium
-  { species: 'Mg(s)', dfGkJ: 0, dfHkJ: 0, sJK: 32.68, cpJK: 24.89, source: NBS }, // [table]
+  rec('Mg(s)', 0, 0, 32.68, 24.89), // [table]
   measured('Mg2+', { g: -454.8, h: -466.85, s: -138.1 }, 2, -2.372, 0, 'Mg2+ + 2 e- -> Mg'), // [table]
-  { species: 'MgO(s)', dfGkJ: -569.43, dfHkJ: -601.7, sJK: 26.94, cpJK: 37.15, source: NBS },
+  rec('MgO(s)', -569.43, -601.7, 26.94, 37.15),
   {
     species: 'Mg(OH)2(s)',
     dfGkJ: -833.51,
@@ -165,9 +185,9 @@ export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [
   },
 
   // silver
-  { species: 'Ag(s)', dfGkJ: 0, dfHkJ: 0, sJK: 42.55, cpJK: 25.351, source: NBS }, // [table]
+  rec('Ag(s)', 0, 0, 42.55, 25.351), // [table]
   measured('Ag+', { g: 77.107, h: 105.579, s: 72.68, cp: 21.8 }, 1, 0.7996, 0, 'Ag+ + e- -> Ag'), // [table]
-  { species: 'Ag2O(s)', dfGkJ: -11.2, dfHkJ: -31.05, sJK: 121.3, cpJK: 65.86, source: NBS },
-  { species: 'AgO(s)', dfGkJ: 10.8, source: POURBAIX },
-  { species: 'Ag(OH)2-', dfGkJ: -260.2, source: NBS },
+  rec('Ag2O(s)', -11.2, -31.05, 121.3, 65.86),
+  rec('AgO(s)', 10.8, u, u, u, POURBAIX),
+  rec('Ag(OH)2-', -260.2),
 ];
