@@ -149,3 +149,41 @@ export { parseSalt, type SaltIons } from './activity/salt';
 export { PITZER_BINARY, PITZER_THETA, PITZER_PSI, type PitzerBinaryRow } from './data/pitzerParameters';
 export { ACTIVITY_MODEL_RANGES, type ActivityModelRange } from './data/activityData';
 export { SOLUTION_DENSITIES } from './data/solutionDensities';
+// E–pH (Pourbaix) diagrams
+export { EPH_ELEMENTS, type EphElement } from './eph/elements';
+export {
+  type SpeciesGibbs,
+  type EphPhaseKind,
+  type EphClass,
+  type EphPlane,
+  type EphPlanes,
+  type EphPoint,
+  type EphWindow,
+  type EphRegion,
+  type EphBoundary,
+  type EphWaterLine,
+  type EphDiagram,
+  EPH_LIMITS,
+  DEFAULT_EPH_WINDOW,
+  defaultSpeciesGibbs,
+  makeSpeciesGibbs,
+  type SpeciesRecordLookup,
+  defaultEphWindow,
+  findEphElement,
+  ephPlanes,
+  ephDiagram,
+  predominantSpecies,
+  waterLines,
+  clearEphCache,
+} from './eph/diagram';
+export {
+  type EphMode,
+  type CaseColumn,
+  type EphLineRow,
+  EPH_LINE_HEADER,
+  predominantCases,
+  classifySpecies,
+  ephLineRows,
+} from './eph/cases';
+export { type EphSvgOptions, EPH_CAUTION, EPH_CLASS_STYLE, renderEphSvg } from './eph/svg';
+export { EPH_SPECIES } from './data/species/ephSpecies';

@@ -98,6 +98,9 @@ const SAMPLES: Record<string, unknown[]> = {
   CONCCELL: [cell('Ag+/Ag'), cell(0.01), cell(1), null, null, null],
   VSREF: [cell(-0.85), cell('Cu/CuSO4'), cell('SCE'), null, null],
   ACTCOEF: [cell('Ca2+'), cell(0.01), cell('extended'), null, null, null],
+  PREDOMINANT: [cell('Fe'), [[-1], [0.5]], [[7], [10]], null, null],
+  EPHCLASS: [cell('Zn'), [[-1.5], [-0.5]], [[6], [4]], null, null],
+  EPHLINES: [cell('Cu'), null, null, null, null],
   ACTIVITY: [
     [['Na+', 'Cl-']],
     [

@@ -993,6 +993,11 @@ const HAND_CASES: readonly BadInputCase[] = [
   },
   ...tempCases('VSREF', [0.5, 'SCE', 'SHE', null, 25], 4),
 
+  // -------------------------------------------------------------------- E–pH (PREDOMINANT, EPHCLASS, EPHLINES)
+  ...tempCases('PREDOMINANT', ['Fe', -1, 7, null, 25], 4),
+  ...tempCases('EPHCLASS', ['Fe', -1, 7, null, 25], 4),
+  ...tempCases('EPHLINES', ['Fe', null, 25, null, null], 2),
+
   // -------------------------------------------------------------------- ACTCOEF
   {
     fn: 'ACTCOEF',

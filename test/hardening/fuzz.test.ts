@@ -489,6 +489,15 @@ const PLAUSIBLE: Record<string, fc.Arbitrary<Arg>> = {
     fc.array(fc.array(positive, { minLength: 1, maxLength: 4 }), { minLength: 1, maxLength: 4 }),
     positive,
   ) as fc.Arbitrary<Arg>,
+  // E–pH functions
+  element: fc.oneof(
+    fc.constantFrom('Fe', 'Cu', 'zn', 'Al', 'Ni', 'Cr', 'Pb', 'Sn', 'Mg', 'Ag', ''),
+    mutatedText,
+  ) as fc.Arbitrary<Arg>,
+  E_V: cellOrColumn(fc.oneof(fc.double({ min: -3, max: 3, noNaN: true }), anyNumber)),
+  activity: cellOrColumn(fc.oneof(fc.double({ min: 1e-12, max: 1, noNaN: true }), anyNumber)),
+  pH_min: fc.oneof(fc.double({ min: -2, max: 16, noNaN: true }), anyNumber) as fc.Arbitrary<Arg>,
+  pH_max: fc.oneof(fc.double({ min: -2, max: 16, noNaN: true }), anyNumber) as fc.Arbitrary<Arg>,
 };
 
 /** Arguments for a function: each parameter plausible (3 in 4) or anything, sometimes one too many. */

@@ -9,3 +9,4 @@ export { ACTIVITY_SPECS } from './activity';
 export { REFERENCE_SPECS } from './references';
 export { TABLE_SPECS } from './table';
 export { SOLUTIONS_SPECS } from './solutions';
+export { EPH_SPECS } from './eph';
