@@ -88,11 +88,16 @@ function fOf(tempC: number): number {
 function currentAt(p: KineticParams, f: number, eta: number): number {
   const a = p.alphaA * f * eta;
   const c = -p.alphaC * f * eta;
-  const m = Math.max(a, c);
-  const ea = Math.exp(a - m);
-  const ec = Math.exp(c - m);
-  const num = p.i0 * (ea - ec);
-  const den = Math.exp(-m) + (p.i0 * ea) / p.iLimA + (p.i0 * ec) / p.iLimC;
+  // factor out the larger exponential; expm1 keeps the digits near η = 0
+  if (a >= c) {
+    const r = Math.exp(c - a);
+    const num = -p.i0 * Math.expm1(c - a);
+    const den = Math.exp(-a) + p.i0 / p.iLimA + (p.i0 * r) / p.iLimC;
+    return num / den;
+  }
+  const r = Math.exp(a - c);
+  const num = p.i0 * Math.expm1(a - c);
+  const den = Math.exp(-c) + (p.i0 * r) / p.iLimA + p.i0 / p.iLimC;
   return num / den;
 }
 
