@@ -106,6 +106,13 @@ export {
 export * from './activity';
 export * from './references';
 
+// species-header grammar (i11): one reading of `left:Ag+`, `l:Ag+`, `pH`, `left:pH`
+export {
+  type SpeciesHeaderParts,
+  splitSpeciesHeader,
+  canonicalSpeciesHeader,
+} from './notation/speciesHeader';
+
 // beyond equilibrium: Faraday's law, corrosion rates, anodes, capacity and energy,
 // electrode kinetics, inverse Nernst, junction potentials, ion-selective electrodes
 export { molarMassOfFormula, molarMassOfSpecies } from './faraday/molarMass';
