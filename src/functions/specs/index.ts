@@ -8,3 +8,7 @@ export { EQUILIBRIUM_SPECS } from './equilibrium';
 export { ACTIVITY_SPECS } from './activity';
 export { REFERENCE_SPECS } from './references';
 export { TABLE_SPECS } from './table';
+export { FARADAY_SPECS } from './faraday';
+export { CORROSION_SPECS } from './corrosion';
+export { KINETICS_SPECS } from './kinetics';
+export { MEASUREMENT_SPECS } from './measurement';
