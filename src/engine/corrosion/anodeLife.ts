@@ -19,7 +19,7 @@ export const HOURS_PER_YEAR = 8760;
 /**
  * Design capacity (Ah/kg) of a named anode material: "zinc", "Al-Zn-In", "magnesium", "high-potential magnesium".
  *
- * @throws EngineError (`notFound`) listing the names
+ * @throws EngineError (`argument`) listing the names
  * @example
  * anodeCapacityAhKg('zinc') // 780
  */
@@ -28,8 +28,8 @@ export function anodeCapacityAhKg(name: string): number {
   const m = ANODE_MATERIALS.find((a) => a.aliases.includes(key) || a.name.toLowerCase() === key);
   if (!m)
     throw new EngineError(
-      'notFound',
-      `${quote(name)} is not an anode material this function knows; give the capacity in Ah/kg as a number, or one of ${ANODE_MATERIALS.map((a) => `"${a.aliases[0]!}"`).join(', ')}.`,
+      'argument',
+      `capacity_Ah_kg must be a number in Ah/kg or an anode material this function knows (${ANODE_MATERIALS.map((a) => `"${a.aliases[0]!}"`).join(', ')}); got ${quote(name)}.`,
       'capacity_Ah_kg',
     );
   return m.capacityAhKg;
@@ -46,8 +46,8 @@ export function anodeUtilisation(name: string): number {
   const u = ANODE_UTILISATION.find((a) => a.aliases.includes(key) || a.name.toLowerCase() === key);
   if (!u)
     throw new EngineError(
-      'notFound',
-      `${quote(name)} is not an anode type this function knows; give the utilisation as a fraction, or one of ${ANODE_UTILISATION.map((a) => `"${a.aliases[0]!}"`).join(', ')}.`,
+      'argument',
+      `utilisation must be a number, a fraction in (0, 1], or an anode type this function knows (${ANODE_UTILISATION.map((a) => `"${a.aliases[0]!}"`).join(', ')}); got ${quote(name)}.`,
       'utilisation',
     );
   return u.factor;

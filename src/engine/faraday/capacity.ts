@@ -59,7 +59,7 @@ export function specificCapacityMAhG(text: string, basis?: string | number | nul
   if (typeof basis === 'number')
     throw new EngineError(
       'argument',
-      `basis for a reaction is "reduced", "oxidised" or a species of the reaction; got the number ${basis}. A number of electrons goes with a species alone, e.g. CAPACITY("LiCoO2", 1).`,
+      `basis must be "reduced", "oxidised" or a species of the reaction for an electrode reaction; got ${basis}. A number of electrons goes with a species alone, e.g. CAPACITY("LiCoO2", 1).`,
       'basis',
     );
   const r = halfReactionOf(text);

@@ -89,7 +89,7 @@ export function potentialInVolts(x: number, arg: string): number {
   if (Math.abs(x) > MAX_POTENTIAL_V)
     throw new EngineError(
       'argument',
-      `${arg} of ${x} V is beyond ±${MAX_POTENTIAL_V} V; potentials are in volts (for ${x} mV write ${x / 1000}).`,
+      `${arg} of ${x} V is beyond ±${MAX_POTENTIAL_V} V: were millivolts typed as volts? Give ${x / 1000} for ${x} mV.`,
       arg,
     );
   return x;
@@ -109,11 +109,7 @@ export function celsiusInRange(x: number, arg: string, range: readonly [number, 
   const asCelsius = x - 273.15;
   const hint =
     asCelsius >= lo && asCelsius <= hi
-      ? ` ${x} looks like kelvin: temperatures are in °C (${x} K is ${Number(asCelsius.toFixed(2))} °C).`
-      : ' Give the temperature in °C.';
-  throw new EngineError(
-    'argument',
-    `${arg} of ${x} °C is outside this function's range of ${lo} to ${hi} °C.${hint}`,
-    arg,
-  );
+      ? `: it looks like a temperature in kelvin; give it in °C (${x} K is ${Number(asCelsius.toFixed(2))} °C).`
+      : ', the range of this function; give the temperature in °C.';
+  throw new EngineError('argument', `${arg} must be between ${lo} and ${hi} °C; got ${x} °C${hint}`, arg);
 }

@@ -10,6 +10,7 @@ import {
   DEFAULT_UTILISATION,
 } from '../../engine';
 import { parseNumberText } from '../args';
+import { isInputErrorText } from '../cellTypes';
 import type { CaseArgs, FunctionSpec, ParamSpec } from '../spec/types';
 
 const CP_CAUTION =
@@ -116,13 +117,15 @@ const MASSLOSS: FunctionSpec = {
     ),
 };
 
-/** A number, numeric text, or a name (then the engine looks it up). */
+/**
+ * A number (read and checked by its kind), or a name the engine looks up: a text cell that
+ * is neither a number nor an error value is taken for a name.
+ */
 function numberOrName(a: CaseArgs, name: string): number | string | null {
   const raw = a.cell(name);
-  if (raw === null || raw === '') return null;
-  if (typeof raw === 'number') return raw;
-  if (typeof raw === 'string') return parseNumberText(raw) ?? raw;
-  throw new EngineError('argument', `${name} must be a number or a name; got ${String(raw)}.`, name);
+  if (typeof raw === 'string' && raw.trim() !== '' && parseNumberText(raw) === null && !isInputErrorText(raw))
+    return raw;
+  return a.optNum(name);
 }
 
 const ANODELIFE: FunctionSpec = {

@@ -97,12 +97,7 @@ const JUNCTION: FunctionSpec = {
     },
   ],
   perCase: (a, call) =>
-    junctionPotentialV(
-      call.headers(),
-      a.row('left_values') ?? [],
-      a.row('right_values') ?? [],
-      a.num('temp_C'),
-    ),
+    junctionPotentialV(call.headers(), a.numbers('left_values'), a.numbers('right_values'), a.num('temp_C')),
 };
 
 const ISERESPONSE: FunctionSpec = {
@@ -115,7 +110,7 @@ const ISERESPONSE: FunctionSpec = {
     { name: 'E0_V', kind: 'potential', description: 'The electrode’s E0 in V (from calibration)' },
     {
       name: 'slope_V',
-      kind: 'potential',
+      kind: 'number',
       unit: 'V/decade',
       description:
         'Slope in V per decade for a singly charged ion (0.05916 ideal at 25 °C); divided by z of the primary ion',

@@ -41,8 +41,16 @@ describe('ANODELIFE', () => {
     [() => anodeLifeYears(10, 780, 0), 'argument', /current_A must be greater than 0/],
     [() => anodeLifeYears(10, 780, 1, 1.1), 'argument', /utilisation must be a fraction/],
     [() => anodeLifeYears(10, 780, 1, 90), 'argument', /For 90 % write 0.9/],
-    [() => anodeLifeYears(10, 'copper', 1), 'notFound', /not an anode material/],
-    [() => anodeLifeYears(10, 780, 1, 'teardrop'), 'notFound', /not an anode type/],
+    [
+      () => anodeLifeYears(10, 'copper', 1),
+      'argument',
+      /capacity_Ah_kg must be a number in Ah\/kg or an anode material.*got "copper"/,
+    ],
+    [
+      () => anodeLifeYears(10, 780, 1, 'teardrop'),
+      'argument',
+      /utilisation must be a number.*got "teardrop"/,
+    ],
   ])('bad input %#', (f, kind, message) => {
     const e = engineErrorOf(f);
     expect(e.kind).toBe(kind);

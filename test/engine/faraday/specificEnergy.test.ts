@@ -43,8 +43,13 @@ describe('SPECENERGY (derived)', () => {
   test.each([
     ['Zn2+ + 2 e- -> Zn', 25, 'argument', /half-reaction; the specific energy needs a whole cell reaction/],
     ['Cu + Zn2+ -> Cu2+ + Zn', 25, 'argument', /gives no energy; write the discharge reaction/],
-    ['Zn + Cu2+ -> Zn2+ + Cu', 298.15, 'argument', /looks like kelvin/],
-    ['Zn + Cu2+ -> Zn2+ + Cu', -20, 'argument', /outside this function's range of 0 to 100 °C/],
+    ['Zn + Cu2+ -> Zn2+ + Cu', 298.15, 'argument', /looks like a temperature in kelvin/],
+    [
+      'Zn + Cu2+ -> Zn2+ + Cu',
+      -20,
+      'argument',
+      /must be between 0 and 100 °C; got -20 °C, the range of this function/,
+    ],
     ['Zn + Cu2+ -> Zn2+', 25, 'unbalanced', /./],
   ])('%s at %p °C: %s', (text, t, kind, message) => {
     const e = engineErrorOf(() => specificEnergyWhKg(text, t));

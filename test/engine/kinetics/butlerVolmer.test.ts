@@ -103,14 +103,14 @@ describe('kinetic parameters: bad inputs', () => {
     [() => kineticParams(1e-3, 1.5), /alpha_a must be a transfer coefficient/],
     [() => kineticParams(1e-3, 1), /alpha_c = 1 − alpha_a = 0/],
     [() => kineticParams(1e-3, 0.5, -0.1), /alpha_c must be a transfer coefficient/],
-    [() => kineticParams(1e-3, 0.5, 0.5, 298.15), /looks like kelvin/],
+    [() => kineticParams(1e-3, 0.5, 0.5, 298.15), /looks like a temperature in kelvin/],
     [() => kineticParams(1e-3, 0.5, 0.5, 25, 0), /i_lim must be greater than 0/],
     [() => butlerVolmerCurrent(50, kineticParams(1e-3, 0.5)), /eta_V of 50 V is beyond ±10 V/],
-    [() => butlerVolmerCurrent(-120, kineticParams(1e-3, 0.5)), /for -120 mV write -0.12/],
+    [() => butlerVolmerCurrent(-120, kineticParams(1e-3, 0.5)), /Give -0.12 for -120 mV/],
     [() => overpotentialV(NaN, kineticParams(1e-3, 0.5)), /i must be a finite number/],
     [() => tafelSlopeV(0), /alpha must be a transfer coefficient/],
     [() => tafelSlopeV(0.5, 25, 0), /n must be greater than 0/],
-    [() => tafelSlopeV(0.5, 373.15), /looks like kelvin/],
+    [() => tafelSlopeV(0.5, 373.15), /looks like a temperature in kelvin/],
   ])('bad input %#', (f, message) => {
     const e = engineErrorOf(f);
     expect(e.kind).toBe('argument');

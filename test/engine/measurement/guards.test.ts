@@ -6,12 +6,15 @@ describe('unit-slip guards', () => {
   test.each([
     [
       () => potentialInVolts(850, 'E_V'),
-      /E_V of 850 V is beyond ±10 V; potentials are in volts \(for 850 mV write 0.85\)/,
+      /E_V of 850 V is beyond ±10 V: were millivolts typed as volts\? Give 0.85 for 850 mV/,
     ],
-    [() => celsiusInRange(298.15, 'temp_C', [0, 100]), /298.15 looks like kelvin.*is 25 °C/],
+    [
+      () => celsiusInRange(298.15, 'temp_C', [0, 100]),
+      /got 298.15 °C: it looks like a temperature in kelvin; give it in °C \(298.15 K is 25 °C\)/,
+    ],
     [
       () => celsiusInRange(500, 'temp_C', [0, 100]),
-      /outside this function's range of 0 to 100 °C. Give the temperature in °C/,
+      /must be between 0 and 100 °C; got 500 °C, the range of this function/,
     ],
     [() => fractionInUnitInterval(80, 'utilisation'), /For 80 % write 0.8/],
     [() => fractionInUnitInterval(0, 'efficiency'), /efficiency must be a fraction in \(0, 1\]/],

@@ -59,7 +59,7 @@ describe('JUNCTION (Henderson)', () => {
     [[['C6H12O6'], [0.1], [0.1]], 'argument', /neither an ion nor a strong electrolyte/],
     [[[], [], []], 'argument', /species is empty/],
     [[['HCl'], ['a'], [0.1]], 'argument', /got "a"/],
-    [[['HCl'], [0.1], [0.01], 310], 'argument', /looks like kelvin/],
+    [[['HCl'], [0.1], [0.01], 310], 'argument', /looks like a temperature in kelvin/],
   ])('bad input %#', (args, kind, message) => {
     const [sp, l, r, t] = args as [string[], unknown[], unknown[], number | undefined];
     const e = engineErrorOf(() => junctionPotentialV(sp, l, r, t));
