@@ -39,12 +39,7 @@ const ACTCOEF: FunctionSpec = {
     'Activity coefficient of one ion at an ionic strength, by the Debye–Hückel limiting law, the extended Debye–Hückel equation or the Davies equation.',
   returns: 'γ (dimensionless), one row per case',
   params: [
-    {
-      name: 'species',
-      kind: 'species',
-      description: 'The ion, e.g. "Cu2+" or "SO4 2-"; one cell or a column of cases',
-      noun: 'an ion such as "Cu2+"',
-    },
+    { name: 'species', kind: 'species', description: 'The ion, e.g. "Cu2+" or "SO4 2-"; one cell or a column of cases', noun: 'an ion such as "Cu2+"' },
     IONIC_STRENGTH,
     MODEL_PARAM,
     {
@@ -103,13 +98,7 @@ const ACTIVITY: FunctionSpec = {
   ],
   perCase: (a, call) => {
     const headers = activityHeaders(call);
-    return engineActivities(
-      headers,
-      a.numbers(),
-      a.choice<ActivityModel>('model'),
-      a.optNum('ionic_strength'),
-      a.num('temp_C'),
-    );
+    return engineActivities(headers, a.numbers(), a.choice<ActivityModel>('model'), a.optNum('ionic_strength'), a.num('temp_C'));
   },
 };
 

@@ -75,12 +75,7 @@ const LOGK: FunctionSpec = {
   params: LOGK_PARAMS,
   result: { kind: 'perCase' },
   examples: [
-    {
-      args: [1.1, 2],
-      expected: 37.187697,
-      tolerance: 1e-5,
-      source: 'derived by hand: nFE°/(RT ln10) with the SI 2019 exact R and F',
-    },
+    { args: [1.1, 2], expected: 37.187697, tolerance: 1e-5, source: 'derived by hand: nFE°/(RT ln10) with the SI 2019 exact R and F' },
   ],
   perCase: log10K,
 };
@@ -107,18 +102,12 @@ const EQCONST: FunctionSpec = {
 const GIBBS: FunctionSpec = {
   id: 'GIBBS',
   family: 'Equilibrium',
-  summary:
-    'Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n, or the standard ΔG° of a reaction.',
+  summary: 'Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n, or the standard ΔG° of a reaction.',
   returns: 'ΔG in kJ/mol, one row per case',
   params: LOGK_PARAMS,
   result: { kind: 'perCase' },
   examples: [
-    {
-      args: [0.434, 2],
-      expected: -83.749268,
-      tolerance: 1e-5,
-      source: 'derived by hand: −nFE with the SI 2019 exact F',
-    },
+    { args: [0.434, 2], expected: -83.749268, tolerance: 1e-5, source: 'derived by hand: −nFE with the SI 2019 exact F' },
   ],
   perCase: (a, call) => {
     a.num('temp_C');
@@ -135,18 +124,8 @@ const ELECTRONS: FunctionSpec = {
   params: [REACTION, TABLE],
   result: { kind: 'perCase' },
   examples: [
-    {
-      args: ['Zn + Cu2+ -> Zn2+ + Cu'],
-      expected: 2,
-      tolerance: 0,
-      source: 'derived by hand: Zn → Zn2+ gives 2 electrons',
-    },
-    {
-      args: ['MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O'],
-      expected: 5,
-      tolerance: 0,
-      source: 'derived by hand: Mn +7 → +2',
-    },
+    { args: ['Zn + Cu2+ -> Zn2+ + Cu'], expected: 2, tolerance: 0, source: 'derived by hand: Zn → Zn2+ gives 2 electrons' },
+    { args: ['MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O'], expected: 5, tolerance: 0, source: 'derived by hand: Mn +7 → +2' },
   ],
   perCase: (a, call) => {
     const text = a.text('reaction');
@@ -174,11 +153,7 @@ const BALANCE: FunctionSpec = {
     'Balanced reaction text from a skeleton redox equation, half-reaction, couple or cell; medium "acid" balances with H+ and H2O, "base" with OH- and H2O.',
   returns: 'Balanced reaction text, one row per case',
   params: [
-    {
-      ...REACTION,
-      description:
-        'Skeleton equation such as "MnO4- + Fe2+ -> Mn2+ + Fe3+", or a half-reaction, couple or cell; one cell or a column of cases',
-    },
+    { ...REACTION, description: 'Skeleton equation such as "MnO4- + Fe2+ -> Mn2+ + Fe3+", or a half-reaction, couple or cell; one cell or a column of cases' },
     {
       name: 'medium',
       kind: 'choice',
@@ -246,12 +221,7 @@ const COMBINE: FunctionSpec = {
   summary: 'E° of the couple made by chaining steps, Σ nᵢEᵢ / Σ nᵢ (Gibbs energies add, potentials do not).',
   returns: 'E° in V of the combined couple',
   params: [
-    {
-      name: 'potentials',
-      kind: 'numberList',
-      unit: 'V',
-      description: 'E° of each step in V, one row or one column',
-    },
+    { name: 'potentials', kind: 'numberList', unit: 'V', description: 'E° of each step in V, one row or one column' },
     { name: 'n', kind: 'numberList', description: 'Electrons of each step, in the same order' },
   ],
   result: { kind: 'single' },
@@ -260,8 +230,7 @@ const COMBINE: FunctionSpec = {
       args: [[[0.771, -0.447]], [[1, 2]]],
       expected: -0.041,
       tolerance: 1e-12,
-      source:
-        'E°(Fe3+/Fe2+) = 0.771 V and E°(Fe2+/Fe) = −0.447 V, OpenStax Chemistry 2e, Appendix L; (0.771 − 2·0.447)/3',
+      source: 'E°(Fe3+/Fe2+) = 0.771 V and E°(Fe2+/Fe) = −0.447 V, OpenStax Chemistry 2e, Appendix L; (0.771 − 2·0.447)/3',
     },
   ],
   run: (call) => [[combineStepPotentialsV(call.numberList('potentials'), call.numberList('n'))]],
@@ -274,21 +243,9 @@ const CONCCELL: FunctionSpec = {
     "EMF in V of a concentration cell: two like electrodes whose solutions differ in one species' activity (right minus left, as IUPAC writes cells).",
   returns: 'EMF in V, one row per case',
   params: [
-    {
-      ...REACTION,
-      description: 'The electrode couple, e.g. "Ag+/Ag" or "Cu2+/Cu"; one cell or a column of cases',
-      noun: 'a couple such as "Ag+/Ag"',
-    },
-    {
-      name: 'value_left',
-      kind: 'activity',
-      description: 'Activity of the varying species at the left electrode (mol/L, or bar for a gas)',
-    },
-    {
-      name: 'value_right',
-      kind: 'activity',
-      description: 'Activity of the varying species at the right electrode (mol/L, or bar for a gas)',
-    },
+    { ...REACTION, description: 'The electrode couple, e.g. "Ag+/Ag" or "Cu2+/Cu"; one cell or a column of cases', noun: 'a couple such as "Ag+/Ag"' },
+    { name: 'value_left', kind: 'activity', description: 'Activity of the varying species at the left electrode (mol/L, or bar for a gas)' },
+    { name: 'value_right', kind: 'activity', description: 'Activity of the varying species at the right electrode (mol/L, or bar for a gas)' },
     {
       name: 'species',
       kind: 'species',
@@ -301,12 +258,7 @@ const CONCCELL: FunctionSpec = {
   ],
   result: { kind: 'perCase' },
   examples: [
-    {
-      args: ['Cu2+/Cu', 0.001, 0.1],
-      expected: 0.0591593,
-      tolerance: 1e-7,
-      source: `${SLOPE}: (RT ln10/2F)·log10(0.1/0.001)`,
-    },
+    { args: ['Cu2+/Cu', 0.001, 0.1], expected: 0.0591593, tolerance: 1e-7, source: `${SLOPE}: (RT ln10/2F)·log10(0.1/0.001)` },
   ],
   perCase: (a, call) => {
     const form = compiledReaction(a.text('reaction'), call.table());

@@ -53,8 +53,7 @@ function fastNernst(args: readonly Arg[], quantity: Quantity): Result | null {
   const table = quantity === 'potential' ? args[4] : args[3];
   const p = lastPrepared;
   if (!p || !Array.isArray(values) || values.length === 0) return null;
-  if (scalarOf(reaction) !== p.reaction || table !== p.table || !sameSpeciesRow(p.species, species))
-    return null;
+  if (scalarOf(reaction) !== p.reaction || table !== p.table || !sameSpeciesRow(p.species, species)) return null;
   const t = scalarOf(temp);
   if (t === undefined || (t !== null && typeof t !== 'number')) return null;
   const first = values[0];
@@ -92,8 +91,7 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
         ? { reaction, species: sg[0]!.slice(), table: call.raw('table'), binding: b }
         : null;
     const temps = quantity === 'potential' ? call.column('temp_C') : null;
-    if (!temps || temps.length === 1)
-      return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
+    if (!temps || temps.length === 1) return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
     return toColumn(sweepCases(b, valueRows, tempOf, quantity, n), n);
   }
   const out: Result = new Array<ResultCell[]>(n);
@@ -161,22 +159,16 @@ const STDPOTENTIAL: FunctionSpec = {
   result: { kind: 'perCase' },
   examples: [
     { args: ['Cu2+/Cu'], expected: 0.337, tolerance: 1e-12, source: CU_E0 },
-    {
-      args: ['Zn(s) | Zn2+(aq) || Cu2+(aq) | Cu(s)'],
-      expected: 1.0988,
-      tolerance: 1e-12,
-      source: `${CU_E0}; ${ZN_E0}`,
-    },
+    { args: ['Zn(s) | Zn2+(aq) || Cu2+(aq) | Cu(s)'], expected: 1.0988, tolerance: 1e-12, source: `${CU_E0}; ${ZN_E0}` },
   ],
-  perCase: (a, call) =>
-    standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.num('temp_C')),
+  perCase: (a, call) => standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.num('temp_C')),
 };
 
 const QUOTIENT: FunctionSpec = {
   id: 'QUOTIENT',
   family: 'Nernst',
   summary:
-    'Reaction quotient Q from the activities given (pure solids, liquids and water left out); #NUM! where Q leaves the number range (use LOGQ).',
+    "Reaction quotient Q from the activities given (pure solids, liquids and water left out); #NUM! where Q leaves the number range (use LOGQ).",
   returns: 'Q (dimensionless), one row per case',
   params: [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE],
   result: { kind: 'perCase' },
@@ -232,8 +224,7 @@ const CELLNOTATION: FunctionSpec = {
     {
       args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
       expected: 'Zn(s) | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu(s)',
-      source:
-        'IUPAC cell notation (common practice): anode left, single bar a phase boundary, double bar the salt bridge',
+      source: 'IUPAC cell notation (common practice): anode left, single bar a phase boundary, double bar the salt bridge',
     },
   ],
   perCase: (a, call) => {

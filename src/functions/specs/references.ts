@@ -10,20 +10,10 @@ const VSREF: FunctionSpec = {
     'A potential converted from one reference-electrode scale to another (SHE, SCE, Ag/AgCl in several KCl strengths, saturated Cu/CuSO4, Hg/Hg2SO4, Hg/HgO, RHE).',
   returns: 'The potential in V vs to_ref, one row per case',
   params: [
-    {
-      name: 'potential',
-      kind: 'potential',
-      description: 'The potential in V vs from_ref; one cell or a column of cases',
-    },
+    { name: 'potential', kind: 'potential', description: 'The potential in V vs from_ref; one cell or a column of cases' },
     { name: 'from_ref', kind: 'reference', description: 'The reference it was measured against, e.g. "SCE"' },
     { name: 'to_ref', kind: 'reference', description: 'The reference to express it against, e.g. "SHE"' },
-    {
-      name: 'pH',
-      kind: 'pH',
-      optional: true,
-      defaultText: 'none (needed for RHE)',
-      description: 'pH of the solution, for RHE',
-    },
+    { name: 'pH', kind: 'pH', optional: true, defaultText: 'none (needed for RHE)', description: 'pH of the solution, for RHE' },
     TEMP_C,
   ],
   result: { kind: 'perCase' },
@@ -32,18 +22,11 @@ const VSREF: FunctionSpec = {
       args: [0, 'SCE', 'SHE'],
       expected: 0.2412,
       tolerance: 1e-4,
-      source:
-        'saturated calomel electrode +0.2412 V vs SHE at 25 °C, Int. J. Corrosion 2010, art. 756950, Table 2',
+      source: 'saturated calomel electrode +0.2412 V vs SHE at 25 °C, Int. J. Corrosion 2010, art. 756950, Table 2',
     },
   ],
   perCase: (a) =>
-    convertPotentialV(
-      a.num('potential'),
-      a.text('from_ref'),
-      a.text('to_ref'),
-      a.num('temp_C'),
-      a.optNum('pH'),
-    ),
+    convertPotentialV(a.num('potential'), a.text('from_ref'), a.text('to_ref'), a.num('temp_C'), a.optNum('pH')),
 };
 
 /** The reference-scale family. */

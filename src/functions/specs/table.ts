@@ -1,11 +1,5 @@
 /** The potentials table: provenance, listing and checking (docs/functions/). */
-import {
-  BUILTIN_POTENTIALS,
-  compiledReaction,
-  describeSource,
-  filterPotentials,
-  tableFor,
-} from '../../engine';
+import { BUILTIN_POTENTIALS, compiledReaction, describeSource, filterPotentials, tableFor } from '../../engine';
 import type { Result } from '../cellTypes';
 import { cellError } from '../errorCodes';
 import { REACTION, TABLE } from '../spec/params';
@@ -19,11 +13,7 @@ const SOURCE: FunctionSpec = {
   params: [REACTION, TABLE],
   result: { kind: 'perCase' },
   examples: [
-    {
-      args: ['Cu2+/Cu'],
-      expected: 'OpenStax Chemistry 2e, Appendix L',
-      source: 'the source named in the built-in row',
-    },
+    { args: ['Cu2+/Cu'], expected: 'OpenStax Chemistry 2e, Appendix L', source: 'the source named in the built-in row' },
   ],
   perCase: (a, call) => describeSource(compiledReaction(a.text('reaction'), call.table()).resolved),
 };
@@ -67,18 +57,11 @@ const LISTTABLE: FunctionSpec = {
 const CHECKTABLE: FunctionSpec = {
   id: 'CHECKTABLE',
   family: 'Table',
-  summary:
-    'The problems in your potentials table (unbalanced rows, bad numbers, duplicates), one per row, or OK.',
+  summary: 'The problems in your potentials table (unbalanced rows, bad numbers, duplicates), one per row, or OK.',
   returns: 'OK, or one problem per row',
   params: [{ ...TABLE, optional: false, defaultText: undefined }],
   result: { kind: 'list', heightFrom: 'table' },
-  examples: [
-    {
-      args: [[['Cu2+ + 2 e- -> Cu', 0.337]]],
-      expected: 'OK',
-      source: 'a balanced row with a number (by inspection)',
-    },
-  ],
+  examples: [{ args: [[['Cu2+ + 2 e- -> Cu', 0.337]]], expected: 'OK', source: 'a balanced row with a number (by inspection)' }],
   run: (call) => {
     const cells = call.table();
     if (!cells)
