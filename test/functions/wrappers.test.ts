@@ -258,10 +258,13 @@ describe('errors', () => {
     expect(huge.message).toBeUndefined(); // Excel shows no message on #NUM!
   });
 
-  it('an error value in an input cell reaches the catalogue as its code and is named in the message', () => {
+  it('an error value in an input cell propagates: #N/A stays #N/A, with a message naming the argument', () => {
     const e = err(call(F.POTENTIAL, c('Cu2+/Cu'), c('Cu2+'), c(0.01), [[new StubError('#N/A')]]));
-    expect(e.code).toBe('#VALUE!');
-    expect(e.message).toContain('#N/A');
+    expect(e.code).toBe('#N/A');
+    expect(e.message).toBe('temp_C holds the error #N/A from its cell: fix that cell (or the formula that gives it) first.');
+    const d = err(call(F.POTENTIAL, c('Cu2+/Cu'), c('Cu2+'), [[new StubError('#DIV/0!')]]));
+    expect(d.code).toBe('#VALUE!');
+    expect(d.message).toContain('values (Cu2+) holds the error #DIV/0!');
   });
 });
 

@@ -89,7 +89,7 @@ export interface BadInputCase {
   /** The call's arguments, in parameter order. */
   readonly args: readonly Arg[];
   readonly expect: Expectation;
-  /** What the message tells the user (for the README). */
+  /** What the message tells the user (for docs/errors.md). */
   readonly says: string;
   /** Set where the engine does not behave so yet: what it does instead (the test is marked failing). */
   readonly bug?: string;

@@ -8,7 +8,9 @@
 import { EngineError, STANDARD_TEMP_C, ZERO_CELSIUS_K } from '../../engine';
 import { isInputErrorText } from '../cellTypes';
 import { isBlank, readElectrons, readNumber, readText, readOptionalText } from '../args';
-import type { NumericDomain, ParamSpec } from './types';
+import type { KindName, NumericDomain, ParamSpec } from './types';
+
+export type { KindName } from './types';
 
 /** A temperature in °C, read and checked at the boundary (docs/design.md, "Argument kinds"). */
 export type TempC = number & { readonly __unit: 'degC' };
@@ -156,10 +158,7 @@ export const KINDS = {
     perCase: false,
     about: 'One row or one column of numbers.',
   },
-} as const satisfies Record<string, KindDef>;
-
-/** The name of a parameter kind. */
-export type KindName = keyof typeof KINDS;
+} as const satisfies Record<KindName, KindDef>;
 
 /** The kind definition of a parameter. */
 export function kindOf(p: ParamSpec): KindDef {
