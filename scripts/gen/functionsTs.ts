@@ -30,7 +30,8 @@ export function paramLine(p: ParamSpec): string {
   if (p.choices) bits.push(`one of ${p.choices.map((c) => `"${c}"`).join(', ')}`);
   const dflt = defaultText(p);
   const text = bits.join('; ');
-  return dflt === null ? text : `${text} (default: ${dflt})`;
+  if (dflt === null) return text;
+  return typeof p.default === 'number' ? `${text} (default ${dflt})` : `${text} (default: ${dflt})`;
 }
 
 /** The formula-bar example of a spec: its first example, with the result the function gives. */

@@ -2,7 +2,7 @@
  * Potentia engine: the one entry point for functions/, taskpane/ and cli/.
  * Pure TypeScript; no Office, no DOM.
  */
-export { EngineError, isEngineError, type EngineErrorKind } from './errors';
+export { EngineError, isEngineError, type EngineErrorKind, type EngineHint } from './errors';
 export * from './constants';
 export { type Rational, formatRational } from './rational';
 

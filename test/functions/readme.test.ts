@@ -10,13 +10,12 @@ import './installStub';
 import * as F from '../../src/functions/functions';
 import { CATALOGUE } from '../../src/functions/catalogue';
 import { parseFormula } from './formulaText';
+import { S25 } from '../support';
 
 const ROOT = path.resolve(__dirname, '..', '..');
 const README = fs.readFileSync(path.join(ROOT, 'README.md'), 'utf8');
 const fns = F as unknown as Record<string, (...a: unknown[]) => unknown[][]>;
 
-// RT ln10 / F at 25 °C from the SI 2019 exact constants
-const S25 = (6.02214076e23 * 1.380649e-23 * 298.15 * Math.LN10) / (6.02214076e23 * 1.602176634e-19);
 
 describe('README', () => {
   test('is under 15 KB', () => {

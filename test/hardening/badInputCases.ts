@@ -403,7 +403,7 @@ const HAND_CASES: readonly BadInputCase[] = [
     input: 'unbalanced reaction',
     args: ['Cu2+ + e- -> Cu', null, null],
     expect: V(
-      /"Cu2\+ \+ e- -> Cu" does not balance \(charge: 1 on the left, 0 on the right\)\. Correct the coefficients, or use BALANCE/,
+      /"Cu2\+ \+ e- -> Cu" does not balance \(charge: 1 on the left, 0 on the right\)\. Correct the coefficients\. Or let BALANCE balance it/,
     ),
     says: 'what does not balance; correct the coefficients or use BALANCE',
   },
@@ -576,7 +576,7 @@ const HAND_CASES: readonly BadInputCase[] = [
     input: 'K beyond the number range',
     args: [10, 2, null, null],
     expect: NUM(
-      /K = 1\.1748e\+338 is outside the spreadsheet's number range.*use LOGK, which gives log10 K = 338\.07/,
+      /K = 1\.1748e\+338 is outside the spreadsheet's number range.*log10 K = 338\.07.*Use LOGK/,
     ),
     says: 'K is outside the number range: use LOGK (the message gives K and log10 K)',
   },

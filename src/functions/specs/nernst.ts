@@ -29,6 +29,20 @@ type Quantity = 'potential' | 'log10Q';
 /** The last prepared single-reaction call: repeated calls skip compiling and binding. */
 let lastPrepared: { reaction: string; species: Scalar[]; table: Arg; binding: Binding } | null = null;
 
+/**
+ * The one-entry cache above, in the shape of the engine's cache registry (name, clear, stats),
+ * so that the registry's one clear empties it too.
+ */
+export const LAST_NERNST_CALL_CACHE = {
+  name: 'functions.lastNernstCall',
+  clear(): void {
+    lastPrepared = null;
+  },
+  stats(): { name: string; entries: number; bytes: number } {
+    return { name: 'functions.lastNernstCall', entries: lastPrepared ? 1 : 0, bytes: 0 };
+  },
+};
+
 function scalarOf(a: Arg): Scalar | undefined {
   if (!Array.isArray(a)) return a;
   return a.length === 1 && Array.isArray(a[0]) && a[0].length === 1 ? (a[0][0] as Scalar) : undefined;
