@@ -368,7 +368,7 @@ export function MASSLOSS(
  * @param mass_kg Net anode mass in kg; > 0 kg
  * @param capacity_Ah_kg Electrochemical capacity in Ah/kg, or a material: "Al-Zn-In" (2000), "zinc" (780), "magnesium" (1100), "high-potential magnesium" (1230); > 0 Ah/kg
  * @param current_A Mean current output in A over the life; > 0 A
- * @param [utilisation] Utilisation factor in (0, 1], or an anode type: "long slender stand-off" (0.90), "short slender stand-off" (0.85), "long flush-mounted" (0.85), "bracelet" (0.80); > 0, ≤ 1 (default: 0.8)
+ * @param [utilisation] Utilisation factor in (0, 1], or an anode type: "long slender stand-off" (0.90), "short slender stand-off" (0.85), "long flush-mounted" (0.85), "bracelet" (0.80); > 0, ≤ 1 (default 0.8)
  * @returns Anode life in years, one row per case
  */
 export function ANODELIFE(
@@ -386,7 +386,7 @@ export function ANODELIFE(
  * @helpurl https://localhost:3000/taskpane.html#ref-deposit
  * @param reaction Half-reaction with its electrons, e.g. "Cu2+ + 2 e- -> Cu", or a couple such as "Cu2+/Cu"; the solid is what is deposited or dissolved; one cell or a column of cases
  * @param charge_C Charge passed in C (A·s; 1 A·h = 3600 C); ≥ 0 C
- * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default: 1)
+ * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default 1)
  * @returns Mass in g, one row per case
  */
 export function DEPOSIT(reaction: any[][], charge_C: any[][], efficiency?: any[][]): any[][] {
@@ -401,7 +401,7 @@ export function DEPOSIT(reaction: any[][], charge_C: any[][], efficiency?: any[]
  * @param thickness_um Thickness of the deposit in µm; > 0 µm
  * @param current_density_A_m2 Current density in A/m² (1 A/dm² = 100 A/m²); > 0 A/m²
  * @param density_g_cm3 Density of the deposit in g/cm³ (e.g. 8.96 for copper); > 0 g/cm³
- * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default: 1)
+ * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default 1)
  * @returns Time in s, one row per case
  */
 export function PLATETIME(
@@ -422,7 +422,7 @@ export function PLATETIME(
  * @param current_density_A_m2 Current density in A/m² (1 A/dm² = 100 A/m²); ≥ 0 A/m²
  * @param time_s Plating time in s; ≥ 0 s
  * @param density_g_cm3 Density of the deposit in g/cm³ (e.g. 8.96 for copper); > 0 g/cm³
- * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default: 1)
+ * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default 1)
  * @returns Thickness in µm, one row per case
  */
 export function THICKNESS(
@@ -452,7 +452,7 @@ export function CAPACITY(reaction_or_species: any[][], basis?: any[][]): any[][]
  * @customfunction SPECENERGY
  * @helpurl https://localhost:3000/taskpane.html#ref-specenergy
  * @param cell_reaction Cell (discharge) reaction, e.g. "Pb + PbO2 + 2 H2SO4 -> 2 PbSO4 + 2 H2O", or a cell diagram; one cell or a column of cases
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns Specific energy in Wh per kg of reactants, one row per case
  */
 export function SPECENERGY(cell_reaction: any[][], temp_C?: any[][]): any[][] {
@@ -467,7 +467,7 @@ export function SPECENERGY(cell_reaction: any[][], temp_C?: any[][]): any[][] {
  * @param i0 Exchange current density (A/m², mA/cm² …; the result is in the same unit); > 0 any (the result has the same unit)
  * @param alpha_a Anodic transfer coefficient αa in (0, 1]; > 0, ≤ 1
  * @param [alpha_c] Cathodic transfer coefficient αc in (0, 1]; > 0, ≤ 1 (default: 1 − alpha_a)
- * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default: 25)
+ * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default 25)
  * @param [i_lim] Limiting current density (same unit as i0): one value for both directions, or two (anodic, cathodic magnitude) (default: no mass-transfer limit)
  * @returns Current density (unit of i0), one row per case
  */
@@ -490,7 +490,7 @@ export function BVCURRENT(
  * @param i0 Exchange current density (A/m², mA/cm² …; the result is in the same unit); > 0 any (the result has the same unit)
  * @param alpha_a Anodic transfer coefficient αa in (0, 1]; > 0, ≤ 1
  * @param [alpha_c] Cathodic transfer coefficient αc in (0, 1]; > 0, ≤ 1 (default: 1 − alpha_a)
- * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default: 25)
+ * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default 25)
  * @param [i_lim] Limiting current density (same unit as i0): one value for both directions, or two (anodic, cathodic magnitude) (default: no mass-transfer limit)
  * @returns Overpotential in V, one row per case
  */
@@ -510,8 +510,8 @@ export function OVERPOTENTIAL(
  * @customfunction TAFELSLOPE
  * @helpurl https://localhost:3000/taskpane.html#ref-tafelslope
  * @param alpha Transfer coefficient α in (0, 1]; > 0, ≤ 1
- * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default: 25)
- * @param [n] Electrons in the rate-determining step; > 0 (default: 1)
+ * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default 25)
+ * @param [n] Electrons in the rate-determining step; > 0 (default 1)
  * @returns Tafel slope in V/decade, one row per case
  */
 export function TAFELSLOPE(alpha: any[][], temp_C?: any[][], n?: any[][]): any[][] {
@@ -550,7 +550,7 @@ export function MIXEDPOTENTIAL(
  * @param unknown The species to solve for ("Cu2+", "left:Ag+") or "pH"
  * @param [species] Names of the species whose values follow, one per column of values, e.g. "Cu2+", "O2", "pH" or "left:Ag+" (default: standard state)
  * @param [values] Activities: mol/L for solutes, bar for gases, the pH under a "pH" column; one row per case (default: none)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns Activity (mol/L; bar for a gas) or pH, one row per case
  */
@@ -573,7 +573,7 @@ export function SOLVEFOR(
  * @param species Ions ("H+", "Cl-") or strong electrolytes by formula ("HCl", "KCl"), one per column
  * @param left_values Concentrations in mol/L in the left solution, one per species; one row per case
  * @param right_values Concentrations in mol/L in the right solution; one row per case
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns E_j in V, one row per case
  */
 export function JUNCTION(

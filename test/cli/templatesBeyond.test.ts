@@ -10,7 +10,7 @@ import ExcelJS from 'exceljs';
 import { recalcWorkbook } from '../../src/cli/recalcCommand';
 import { CP_TEMPLATE, SWEEP_TEMPLATE, TEMPLATE_DIR } from '../../src/cli/templateLayout';
 import { ANODE_SHEET, FARADAY_SHEET } from '../../scripts/make-templates';
-import { F } from './helpers';
+import { F } from '../support';
 
 async function recalculated(file: string): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();

@@ -4,9 +4,7 @@
  * derived by hand from the SI exact constants and the sources named beside each check.
  */
 import { callFunction, isCellError, type Result } from '../../src/functions/catalogue';
-
-const F = 6.02214076e23 * 1.602176634e-19;
-const R = 6.02214076e23 * 1.380649e-23;
+import { F, R } from '../support';
 
 function numbers(r: Result): number[][] {
   return r.map((row) =>

@@ -5,7 +5,7 @@
  * practice) and utilisation factors (Table 10-8), all from memory.
  */
 import { anodeLifeYears, anodeCapacityAhKg, anodeUtilisation } from '../../../src/engine';
-import { engineErrorOf } from '../support';
+import { engineErrorOf } from '../../support';
 
 describe('ANODELIFE', () => {
   test.each([

@@ -8,7 +8,7 @@ import {
   equivalentWeightOfComposition,
   corrodingMetal,
 } from '../../../src/engine';
-import { engineErrorOf } from '../support';
+import { engineErrorOf } from '../../support';
 
 const K1 = 3.27e-3; // ASTM G102, mm·g/(µA·cm·y) (from memory)
 const K2 = 8.954e-3; // ASTM G102, g·cm²/(µA·m²·d) (from memory)

@@ -5,7 +5,7 @@
  * ones printed in battery texts (e.g. Linden's Handbook of Batteries; from memory).
  */
 import { specificCapacityMAhG } from '../../../src/engine';
-import { F, engineErrorOf } from '../support';
+import { F, engineErrorOf } from '../../support';
 
 const M = {
   Li: 6.94,

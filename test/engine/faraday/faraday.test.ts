@@ -4,7 +4,7 @@
  * typed here independently of the engine's table.
  */
 import { depositMassG, plateTimeS, thicknessUm, faradayPlan, molarMassOfFormula } from '../../../src/engine';
-import { F, engineErrorOf } from '../support';
+import { F, engineErrorOf } from '../../support';
 
 // CIAAW 2021 abridged standard atomic weights (from memory)
 const M = {

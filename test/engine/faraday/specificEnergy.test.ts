@@ -4,7 +4,7 @@
  * atomic weights (from memory); the expectations are derived by hand.
  */
 import { specificEnergyWhKg, asIons, parseReaction, formatReaction } from '../../../src/engine';
-import { F, engineErrorOf } from '../support';
+import { F, engineErrorOf } from '../../support';
 
 const M = { Pb: 207.2, O: 15.999, H: 1.008, S: 32.06, Zn: 65.38, Cu: 63.546 };
 

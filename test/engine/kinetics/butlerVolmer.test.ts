@@ -4,7 +4,7 @@
  * expectations derived by hand from the SI exact F and R.
  */
 import { butlerVolmerCurrent, overpotentialV, tafelSlopeV, kineticParams } from '../../../src/engine';
-import { F, R, S25, engineErrorOf } from '../support';
+import { F, R, S25, engineErrorOf } from '../../support';
 
 const f25 = F / (R * 298.15);
 

@@ -7,7 +7,7 @@
  *   i_corr = 1.29155e-4 (the same from the cathodic line: −7 + 0.373333/0.12).
  */
 import { mixedPotential } from '../../../src/engine';
-import { engineErrorOf } from '../support';
+import { engineErrorOf } from '../../support';
 
 describe('MIXEDPOTENTIAL', () => {
   test('the case solved by hand', () => {

@@ -1,6 +1,6 @@
 /** Unit-slip guards: millivolts typed as volts, kelvin typed as °C, percentages as fractions. */
 import { potentialInVolts, celsiusInRange, fractionInUnitInterval } from '../../../src/engine';
-import { engineErrorOf } from '../support';
+import { engineErrorOf } from '../../support';
 
 describe('unit-slip guards', () => {
   test.each([

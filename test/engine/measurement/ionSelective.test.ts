@@ -3,7 +3,7 @@
  * recommendations on potentiometric selectivity, from memory); derived by hand.
  */
 import { iseResponseV } from '../../../src/engine';
-import { S25, engineErrorOf } from '../support';
+import { S25, engineErrorOf } from '../../support';
 
 describe('ISERESPONSE', () => {
   test('ideal K+ electrode without interferents: E0 + S·log a', () => {

@@ -4,7 +4,7 @@
  * H+ 349.65, K+ 73.48, Na+ 50.08, Li+ 38.66, Cl- 76.31, NO3- 71.42 S·cm²/mol.
  */
 import { junctionPotentialV } from '../../../src/engine';
-import { F, R, engineErrorOf } from '../support';
+import { F, R, engineErrorOf } from '../../support';
 
 const RT_F = (R * 298.15) / F;
 

@@ -3,7 +3,7 @@
  * exact slope and the OpenStax Chemistry 2e Appendix L E° values (seen).
  */
 import { solveForUnknown, standardPotentialV, resolveReaction, defaultTable } from '../../../src/engine';
-import { S25, s, engineErrorOf } from '../support';
+import { S25, s, engineErrorOf } from '../../support';
 
 // the engine's E° of the couple, read once (the quantity under test is the inversion)
 const e0 = (text: string) => standardPotentialV(resolveReaction(text, defaultTable()), 25);
