@@ -464,7 +464,7 @@ export function SPECENERGY(cell_reaction: any[][], temp_C?: any[][]): any[][] {
  * @customfunction BVCURRENT
  * @helpurl https://localhost:3000/taskpane.html#ref-bvcurrent
  * @param eta_V Overpotential η = E − E_eq in V
- * @param i0 Exchange current density (A/m², mA/cm² …; the result is in the same unit); > 0 any (the result has the same unit)
+ * @param i0 Exchange current density (A/m², mA/cm² …; the result is in the same unit); > 0
  * @param alpha_a Anodic transfer coefficient αa in (0, 1]; > 0, ≤ 1
  * @param [alpha_c] Cathodic transfer coefficient αc in (0, 1]; > 0, ≤ 1 (default: 1 − alpha_a)
  * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default 25)
@@ -486,8 +486,8 @@ export function BVCURRENT(
  * Overpotential in V that gives a current density, the inverse of BVCURRENT (exact for αa = αc, else a safeguarded Newton iteration). Example: =ECHEM.OVERPOTENTIAL(0.001, 0.001, 0.5) gives 0.0247271.
  * @customfunction OVERPOTENTIAL
  * @helpurl https://localhost:3000/taskpane.html#ref-overpotential
- * @param i Current density (anodic positive, same unit as i0); in unit of i0
- * @param i0 Exchange current density (A/m², mA/cm² …; the result is in the same unit); > 0 any (the result has the same unit)
+ * @param i Current density (anodic positive, same unit as i0)
+ * @param i0 Exchange current density (A/m², mA/cm² …; the result is in the same unit); > 0
  * @param alpha_a Anodic transfer coefficient αa in (0, 1]; > 0, ≤ 1
  * @param [alpha_c] Cathodic transfer coefficient αc in (0, 1]; > 0, ≤ 1 (default: 1 − alpha_a)
  * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default 25)
@@ -523,10 +523,10 @@ export function TAFELSLOPE(alpha: any[][], temp_C?: any[][], n?: any[][]): any[]
  * @customfunction MIXEDPOTENTIAL
  * @helpurl https://localhost:3000/taskpane.html#ref-mixedpotential
  * @param E_a Equilibrium potential of the anodic reaction (e.g. metal dissolution) in V
- * @param i0_a Exchange current density of the anodic reaction; > 0 any (i_corr has the same unit)
+ * @param i0_a Exchange current density of the anodic reaction; > 0
  * @param b_a Anodic Tafel slope in V/decade (positive, e.g. 0.06); > 0 V/decade
  * @param E_c Equilibrium potential of the cathodic reaction (e.g. hydrogen evolution, oxygen reduction) in V
- * @param i0_c Exchange current density of the cathodic reaction (same unit as i0_a); > 0 any (i_corr has the same unit)
+ * @param i0_c Exchange current density of the cathodic reaction (same unit as i0_a); > 0
  * @param b_c Cathodic Tafel slope in V/decade (positive, e.g. 0.12); > 0 V/decade
  * @returns Two cells per case: E_corr in V (the scale of E_a and E_c) and i_corr (the unit of i0)
  */

@@ -31,7 +31,7 @@ const KIN_PARAMS: readonly ParamSpec[] = [
   {
     name: 'i0',
     kind: 'currentDensity',
-    unit: 'any (the result has the same unit)',
+    unit: '',
     domain: { min: 0, minExclusive: true },
     description: 'Exchange current density (A/m², mA/cm² …; the result is in the same unit)',
   },
@@ -116,7 +116,7 @@ const OVERPOTENTIAL: FunctionSpec = {
     {
       name: 'i',
       kind: 'currentDensity',
-      unit: 'unit of i0',
+      unit: '',
       description: 'Current density (anodic positive, same unit as i0)',
     },
     ...KIN_PARAMS,
@@ -167,7 +167,7 @@ const POT = (name: string, description: string): ParamSpec => ({ name, kind: 'po
 const I0 = (name: string, description: string): ParamSpec => ({
   name,
   kind: 'currentDensity',
-  unit: 'any (i_corr has the same unit)',
+  unit: '',
   domain: { min: 0, minExclusive: true },
   description,
 });
