@@ -146,6 +146,8 @@ module.exports = async (env = {}, argv = {}) => {
               onlyCompileBundledFiles: true,
               // ES modules let webpack drop unused engine code; the type check is `npm run typecheck`.
               compilerOptions: { module: 'es2020', moduleResolution: 'bundler', sourceMap: !production },
+              // the specs' documentation text stays out of the bundle (scripts/build/stripSpecDocs.js)
+              getCustomTransformers: () => ({ before: [require('./scripts/build/stripSpecDocs').stripSpecDocs] }),
             },
           },
         },

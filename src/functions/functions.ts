@@ -30,13 +30,7 @@ function implementation(id: string): (...args: Arg[]) => Result {
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns E in V vs SHE, one row per case
  */
-export function POTENTIAL(
-  reaction: any[][],
-  species?: any[][],
-  values?: any[][],
-  temp_C?: any[][],
-  table?: any[][],
-): any[][] {
+export function POTENTIAL(reaction: any[][], species?: any[][], values?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
   return toExcel(implementation('POTENTIAL'), reaction, species, values, temp_C, table);
 }
 
@@ -91,12 +85,7 @@ export function LOGQ(reaction: any[][], species: any[][], values: any[][], table
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns Cell notation text, one row per case
  */
-export function CELLNOTATION(
-  reaction: any[][],
-  species?: any[][],
-  values?: any[][],
-  table?: any[][],
-): any[][] {
+export function CELLNOTATION(reaction: any[][], species?: any[][], values?: any[][], table?: any[][]): any[][] {
   return toExcel(implementation('CELLNOTATION'), reaction, species, values, table);
 }
 
@@ -203,14 +192,7 @@ export function COMBINE(potentials: any[][], n: any[][]): any[][] {
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns EMF in V, one row per case
  */
-export function CONCCELL(
-  reaction: any[][],
-  value_left: any[][],
-  value_right: any[][],
-  species?: any[][],
-  temp_C?: any[][],
-  table?: any[][],
-): any[][] {
+export function CONCCELL(reaction: any[][], value_left: any[][], value_right: any[][], species?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
   return toExcel(implementation('CONCCELL'), reaction, value_left, value_right, species, temp_C, table);
 }
 
@@ -225,13 +207,7 @@ export function CONCCELL(
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns γ (dimensionless), one row per case
  */
-export function ACTCOEF(
-  species: any[][],
-  ionic_strength: any[][],
-  model?: any[][],
-  ion_size?: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function ACTCOEF(species: any[][], ionic_strength: any[][], model?: any[][], ion_size?: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('ACTCOEF'), species, ionic_strength, model, ion_size, temp_C);
 }
 
@@ -246,13 +222,7 @@ export function ACTCOEF(
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns Activities, one row per case and one column per species
  */
-export function ACTIVITY(
-  species: any[][],
-  values: any[][],
-  ionic_strength?: any[][],
-  model?: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function ACTIVITY(species: any[][], values: any[][], ionic_strength?: any[][], model?: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('ACTIVITY'), species, values, ionic_strength, model, temp_C);
 }
 
@@ -279,13 +249,7 @@ export function IONICSTR(species: any[][], values: any[][]): any[][] {
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns The potential in V vs to_ref, one row per case
  */
-export function VSREF(
-  potential: any[][],
-  from_ref: any[][],
-  to_ref: any[][],
-  pH?: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function VSREF(potential: any[][], from_ref: any[][], to_ref: any[][], pH?: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('VSREF'), potential, from_ref, to_ref, pH, temp_C);
 }
 

@@ -143,12 +143,13 @@ class Case implements CaseArgs {
   }
 
   num(name: string): number {
-    const x = this.optNum(name);
-    if (x === null) {
-      const p = this.call.param(name);
-      throw new EngineError('argument', `${name} is missing: give ${nounOf(p)}.`, name);
-    }
-    return x;
+    return this.given(name, this.optNum(name));
+  }
+
+  /** A value that must be there: "X is missing: give …" where it is not. */
+  private given<T>(name: string, v: T | null): T {
+    if (v !== null) return v;
+    throw new EngineError('argument', `${name} is missing: give ${nounOf(this.call.param(name))}.`, name);
   }
 
   optText(name: string): string | null {
@@ -156,12 +157,7 @@ class Case implements CaseArgs {
   }
 
   text(name: string): string {
-    const t = this.optText(name);
-    if (t === null) {
-      const p = this.call.param(name);
-      throw new EngineError('argument', `${name} is missing: give ${nounOf(p)}.`, name);
-    }
-    return t;
+    return this.given(name, this.optText(name));
   }
 
   choice<T>(name: string): T {

@@ -168,13 +168,14 @@ export interface CallArgs {
 
 /** One worksheet function: its declaration and its computation. */
 export interface FunctionSpec {
-  /** Id in the ECHEM namespace, fixed once released, e.g. "POTENTIAL". */
+  /**
+   * `id`: the id in the ECHEM namespace, fixed once released, e.g. "POTENTIAL"; `family`: the
+   * docs group (and spec file), e.g. "Nernst"; `summary`: one sentence for the formula bar, what
+   * the function returns; `returns`: what the result holds, with its unit, e.g. "E in V vs SHE".
+   */
   readonly id: string;
-  /** The family (docs group, spec file), e.g. "Nernst". */
   readonly family: string;
-  /** One sentence for the formula bar: what the function returns. */
   readonly summary: string;
-  /** What the result holds, with its unit, e.g. "E in V vs SHE". */
   readonly returns: string;
   readonly params: readonly ParamSpec[];
   readonly result: ResultShape;

@@ -26,6 +26,9 @@ import { PHYSICAL_TEMP_DOMAIN, readPotentialV } from '../spec/kinds';
 import { N_FROM_REACTION, REACTION, REACTION_OR_E, TABLE, TEMP_C } from '../spec/params';
 import type { CallArgs, CaseArgs, FunctionSpec } from '../spec/types';
 
+/** What every Equilibrium function shares: its family, and one result row per case (unless it says otherwise). */
+const EQUILIBRIUM = { family: 'Equilibrium', result: { kind: 'perCase' } } as const;
+
 const SLOPE = 'derived by hand: RT ln10/(nF) with the SI 2019 exact R and F';
 const CU_ZN = 'E°(Cu2+/Cu) = 0.337 V and E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
 
@@ -68,12 +71,11 @@ const LOGK_PARAMS = [REACTION_OR_E, N_FROM_REACTION, TEMP_C, TABLE];
 
 const LOGK: FunctionSpec = {
   id: 'LOGK',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'log10 of the equilibrium constant, nFE°/(RT ln 10), from a reaction (E° and n from the table) or from E° in V and n.',
   returns: 'log10 K, one row per case',
   params: LOGK_PARAMS,
-  result: { kind: 'perCase' },
   examples: [
     { args: [1.1, 2], expected: 37.187697, tolerance: 1e-5, source: 'derived by hand: nFE°/(RT ln10) with the SI 2019 exact R and F' },
   ],
@@ -82,12 +84,11 @@ const LOGK: FunctionSpec = {
 
 const EQCONST: FunctionSpec = {
   id: 'EQCONST',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'Equilibrium constant K = 10^(nFE°/(RT ln 10)) from a reaction or from E° in V and n; #NUM! where K leaves the number range (use LOGK).',
   returns: 'K (dimensionless), one row per case',
   params: LOGK_PARAMS,
-  result: { kind: 'perCase' },
   examples: [
     {
       args: ['Zn + Cu2+ -> Zn2+ + Cu'],
@@ -101,11 +102,10 @@ const EQCONST: FunctionSpec = {
 
 const GIBBS: FunctionSpec = {
   id: 'GIBBS',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary: 'Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n, or the standard ΔG° of a reaction.',
   returns: 'ΔG in kJ/mol, one row per case',
   params: LOGK_PARAMS,
-  result: { kind: 'perCase' },
   examples: [
     { args: [0.434, 2], expected: -83.749268, tolerance: 1e-5, source: 'derived by hand: −nFE with the SI 2019 exact F' },
   ],
@@ -118,11 +118,10 @@ const GIBBS: FunctionSpec = {
 
 const ELECTRONS: FunctionSpec = {
   id: 'ELECTRONS',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary: 'Number of electrons n transferred in the balanced half-reaction, cell or reaction.',
   returns: 'n, one row per case',
   params: [REACTION, TABLE],
-  result: { kind: 'perCase' },
   examples: [
     { args: ['Zn + Cu2+ -> Zn2+ + Cu'], expected: 2, tolerance: 0, source: 'derived by hand: Zn → Zn2+ gives 2 electrons' },
     { args: ['MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O'], expected: 5, tolerance: 0, source: 'derived by hand: Mn +7 → +2' },
@@ -148,7 +147,7 @@ const ELECTRONS: FunctionSpec = {
 
 const BALANCE: FunctionSpec = {
   id: 'BALANCE',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'Balanced reaction text from a skeleton redox equation, half-reaction, couple or cell; medium "acid" balances with H+ and H2O, "base" with OH- and H2O.',
   returns: 'Balanced reaction text, one row per case',
@@ -166,7 +165,6 @@ const BALANCE: FunctionSpec = {
     },
     TABLE,
   ],
-  result: { kind: 'perCase' },
   examples: [
     {
       args: ['MnO4- + Fe2+ -> Mn2+ + Fe3+', 'acid'],
@@ -187,7 +185,7 @@ const BALANCE: FunctionSpec = {
 
 const NERNSTSLOPE: FunctionSpec = {
   id: 'NERNSTSLOPE',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'Nernst slope RT ln10/(nF) in V per decade of activity from the exact SI constants; a negative n gives the negative slope of an anion-responsive electrode.',
   returns: 'Slope in V per decade, one row per case',
@@ -202,7 +200,6 @@ const NERNSTSLOPE: FunctionSpec = {
       description: 'Electrons (charge of the sensed ion); signed: −1 for an anion-responsive electrode',
     },
   ],
-  result: { kind: 'perCase' },
   examples: [
     { args: [25], expected: 0.0591593, tolerance: 1e-7, source: SLOPE },
     { args: [25, -1], expected: -0.0591593, tolerance: 1e-7, source: SLOPE },
@@ -238,7 +235,7 @@ const COMBINE: FunctionSpec = {
 
 const CONCCELL: FunctionSpec = {
   id: 'CONCCELL',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     "EMF in V of a concentration cell: two like electrodes whose solutions differ in one species' activity (right minus left, as IUPAC writes cells).",
   returns: 'EMF in V, one row per case',
@@ -256,7 +253,6 @@ const CONCCELL: FunctionSpec = {
     TEMP_C,
     TABLE,
   ],
-  result: { kind: 'perCase' },
   examples: [
     { args: ['Cu2+/Cu', 0.001, 0.1], expected: 0.0591593, tolerance: 1e-7, source: `${SLOPE}: (RT ln10/2F)·log10(0.1/0.001)` },
   ],

@@ -20,6 +20,9 @@ import { readTempC } from '../spec/kinds';
 import { ACTIVITIES, OPTIONAL_SPECIES_HEADER, REACTION, SPECIES_HEADER, TABLE, TEMP_C } from '../spec/params';
 import type { CallArgs, FunctionSpec } from '../spec/types';
 
+/** What every Nernst function shares: its family, and one result row per case (unless it says otherwise). */
+const NERNST = { family: 'Nernst', result: { kind: 'perCase' } } as const;
+
 const DERIVED = 'derived by hand: E = E° − (RT ln10/nF)·log10 Q with the SI 2019 exact R and F';
 const CU_E0 = 'E°(Cu2+/Cu) = 0.337 V, OpenStax Chemistry 2e, Appendix L';
 const ZN_E0 = 'E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
@@ -130,12 +133,11 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
 
 const POTENTIAL: FunctionSpec = {
   id: 'POTENTIAL',
-  family: 'Nernst',
+  ...NERNST,
   summary:
     'Electrode potential of a half-reaction, or EMF of a cell or reaction, in V vs SHE, by the Nernst equation at the activities and temperature given.',
   returns: 'E in V vs SHE, one row per case',
   params: [REACTION, OPTIONAL_SPECIES_HEADER, { ...ACTIVITIES, optional: true }, TEMP_C, TABLE],
-  result: { kind: 'perCase' },
   notes: [
     'E = E° − (RT ln10 / nF)·log10 Q. Pure solids and liquids and water are left out of Q; activities written inline in a cell diagram are used.',
     'A cell EMF is E(right) − E(left) for the cell as written; a negative value means the written reaction is not spontaneous.',
@@ -165,12 +167,11 @@ function argsOf(call: CallArgs, n: number): Arg[] {
 
 const STDPOTENTIAL: FunctionSpec = {
   id: 'STDPOTENTIAL',
-  family: 'Nernst',
+  ...NERNST,
   summary:
     "Standard potential E° in V vs SHE of a half-reaction, couple or cell at temp_C (with the table's dE°/dT; where it has none, E° at 25 °C).",
   returns: 'E° in V vs SHE, one row per case',
   params: [REACTION, TEMP_C, TABLE],
-  result: { kind: 'perCase' },
   examples: [
     { args: ['Cu2+/Cu'], expected: 0.337, tolerance: 1e-12, source: CU_E0 },
     { args: ['Zn(s) | Zn2+(aq) || Cu2+(aq) | Cu(s)'], expected: 1.0988, tolerance: 1e-12, source: `${CU_E0}; ${ZN_E0}` },
@@ -178,17 +179,20 @@ const STDPOTENTIAL: FunctionSpec = {
   perCase: (a, call) => standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.num('temp_C')),
 };
 
+/** The parameters of QUOTIENT and LOGQ, and the zinc–copper case their examples share. */
+const QUOTIENT_PARAMS = [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE];
+const ZN_CU_CASE: Arg[] = ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]];
+
 const QUOTIENT: FunctionSpec = {
   id: 'QUOTIENT',
-  family: 'Nernst',
+  ...NERNST,
   summary:
     "Reaction quotient Q from the activities given (pure solids, liquids and water left out); #NUM! where Q leaves the number range (use LOGQ).",
   returns: 'Q (dimensionless), one row per case',
-  params: [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE],
-  result: { kind: 'perCase' },
+  params: QUOTIENT_PARAMS,
   examples: [
     {
-      args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
+      args: ZN_CU_CASE,
       expected: 10,
       tolerance: 1e-12,
       source: 'derived by hand: Q = a(Zn2+)/a(Cu2+) = 0.1/0.01',
@@ -211,14 +215,13 @@ const QUOTIENT: FunctionSpec = {
 
 const LOGQ: FunctionSpec = {
   id: 'LOGQ',
-  family: 'Nernst',
+  ...NERNST,
   summary: 'log10 of the reaction quotient Q, computed in log space so that it never overflows.',
   returns: 'log10 Q, one row per case',
-  params: [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE],
-  result: { kind: 'perCase' },
+  params: QUOTIENT_PARAMS,
   examples: [
     {
-      args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
+      args: ZN_CU_CASE,
       expected: 1,
       tolerance: 1e-12,
       source: 'derived by hand: log10(0.1/0.01)',
@@ -229,11 +232,10 @@ const LOGQ: FunctionSpec = {
 
 const CELLNOTATION: FunctionSpec = {
   id: 'CELLNOTATION',
-  family: 'Nernst',
+  ...NERNST,
   summary: 'The IUPAC cell notation of a reaction or cell, with the activities given written inline.',
   returns: 'Cell notation text, one row per case',
   params: [REACTION, OPTIONAL_SPECIES_HEADER, { ...ACTIVITIES, optional: true }, TABLE],
-  result: { kind: 'perCase' },
   examples: [
     {
       args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
