@@ -297,12 +297,7 @@ export function CHECKTABLE(table: any[][]): any[][] {
  * @param [equivalent_weight] Equivalent weight in g per equivalent, to override the computed value; > 0 g (default: by ASTM G102 from the composition)
  * @returns Corrosion rate in mm/y, one row per case
  */
-export function CORRATE(
-  metal_or_alloy: any[][],
-  current_density_uA_cm2: any[][],
-  density_g_cm3?: any[][],
-  equivalent_weight?: any[][],
-): any[][] {
+export function CORRATE(metal_or_alloy: any[][], current_density_uA_cm2: any[][], density_g_cm3?: any[][], equivalent_weight?: any[][]): any[][] {
   return toExcel(implementation('CORRATE'), metal_or_alloy, current_density_uA_cm2, density_g_cm3, equivalent_weight);
 }
 
@@ -316,12 +311,7 @@ export function CORRATE(
  * @param [equivalent_weight] Equivalent weight in g per equivalent, to override the computed value; > 0 g (default: by ASTM G102 from the composition)
  * @returns Mass-loss rate in g/(m²·d), one row per case
  */
-export function MASSLOSS(
-  metal_or_alloy: any[][],
-  current_density_uA_cm2: any[][],
-  density_g_cm3?: any[][],
-  equivalent_weight?: any[][],
-): any[][] {
+export function MASSLOSS(metal_or_alloy: any[][], current_density_uA_cm2: any[][], density_g_cm3?: any[][], equivalent_weight?: any[][]): any[][] {
   return toExcel(implementation('MASSLOSS'), metal_or_alloy, current_density_uA_cm2, density_g_cm3, equivalent_weight);
 }
 
@@ -335,12 +325,7 @@ export function MASSLOSS(
  * @param [utilisation] Utilisation factor in (0, 1], or an anode type: "long slender stand-off" (0.90), "short slender stand-off" (0.85), "long flush-mounted" (0.85), "bracelet" (0.80); > 0, ≤ 1 (default 0.8)
  * @returns Anode life in years, one row per case
  */
-export function ANODELIFE(
-  mass_kg: any[][],
-  capacity_Ah_kg: any[][],
-  current_A: any[][],
-  utilisation?: any[][],
-): any[][] {
+export function ANODELIFE(mass_kg: any[][], capacity_Ah_kg: any[][], current_A: any[][], utilisation?: any[][]): any[][] {
   return toExcel(implementation('ANODELIFE'), mass_kg, capacity_Ah_kg, current_A, utilisation);
 }
 
@@ -368,13 +353,7 @@ export function DEPOSIT(reaction: any[][], charge_C: any[][], efficiency?: any[]
  * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default 1)
  * @returns Time in s, one row per case
  */
-export function PLATETIME(
-  reaction: any[][],
-  thickness_um: any[][],
-  current_density_A_m2: any[][],
-  density_g_cm3: any[][],
-  efficiency?: any[][],
-): any[][] {
+export function PLATETIME(reaction: any[][], thickness_um: any[][], current_density_A_m2: any[][], density_g_cm3: any[][], efficiency?: any[][]): any[][] {
   return toExcel(implementation('PLATETIME'), reaction, thickness_um, current_density_A_m2, density_g_cm3, efficiency);
 }
 
@@ -389,13 +368,7 @@ export function PLATETIME(
  * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default 1)
  * @returns Thickness in µm, one row per case
  */
-export function THICKNESS(
-  reaction: any[][],
-  current_density_A_m2: any[][],
-  time_s: any[][],
-  density_g_cm3: any[][],
-  efficiency?: any[][],
-): any[][] {
+export function THICKNESS(reaction: any[][], current_density_A_m2: any[][], time_s: any[][], density_g_cm3: any[][], efficiency?: any[][]): any[][] {
   return toExcel(implementation('THICKNESS'), reaction, current_density_A_m2, time_s, density_g_cm3, efficiency);
 }
 
@@ -435,14 +408,7 @@ export function SPECENERGY(cell_reaction: any[][], temp_C?: any[][]): any[][] {
  * @param [i_lim] Limiting current density (same unit as i0): one value for both directions, or two (anodic, cathodic magnitude) (default: no mass-transfer limit)
  * @returns Current density (unit of i0), one row per case
  */
-export function BVCURRENT(
-  eta_V: any[][],
-  i0: any[][],
-  alpha_a: any[][],
-  alpha_c?: any[][],
-  temp_C?: any[][],
-  i_lim?: any[][],
-): any[][] {
+export function BVCURRENT(eta_V: any[][], i0: any[][], alpha_a: any[][], alpha_c?: any[][], temp_C?: any[][], i_lim?: any[][]): any[][] {
   return toExcel(implementation('BVCURRENT'), eta_V, i0, alpha_a, alpha_c, temp_C, i_lim);
 }
 
@@ -458,14 +424,7 @@ export function BVCURRENT(
  * @param [i_lim] Limiting current density (same unit as i0): one value for both directions, or two (anodic, cathodic magnitude) (default: no mass-transfer limit)
  * @returns Overpotential in V, one row per case
  */
-export function OVERPOTENTIAL(
-  i: any[][],
-  i0: any[][],
-  alpha_a: any[][],
-  alpha_c?: any[][],
-  temp_C?: any[][],
-  i_lim?: any[][],
-): any[][] {
+export function OVERPOTENTIAL(i: any[][], i0: any[][], alpha_a: any[][], alpha_c?: any[][], temp_C?: any[][], i_lim?: any[][]): any[][] {
   return toExcel(implementation('OVERPOTENTIAL'), i, i0, alpha_a, alpha_c, temp_C, i_lim);
 }
 
@@ -487,21 +446,14 @@ export function TAFELSLOPE(alpha: any[][], temp_C?: any[][], n?: any[][]): any[]
  * @customfunction MIXEDPOTENTIAL
  * @helpurl https://localhost:3000/taskpane.html#ref-mixedpotential
  * @param E_a Equilibrium potential of the anodic reaction (e.g. metal dissolution) in V
- * @param i0_a Exchange current density of the anodic reaction; > 0
+ * @param i0_a Exchange current density of the anodic reaction (any unit; i_corr has the same); > 0
  * @param b_a Anodic Tafel slope in V/decade (positive, e.g. 0.06); > 0 V/decade
  * @param E_c Equilibrium potential of the cathodic reaction (e.g. hydrogen evolution, oxygen reduction) in V
  * @param i0_c Exchange current density of the cathodic reaction (same unit as i0_a); > 0
  * @param b_c Cathodic Tafel slope in V/decade (positive, e.g. 0.12); > 0 V/decade
  * @returns Two cells per case: E_corr in V (the scale of E_a and E_c) and i_corr (the unit of i0)
  */
-export function MIXEDPOTENTIAL(
-  E_a: any[][],
-  i0_a: any[][],
-  b_a: any[][],
-  E_c: any[][],
-  i0_c: any[][],
-  b_c: any[][],
-): any[][] {
+export function MIXEDPOTENTIAL(E_a: any[][], i0_a: any[][], b_a: any[][], E_c: any[][], i0_c: any[][], b_c: any[][]): any[][] {
   return toExcel(implementation('MIXEDPOTENTIAL'), E_a, i0_a, b_a, E_c, i0_c, b_c);
 }
 
@@ -518,15 +470,7 @@ export function MIXEDPOTENTIAL(
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns Activity (mol/L; bar for a gas) or pH, one row per case
  */
-export function SOLVEFOR(
-  reaction: any[][],
-  E_V: any[][],
-  unknown: any[][],
-  species?: any[][],
-  values?: any[][],
-  temp_C?: any[][],
-  table?: any[][],
-): any[][] {
+export function SOLVEFOR(reaction: any[][], E_V: any[][], unknown: any[][], species?: any[][], values?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
   return toExcel(implementation('SOLVEFOR'), reaction, E_V, unknown, species, values, temp_C, table);
 }
 
@@ -540,12 +484,7 @@ export function SOLVEFOR(
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns E_j in V, one row per case
  */
-export function JUNCTION(
-  species: any[][],
-  left_values: any[][],
-  right_values: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function JUNCTION(species: any[][], left_values: any[][], right_values: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('JUNCTION'), species, left_values, right_values, temp_C);
 }
 
@@ -560,13 +499,7 @@ export function JUNCTION(
  * @param [selectivities] Selectivity coefficients K_ij, one per interfering ion (default: none (no interfering ions))
  * @returns E in V, one row per case
  */
-export function ISERESPONSE(
-  E0_V: any[][],
-  slope_V: any[][],
-  primary: any[][],
-  activities: any[][],
-  selectivities?: any[][],
-): any[][] {
+export function ISERESPONSE(E0_V: any[][], slope_V: any[][], primary: any[][], activities: any[][], selectivities?: any[][]): any[][] {
   return toExcel(implementation('ISERESPONSE'), E0_V, slope_V, primary, activities, selectivities);
 }
 

@@ -243,7 +243,7 @@ export const BEYOND_EQUILIBRIUM_CASES: readonly BadInputCase[] = [
     'i0_c',
     'tiny (5e-324)',
     [-0.5, 1, 0.06, 0, 5e-324, 0.12],
-    V(/outside E_a … E_c.*BVCURRENT/),
+    V(/outside E_a … E_c.*full Butler–Volmer currents/),
     'the Tafel lines cross outside E_a … E_c: use the Butler–Volmer form',
   ),
   ...reactionClasses('SOLVEFOR', [0.3, 'Cu2+']),

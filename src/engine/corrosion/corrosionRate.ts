@@ -87,7 +87,7 @@ export function equivalentWeightOfComposition(pct: Readonly<Record<string, numbe
   return 1 / sum;
 }
 
-/** A metal or alloy as CORRATE resolves it. */
+/** A metal or alloy as resolved for a corrosion rate. */
 export interface CorrodingMetal {
   readonly name: string;
   readonly equivalentWeight: number;
@@ -224,7 +224,7 @@ export function corrosionRateMmY(
 
 /**
  * Mass loss rate in g/(m²·d): MR = K2·i_corr·EW (ASTM G102). The density is not
- * used (it may be given for symmetry with CORRATE).
+ * used (it may be given for symmetry with the corrosion rate).
  *
  * @example
  * massLossRateGm2d('Fe', 1) // 0.25000 g/(m²·d)

@@ -106,7 +106,7 @@ export const ALLOYS: readonly AlloyRecord[] = Object.freeze<AlloyRecord[]>([
   },
 ]);
 
-/** Pure metals by name, for CORRATE("iron", …) as well as CORRATE("Fe", …). */
+/** Pure metals by name ("iron" as well as "Fe"). */
 export const METAL_NAMES: Readonly<Record<string, string>> = Object.freeze({
   iron: 'Fe',
   copper: 'Cu',

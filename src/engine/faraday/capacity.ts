@@ -59,7 +59,7 @@ export function specificCapacityMAhG(text: string, basis?: string | number | nul
   if (typeof basis === 'number')
     throw new EngineError(
       'argument',
-      `basis must be "reduced", "oxidised" or a species of the reaction for an electrode reaction; got ${basis}. A number of electrons goes with a species alone, e.g. CAPACITY("LiCoO2", 1).`,
+      `basis must be "reduced", "oxidised" or a species of the reaction for an electrode reaction; got ${basis}. A number of electrons goes with an active material written alone (e.g. "LiCoO2" with basis 1).`,
       'basis',
     );
   const r = halfReactionOf(text);
@@ -107,7 +107,7 @@ function halfReactionOf(text: string): Reaction {
   }
   throw new EngineError(
     'argument',
-    `${quote(text)} is not an electrode reaction: give a half-reaction with its electrons ("Li+ + e- -> Li"), a couple ("Zn2+/Zn") or an active material ("LiFePO4"). For a whole cell use SPECENERGY.`,
+    `${quote(text)} is not an electrode reaction: give a half-reaction with its electrons ("Li+ + e- -> Li"), a couple ("Zn2+/Zn") or an active material ("LiFePO4"). A whole cell has a specific energy, not a specific capacity.`,
     'reaction_or_species',
   );
 }
@@ -122,7 +122,7 @@ function speciesCapacity(text: string, basis: string | number | null | undefined
     if (v === undefined || s.charge !== 0)
       throw new EngineError(
         'argument',
-        `Give the electrons per formula unit of ${quote(text)} as basis, e.g. CAPACITY("${text.trim()}", 1), or write its electrode reaction.`,
+        `Give the electrons per formula unit of ${quote(text)} as basis (e.g. 1), or write its electrode reaction.`,
         'basis',
       );
     n = v;

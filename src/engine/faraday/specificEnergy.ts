@@ -51,7 +51,7 @@ export function asIons(r: Reaction): Reaction {
   return changed ? out : r;
 }
 
-/** E°, n and reactant mass of a cell reaction, as SPECENERGY uses them. */
+/** E°, n and reactant mass of a cell reaction, for the specific energy. */
 export interface CellEnergyPlan {
   readonly e0V: number;
   readonly electrons: number;
@@ -77,7 +77,7 @@ export function cellEnergyPlan(text: string, tempC = 25): CellEnergyPlan {
   } else {
     throw new EngineError(
       'argument',
-      `${quote(text)} is ${notation.kind === 'half' ? 'a half-reaction' : 'a couple'}; the specific energy needs a whole cell reaction ("Zn + Cu2+ -> Zn2+ + Cu") or a cell diagram. For one electrode use CAPACITY.`,
+      `${quote(text)} is ${notation.kind === 'half' ? 'a half-reaction' : 'a couple'}; the specific energy needs a whole cell reaction ("Zn + Cu2+ -> Zn2+ + Cu") or a cell diagram; one electrode has a specific capacity instead.`,
       'cell_reaction',
     );
   }

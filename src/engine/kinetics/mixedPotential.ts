@@ -70,7 +70,7 @@ export function mixedPotential(
   if (!(eCorr > eA && eCorr < eC))
     throw new EngineError(
       'argument',
-      `The Tafel lines cross at ${Number(eCorr.toFixed(4))} V, outside E_a … E_c (${eA} … ${eC} V), where the reverse reactions are not negligible; use the Butler–Volmer form (BVCURRENT) for each reaction instead.`,
+      `The Tafel lines cross at ${Number(eCorr.toFixed(4))} V, outside E_a … E_c (${eA} … ${eC} V), where the reverse reactions are not negligible; solve the full Butler–Volmer currents of both reactions for their balance instead.`,
       'i0_c',
     );
   const iCorr = Math.pow(10, logI);

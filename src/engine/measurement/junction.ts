@@ -18,7 +18,7 @@ import { splitElectrolyte } from '../notation/electrolytes';
 import { LIMITING_IONIC_CONDUCTIVITY_S_CM2_MOL } from '../data/conductivities';
 import { AQUEOUS_RANGE_C, celsiusInRange } from './guards';
 
-/** One column of JUNCTION: the ions it stands for, with their stoichiometric numbers. */
+/** One species column of a junction: the ions it stands for, with their stoichiometric numbers. */
 interface JunctionColumn {
   readonly ions: readonly { ion: Species; count: number; lambda: number }[];
 }
@@ -36,7 +36,7 @@ function lambdaOf(ion: Species, header: string): number {
 }
 
 /**
- * Read the species headers of JUNCTION: ions ("H+", "Cl-") or strong electrolytes
+ * Read the species headers of a junction: ions ("H+", "Cl-") or strong electrolytes
  * by formula ("HCl", "K2SO4"), which stand for their ions at c·ν.
  *
  * @throws EngineError (`parse`, `argument`, `notFound`)

@@ -15,7 +15,7 @@ import { slopePerElectronAtKelvin, ZERO_CELSIUS_K } from '../constants';
 import { formatSpecies } from '../notation/species';
 import { AQUEOUS_RANGE_C, celsiusInRange, potentialInVolts } from './guards';
 
-/** What SOLVEFOR found: an activity (or bar for a gas) or a pH, and its log10. */
+/** What the inverse Nernst found: an activity (or bar for a gas) or a pH, and its log10. */
 export interface SolvedUnknown {
   readonly kind: 'activity' | 'pH';
   readonly value: number;

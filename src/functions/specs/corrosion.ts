@@ -67,7 +67,7 @@ const CORRATE: FunctionSpec = {
   notes: [
     'EW of an alloy = 1/Σ(nᵢ·fᵢ/Wᵢ) with the valences ASTM G102 uses (Fe 2, Ni 2, Cr 3, Mo 3, Mn 2, Cu 2, Al 3 …) and elements above about 1 %; EW and density of carbon steel, 304 and 316 from ASTM G102 Table 1 (from memory).',
     'Uniform corrosion is assumed; pitting and crevice attack can be far faster locally.',
-    CP_CAUTION,
+    `${CP_CAUTION}`,
   ],
   examples: [
     {
@@ -99,7 +99,7 @@ const MASSLOSS: FunctionSpec = {
   returns: 'Mass-loss rate in g/(m²·d), one row per case',
   params: RATE_PARAMS,
   result: { kind: 'perCase' },
-  notes: ['The density is not needed (it may be given, for the same arguments as CORRATE).', CP_CAUTION],
+  notes: ['The density is not needed (it may be given, for the same arguments as CORRATE).', `${CP_CAUTION}`],
   examples: [
     {
       args: ['Fe', 1],
@@ -163,7 +163,7 @@ const ANODELIFE: FunctionSpec = {
   notes: [
     'Capacities: DNV-RP-B401 (2017) Table 10-6, seawater, anode surface up to 30 °C (Al-Zn-In 2000 Ah/kg, zinc 780 Ah/kg); magnesium about 1100 Ah/kg (H-1/AZ63) and 1230 Ah/kg (high-potential), common practice onshore. Utilisation factors: DNV-RP-B401 Table 10-8. All from memory: check against the edition you design to.',
     'Default utilisation 0.80 (the lowest DNV-RP-B401 factor, for bracelets and other types).',
-    CP_CAUTION,
+    `${CP_CAUTION}`,
   ],
   examples: [
     {

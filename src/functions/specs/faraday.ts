@@ -66,7 +66,7 @@ const DEPOSIT: FunctionSpec = {
   notes: [
     'The deposited species is the one solid of the half-reaction: the solid product (a reduction deposits it), or where no product is solid the solid reactant (it dissolves). Solids on both sides are refused as ambiguous.',
     'Molar masses from the IUPAC/CIAAW 2021 abridged standard atomic weights.',
-    PLATING_CAUTION,
+    `${PLATING_CAUTION}`,
   ],
   examples: [
     {
@@ -100,7 +100,7 @@ const PLATETIME: FunctionSpec = {
   result: { kind: 'perCase' },
   notes: [
     'Uniform current distribution is assumed; real parts plate thicker at edges and thinner in recesses.',
-    PLATING_CAUTION,
+    `${PLATING_CAUTION}`,
   ],
   examples: [
     {
@@ -135,7 +135,7 @@ const THICKNESS: FunctionSpec = {
   result: { kind: 'perCase' },
   notes: [
     'Uniform current distribution is assumed; real parts plate thicker at edges and thinner in recesses.',
-    PLATING_CAUTION,
+    `${PLATING_CAUTION}`,
   ],
   examples: [
     {

@@ -58,9 +58,8 @@ const KIN_PARAMS: readonly ParamSpec[] = [
   },
 ];
 
-const KIN_NOTES = [
-  'Anodic current and overpotential are positive (IUPAC). i = i0·[exp(αa·F·η/RT) − exp(−αc·F·η/RT)]; with limits, i = i_BV/(1 + i0·e^{αa f η}/i_lim,a + i0·e^{−αc f η}/i_lim,c) (Bard & Faulkner 2001, eq. 3.4.10, anodic-positive form).',
-];
+const KIN_NOTES =
+  'Anodic current and overpotential are positive (IUPAC). i = i0·[exp(αa·F·η/RT) − exp(−αc·F·η/RT)]; with limits, i = i_BV/(1 + i0·e^{αa f η}/i_lim,a + i0·e^{−αc f η}/i_lim,c) (Bard & Faulkner 2001, eq. 3.4.10, anodic-positive form).';
 
 function limits(call: CallArgs): { a: number | null; c: number | null } {
   if (call.raw('i_lim') === undefined || call.raw('i_lim') === null) return { a: null, c: null };
@@ -94,7 +93,7 @@ const BVCURRENT: FunctionSpec = {
     ...KIN_PARAMS,
   ],
   result: { kind: 'perCase' },
-  notes: KIN_NOTES,
+  notes: [`${KIN_NOTES}`],
   examples: [
     {
       args: [0.05, 1e-3, 0.5],
@@ -122,7 +121,7 @@ const OVERPOTENTIAL: FunctionSpec = {
     ...KIN_PARAMS,
   ],
   result: { kind: 'perCase' },
-  notes: [...KIN_NOTES, 'A current at or beyond a limiting current has no overpotential and is refused.'],
+  notes: [`${KIN_NOTES}`, 'A current at or beyond a limiting current has no overpotential and is refused.'],
   examples: [
     {
       args: [1e-3, 1e-3, 0.5],
@@ -163,21 +162,9 @@ const TAFELSLOPE: FunctionSpec = {
   perCase: (a) => tafelSlopeV(a.num('alpha'), a.num('temp_C'), a.num('n')),
 };
 
-const POT = (name: string, description: string): ParamSpec => ({ name, kind: 'potential', description });
-const I0 = (name: string, description: string): ParamSpec => ({
-  name,
-  kind: 'currentDensity',
-  unit: '',
-  domain: { min: 0, minExclusive: true },
-  description,
-});
-const SLOPE = (name: string, description: string): ParamSpec => ({
-  name,
-  kind: 'number',
-  unit: 'V/decade',
-  domain: { min: 0, minExclusive: true },
-  description,
-});
+const POT = { kind: 'potential' } as const;
+const I0 = { kind: 'currentDensity', unit: '', domain: { min: 0, minExclusive: true } } as const;
+const SLOPE = { kind: 'number', unit: 'V/decade', domain: { min: 0, minExclusive: true } } as const;
 
 const MIXEDPOTENTIAL: FunctionSpec = {
   id: 'MIXEDPOTENTIAL',
@@ -186,15 +173,29 @@ const MIXEDPOTENTIAL: FunctionSpec = {
     'Corrosion potential and current (two cells) where an anodic and a cathodic Tafel reaction balance (Wagner–Traud), solved exactly in log space.',
   returns: 'Two cells per case: E_corr in V (the scale of E_a and E_c) and i_corr (the unit of i0)',
   params: [
-    POT('E_a', 'Equilibrium potential of the anodic reaction (e.g. metal dissolution) in V'),
-    I0('i0_a', 'Exchange current density of the anodic reaction'),
-    SLOPE('b_a', 'Anodic Tafel slope in V/decade (positive, e.g. 0.06)'),
-    POT(
-      'E_c',
-      'Equilibrium potential of the cathodic reaction (e.g. hydrogen evolution, oxygen reduction) in V',
-    ),
-    I0('i0_c', 'Exchange current density of the cathodic reaction (same unit as i0_a)'),
-    SLOPE('b_c', 'Cathodic Tafel slope in V/decade (positive, e.g. 0.12)'),
+    {
+      ...POT,
+      name: 'E_a',
+      description: 'Equilibrium potential of the anodic reaction (e.g. metal dissolution) in V',
+    },
+    {
+      ...I0,
+      name: 'i0_a',
+      description: 'Exchange current density of the anodic reaction (any unit; i_corr has the same)',
+    },
+    { ...SLOPE, name: 'b_a', description: 'Anodic Tafel slope in V/decade (positive, e.g. 0.06)' },
+    {
+      ...POT,
+      name: 'E_c',
+      description:
+        'Equilibrium potential of the cathodic reaction (e.g. hydrogen evolution, oxygen reduction) in V',
+    },
+    {
+      ...I0,
+      name: 'i0_c',
+      description: 'Exchange current density of the cathodic reaction (same unit as i0_a)',
+    },
+    { ...SLOPE, name: 'b_c', description: 'Cathodic Tafel slope in V/decade (positive, e.g. 0.12)' },
   ],
   result: { kind: 'perCase', width: 2 },
   notes: [

@@ -51,11 +51,11 @@ describe('CAPACITY of electrode reactions and active materials (derived)', () =>
     ['2 H+ + 2 e- -> H2', undefined, /no solid on its reduced side/],
     ['Li+ + e- -> Li', 'oxidised', /no solid on its oxidised side/],
     ['Li+ + e- -> Li', 'Na', /basis "Na" is not a species/],
-    ['Li+ + e- -> Li', 2, /A number of electrons goes with a species alone/],
+    ['Li+ + e- -> Li', 2, /A number of electrons goes with an active material written alone/],
     ['LiCoO2', undefined, /Give the electrons per formula unit/],
     ['LiCoO2', 'reduced', /electrons per formula unit \(a number\)/],
     ['LiCoO2', -1, /basis must be greater than 0/],
-    ['Zn + Cu2+ -> Zn2+ + Cu', undefined, /not an electrode reaction.*SPECENERGY/],
+    ['Zn + Cu2+ -> Zn2+ + Cu', undefined, /not an electrode reaction.*A whole cell has a specific energy/],
   ])('%s, basis %p is refused', (text, basis, message) => {
     const e = engineErrorOf(() => specificCapacityMAhG(text, basis));
     expect(e.kind).toBe('argument');

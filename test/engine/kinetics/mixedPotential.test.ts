@@ -26,7 +26,7 @@ describe('MIXEDPOTENTIAL', () => {
 
   test.each([
     [() => mixedPotential(0.2, 1e-6, 0.06, 0.1, 1e-7, 0.12), /E_c \(0.1 V\) must lie above E_a/],
-    [() => mixedPotential(-0.5, 1, 0.06, 0, 1e-12, 0.12), /outside E_a … E_c.*BVCURRENT/],
+    [() => mixedPotential(-0.5, 1, 0.06, 0, 1e-12, 0.12), /outside E_a … E_c.*full Butler–Volmer currents/],
     [() => mixedPotential(-0.5, 0, 0.06, 0, 1e-7, 0.12), /i0_a must be greater than 0/],
     [() => mixedPotential(-0.5, 1e-6, 60, 0, 1e-7, 120), /Tafel slopes are in V per decade/],
     [() => mixedPotential(-500, 1e-6, 0.06, 0, 1e-7, 0.12), /E_a of -500 V is beyond ±10 V/],
