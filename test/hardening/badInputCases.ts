@@ -1,6 +1,6 @@
 /**
  * The bad-input catalogue: every function of the catalogue × every input class that applies
- * to it, with the result the contract asks for (PRODUCT.md, "Errors"): the error code, and a
+ * to it, with the result the contract asks for (docs/design.md, "Errors"): the error code, and a
  * fragment of the message (a regular expression) that names the argument or the fix.
  *
  * The cases are of two sorts: derived from the function specs (every parameter gets the input
@@ -226,7 +226,13 @@ function reactionCases(
 }
 
 /** Temperature cases for a function whose temp_C is at `index` of `base`. */
-function tempCases(fn: string, base: readonly Arg[], index: number, huge = TEMP_HUGE): BadInputCase[] {
+function tempCases(
+  fn: string,
+  base: readonly Arg[],
+  index: number,
+  huge = TEMP_HUGE,
+  hugeSays = 'temp_C must be between 0 and 100 °C (the aqueous range of the data)',
+): BadInputCase[] {
   const at = (t: Arg) => base.map((a, i) => (i === index ? t : a));
   return [
     {
@@ -259,7 +265,7 @@ function tempCases(fn: string, base: readonly Arg[], index: number, huge = TEMP_
       input: 'huge (1e308)',
       args: at(1e308),
       expect: V(huge),
-      says: 'temp_C must be between 0 and 100 °C (the aqueous range of the data)',
+      says: hugeSays,
     },
     {
       fn,
@@ -728,7 +734,13 @@ const HAND_CASES: readonly BadInputCase[] = [
   },
 
   // -------------------------------------------------------------------- NERNSTSLOPE
-  ...tempCases('NERNSTSLOPE', [25, 1], 0, /temp_C must be > −273\.15 °C and ≤ 10000 °C; got 1e\+308 °C/),
+  ...tempCases(
+    'NERNSTSLOPE',
+    [25, 1],
+    0,
+    /temp_C must be > −273\.15 °C and ≤ 10000 °C; got 1e\+308 °C/,
+    'temp_C must be above absolute zero and at most 10000 °C',
+  ),
   {
     fn: 'NERNSTSLOPE',
     argument: 'n',

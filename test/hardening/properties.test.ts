@@ -4,7 +4,7 @@
  * that a failure replays; fast-check prints the seed and the shrunk counterexample.
  *
  * Stoichiometry is checked with an element counter written here, independent of the engine's,
- * in exact rational arithmetic (bigint), as PRODUCT.md asks ("no float tolerance").
+ * in exact rational arithmetic (bigint), as docs/design.md asks (stoichiometry is exact, no float tolerance).
  */
 import fc from 'fast-check';
 import {
@@ -668,8 +668,8 @@ describe('reference scales and the Nernst slope', () => {
         const off: string[] = [];
         for (const a of REFS)
           for (const b of REFS) {
-            const ab = num(vsRef(e, a, b, t, ph), `VSREF(${e}, ${a}, ${b})`);
-            const err = Math.abs(num(vsRef(ab, b, a, t, ph), 'VSREF') - e);
+            const ab = num(vsRef(e, a, b, ph, t), `VSREF(${e}, ${a}, ${b})`);
+            const err = Math.abs(num(vsRef(ab, b, a, ph, t), 'VSREF') - e);
             if (!(err <= 1e-12)) off.push(`${a}→${b}→${a}: ${err}`);
           }
         expect(off).toEqual([]);

@@ -10,7 +10,7 @@ import { asGrid } from '../args';
 import { at, caseColumn, caseCount, type CaseColumn } from '../broadcast';
 import { cellError, toCellError } from '../errorCodes';
 import { isPerCase, kindOf, nounOf, readFlag, readNumberOf, readTextOf, unitOf } from './kinds';
-import type { CallArgs, CaseArgs, FunctionSpec, ParamSpec } from './types';
+import type { CallArgs, CaseArgs, FunctionSpec, ParamSpec, PotentialV, TempC } from './types';
 import { errorRowsOf, numberRow, readHeaders, readNumberList, readValueRows, tableCells, type TableCells } from './values';
 
 /** A number that is not finite never reaches a sheet: it becomes #NUM! with a message. */
@@ -144,6 +144,16 @@ class Case implements CaseArgs {
 
   num(name: string): number {
     return this.given(name, this.optNum(name));
+  }
+
+  tempC(name = 'temp_C'): TempC {
+    if (this.call.param(name).kind !== 'temperature') throw new Error(`${name} is not a temperature parameter`);
+    return this.num(name) as TempC;
+  }
+
+  potentialV(name: string): PotentialV {
+    if (this.call.param(name).kind !== 'potential') throw new Error(`${name} is not a potential parameter`);
+    return this.num(name) as PotentialV;
   }
 
   /** A value that must be there: "X is missing: give …" where it is not. */

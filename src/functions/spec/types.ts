@@ -122,6 +122,11 @@ export interface ErrorNote {
   readonly code: ErrorCode;
 }
 
+/** A temperature in °C, read and checked at the boundary (docs/design.md, "Argument kinds"). */
+export type TempC = number & { readonly __unit: 'degC' };
+/** A potential in V, read and checked at the boundary. */
+export type PotentialV = number & { readonly __unit: 'V' };
+
 /** Reads typed arguments for one case (see reader.ts). */
 export interface CaseArgs {
   /** The case index (0-based). */
@@ -132,6 +137,10 @@ export interface CaseArgs {
   num(name: string): number;
   /** The same, null where blank and there is no default. */
   optNum(name: string): number | null;
+  /** A `temperature` parameter (default `temp_C`), checked once: °C, in its domain. */
+  tempC(name?: string): TempC;
+  /** A `potential` parameter, checked once: V, within ±10 V unless allowed. */
+  potentialV(name: string): PotentialV;
   /** Text (reaction, species, reference, choice text…), trimmed; the default where blank. */
   text(name: string): string;
   /** The same, null where blank and there is no default. */
@@ -174,11 +183,11 @@ export interface FunctionSpec {
    * the function returns; `returns`: what the result holds, with its unit, e.g. "E in V vs SHE".
    */
   readonly id: string;
+  readonly params: readonly ParamSpec[];
+  readonly result: ResultShape;
   readonly family: string;
   readonly summary: string;
   readonly returns: string;
-  readonly params: readonly ParamSpec[];
-  readonly result: ResultShape;
   /** At least one; the first is the formula bar's example. */
   readonly examples: readonly ExampleSpec[];
   /** Longer notes for the docs page (conventions, where a default comes from). */

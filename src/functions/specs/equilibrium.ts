@@ -58,11 +58,11 @@ function standardAndN(a: CaseArgs, call: CallArgs): { e0: number; n: number } {
       'n',
     );
   }
-  return { e0: standardPotentialV(form.resolved, a.num('temp_C')), n };
+  return { e0: standardPotentialV(form.resolved, a.tempC()), n };
 }
 
 function log10K(a: CaseArgs, call: CallArgs): number {
-  const t = a.num('temp_C');
+  const t = a.tempC();
   const { e0, n } = standardAndN(a, call);
   return log10EquilibriumConstant(e0, n, t);
 }
@@ -110,7 +110,7 @@ const GIBBS: FunctionSpec = {
     { args: [0.434, 2], expected: -83.749268, tolerance: 1e-5, source: 'derived by hand: −nFE with the SI 2019 exact F' },
   ],
   perCase: (a, call) => {
-    a.num('temp_C');
+    a.tempC();
     const { e0, n } = standardAndN(a, call);
     return gibbsEnergyKJ(e0, n);
   },
@@ -206,7 +206,7 @@ const NERNSTSLOPE: FunctionSpec = {
     { args: [37, 2], expected: 0.0307702, tolerance: 1e-7, source: SLOPE },
   ],
   perCase: (a) => {
-    const t = a.num('temp_C');
+    const t = a.tempC();
     const n = a.num('n');
     return Math.sign(n) * nernstSlopeV(t, Math.abs(n));
   },
@@ -259,7 +259,7 @@ const CONCCELL: FunctionSpec = {
   perCase: (a, call) => {
     const form = compiledReaction(a.text('reaction'), call.table());
     const plan = planConcentrationCell(form, a.optText('species'));
-    return concentrationCellEmfV(plan, a.num('value_left'), a.num('value_right'), a.num('temp_C'));
+    return concentrationCellEmfV(plan, a.num('value_left'), a.num('value_right'), a.tempC());
   },
 };
 

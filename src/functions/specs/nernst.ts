@@ -176,7 +176,7 @@ const STDPOTENTIAL: FunctionSpec = {
     { args: ['Cu2+/Cu'], expected: 0.337, tolerance: 1e-12, source: CU_E0 },
     { args: ['Zn(s) | Zn2+(aq) || Cu2+(aq) | Cu(s)'], expected: 1.0988, tolerance: 1e-12, source: `${CU_E0}; ${ZN_E0}` },
   ],
-  perCase: (a, call) => standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.num('temp_C')),
+  perCase: (a, call) => standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.tempC()),
 };
 
 /** The parameters of QUOTIENT and LOGQ, and the zinc–copper case their examples share. */

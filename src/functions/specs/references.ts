@@ -28,7 +28,7 @@ const VSREF: FunctionSpec = {
     },
   ],
   perCase: (a) =>
-    convertPotentialV(a.num('potential'), a.text('from_ref'), a.text('to_ref'), a.num('temp_C'), a.optNum('pH')),
+    convertPotentialV(a.potentialV('potential'), a.text('from_ref'), a.text('to_ref'), a.tempC(), a.optNum('pH')),
 };
 
 /** The reference-scale family. */

@@ -11,9 +11,9 @@ const TABLE_FAMILY = { family: 'Table', result: { kind: 'perCase' } } as const;
 const SOURCE: FunctionSpec = {
   id: 'SOURCE',
   ...TABLE_FAMILY,
+  params: [REACTION, TABLE],
   summary: 'Which table rows (built-in or yours) gave E°, with their sources and any derivation.',
   returns: 'Provenance text, one row per case',
-  params: [REACTION, TABLE],
   examples: [
     { args: ['Cu2+/Cu'], expected: 'OpenStax Chemistry 2e, Appendix L', source: 'the source named in the built-in row' },
   ],
