@@ -253,6 +253,31 @@ export const BEYOND_EQUILIBRIUM_CASES: readonly BadInputCase[] = [
   ...absurdTemperature('BVCURRENT', [0.05, 1e-3, 0.5, null], 4),
   ...absurdTemperature('OVERPOTENTIAL', [1e-3, 1e-3, 0.5, null], 4),
   ...absurdTemperature('TAFELSLOPE', [0.5], 1),
+  // the kinetics range is −80…200 °C, so 298.15 looks like kelvin there too
+  c(
+    'TAFELSLOPE',
+    'temp_C',
+    'temperature that looks like kelvin',
+    [0.5, 298.15],
+    V(/it looks like a temperature in kelvin; give it in °C \(298\.15 K is 25 °C\)/),
+    'looks like kelvin: give it in °C',
+  ),
+  c(
+    'BVCURRENT',
+    'temp_C',
+    'temperature that looks like kelvin',
+    [0.05, 1e-3, 0.5, null, 310.15],
+    V(/it looks like a temperature in kelvin; give it in °C \(310\.15 K is 37 °C\)/),
+    'looks like kelvin: give it in °C',
+  ),
+  c(
+    'OVERPOTENTIAL',
+    'temp_C',
+    'temperature that looks like kelvin',
+    [1e-3, 1e-3, 0.5, null, 298.15],
+    V(/it looks like a temperature in kelvin/),
+    'looks like kelvin: give it in °C',
+  ),
   c(
     'SOLVEFOR',
     'table',
