@@ -2,16 +2,15 @@
  * Inverse Nernst: the activity of one species (or the pH) that gives a measured
  * potential. The compiled Nernst form is linear in the logarithms,
  *   E = E°(T) − s·(Σ_{k≠u} wₖ log10 aₖ + W·log10 a_u),   s = RT ln10/F,
- * with W the summed weight of the unknown u, so
- *   log10 a_u = ((E° − E)/s − Σ_{k≠u} wₖ log10 aₖ) / W
- * exactly (and pH = −log10 a(H+)). W = 0 (the species cancels) leaves no unique
- * answer and is refused.
+ * with W the summed weight of the unknown u, so E is a straight line in log10 a_u
+ * (or in the pH). The line is read off the engine's own compiled Nernst form at two
+ * points and solved exactly:
+ *   log10 a_u = (E − E(log a_u = 0)) / (E(1) − E(0)).
+ * A zero slope (the species cancels) leaves no unique answer and is refused.
  */
 import { EngineError, quote } from '../errors';
 import { compiledReaction } from '../cache';
-import { bindSpecies, parseSpeciesHeader, weightedLogActivity } from '../thermo/nernstForm';
-import { standardPotentialV } from '../table/resolve';
-import { slopePerElectronAtKelvin, ZERO_CELSIUS_K } from '../constants';
+import { bindSpecies, parseSpeciesHeader, potentialV } from '../thermo/nernstForm';
 import { formatSpecies } from '../notation/species';
 import { AQUEOUS_RANGE_C, celsiusInRange, potentialInVolts } from './guards';
 
@@ -52,15 +51,18 @@ export function solveForUnknown(
       'unknown is empty: give the species to solve for ("Cu2+") or "pH".',
       'unknown',
     );
-  const u = parseSpeciesHeader(unknown);
+  const target = parseSpeciesHeader(unknown);
   const form = compiledReaction(reaction, table);
-  const isPh = u.kind === 'pH';
-  // drop the unknown's own column (and, for pH or H+, both H+ and pH columns)
+  const isPh = target.kind === 'pH';
+  // drop the unknown's own column (and, for pH or H+, the H+, OH- and pH columns)
   const headers: string[] = [];
   const row: unknown[] = [];
   species.forEach((h, i) => {
     const p = parseSpeciesHeader(h);
-    const same = p.key === u.key && p.side === u.side && (p.kind === u.kind || p.key === 'H|1');
+    const acid = p.key === 'H|1' || (isPh && p.key === 'OH|-1');
+    const same =
+      p.side === target.side &&
+      ((p.key === target.key && p.kind === target.kind) || (acid && (isPh || target.key === 'H|1')));
     if (!same) {
       headers.push(h);
       row.push(values[i]);
@@ -69,40 +71,41 @@ export function solveForUnknown(
   if (species.length === 0) {
     // standard state for the others: a unit activity for each term without an inline value
     for (const t of form.terms) {
-      if (t.pure || t.inline !== undefined || t.key === u.key) continue;
+      if (t.pure || t.inline !== undefined || t.key === target.key) continue;
       headers.push((t.side ? `${t.side}:` : '') + formatSpecies(t.species, false));
       row.push(1);
     }
   }
   headers.push(unknown.trim());
-  row.push(isPh ? 0 : 1);
+  row.push(0);
   const col = headers.length - 1;
   const b = bindSpecies(form, headers);
-  let w = 0;
   let bound = false;
-  for (let i = 0; i < b.column.length; i++) {
-    if (b.column[i] === col) {
-      w += b.weight[i]!;
-      bound = true;
-    }
-  }
+  for (let i = 0; i < b.column.length; i++) if (b.column[i] === col) bound = true;
   if (!bound)
     throw new EngineError(
       'argument',
-      `${quote(unknown)} does not appear in ${quote(reaction)}${isPh ? ' (it has no H+)' : ''}; give one of its species: ${b.labels.join(', ')}.`,
+      `${quote(unknown)} does not appear in ${quote(reaction)}${isPh ? ' (it has neither H+ nor OH-)' : ''}; give one of its species: ${b.labels.join(', ')}.`,
       'unknown',
     );
-  if (w === 0 || Math.abs(w) < 1e-12)
+  // E is linear in the unknown's log variable u (log10 a, or the pH): evaluate the compiled
+  // Nernst form at u = 0 and u = 1 and solve the line exactly. This goes through the same
+  // potentialV as POTENTIAL, so every rule of the binding (a pH setting a(OH-) through Kw)
+  // holds here too.
+  const at = (x: number): number => {
+    row[col] = isPh ? x : Math.pow(10, x);
+    return potentialV(b, row, tempC);
+  };
+  const e0 = at(0);
+  const slope = at(1) - e0;
+  if (Math.abs(slope) < 1e-12)
     throw new EngineError(
       'argument',
       `The potential of ${quote(reaction)} does not depend on ${quote(unknown)} (its exponents cancel), so no unique value gives E; solve for another species.`,
       'unknown',
     );
-  const s = slopePerElectronAtKelvin(tempC + ZERO_CELSIUS_K);
-  const rest = weightedLogActivity(b, row);
-  const e0 = standardPotentialV(form.resolved, tempC);
-  const x = ((e0 - eV) / s - rest) / w;
-  if (isPh) return { kind: 'pH', value: -x, log10Activity: x };
+  const x = (eV - e0) / slope;
+  if (isPh) return { kind: 'pH', value: x, log10Activity: -x };
   if (x > 300 || x < -300)
     throw new EngineError(
       'range',

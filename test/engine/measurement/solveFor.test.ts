@@ -47,7 +47,7 @@ describe('SOLVEFOR', () => {
 
   test.each([
     [['Cu2+ + 2 e- -> Cu', 0.3, 'Zn2+', [], []], 'argument', /"Zn2\+" does not appear/],
-    [['Cu2+ + 2 e- -> Cu', 0.3, 'pH', [], []], 'argument', /it has no H\+/],
+    [['Cu2+ + 2 e- -> Cu', 0.3, 'pH', [], []], 'argument', /it has neither H\+ nor OH-/],
     [['Ag | Ag+ || Ag+ | Ag', 0.05, 'Ag+', [], []], 'argument', /does not depend on "Ag\+"/],
     [
       ['Cu2+ + 2 e- -> Cu', 300, 'Cu2+', [], []],
