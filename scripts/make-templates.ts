@@ -138,9 +138,9 @@ const CP_READINGS: readonly [string, number, string, number, number][] = [
 function cathodicProtection(): ExcelJS.Workbook {
   const t = CP_TEMPLATE;
   const c = t.col;
-  const wb = newWorkbook('Cathodic-protection check: Harrowgate Water Board, Fellside trunk main');
+  const wb = newWorkbook('Cathodic-protection check: Tessivar Water Board, Quorrel Ridge trunk main');
   const ws = wb.addWorksheet(t.sheet);
-  ws.getCell('A1').value = 'Harrowgate Water Board: Fellside trunk main cathodic-protection survey';
+  ws.getCell('A1').value = 'Tessivar Water Board: Quorrel Ridge trunk main cathodic-protection survey';
   ws.getCell('A1').font = TITLE;
   ws.getCell('A2').value =
     'Fictional scenario, invented readings. Pipe-to-soil potentials of a buried steel main, current on (IR drop not corrected), converted to the saturated Cu/CuSO4 scale (CSE) with ECHEM.VSREF at the soil temperature.';
@@ -211,6 +211,7 @@ function cathodicProtection(): ExcelJS.Workbook {
   for (const col of [4, 5, 6, 7]) ws.getColumn(col).width = 16;
   ws.getColumn(8).width = 10;
 
+  anodeSheet(wb);
   potentialsSheet(
     wb,
     [
@@ -225,11 +226,12 @@ function cathodicProtection(): ExcelJS.Workbook {
   );
   notesSheet(wb, [
     'Cathodic-protection check sheet',
-    'Scenario: the Harrowgate Water Board (a fictional utility) surveys the Fellside trunk main, a buried, coated steel main protected by zinc anodes. All names and readings are invented.',
+    'Scenario: the Tessivar Water Board (an invented utility) surveys the Quorrel Ridge trunk main (an invented place), a buried, coated steel main protected by zinc anodes. All names and readings are invented.',
     'How to use: enter each test station\'s reading in mV, the reference electrode it was taken with (any name ECHEM.VSREF knows, e.g. "Ag/AgCl sat. KCl", "CSE", "SCE") and the soil temperature. Yellow cells are inputs.',
     "Column F converts each reading to the saturated Cu/CuSO4 scale with ECHEM.VSREF(E, from, to, , temp_C) (the empty place is pH, needed for RHE only), including the reference electrodes' temperature coefficients where known.",
     'Column H compares it with the criterion in B3 (-0.850 V vs CSE): PASS when at least as negative, otherwise CHECK. The 100 mV polarization criterion needs instant-off and depolarized readings, which this sheet does not hold.',
     'Rows 20-27: the EMF of a zinc anode against the steel, from the Potentials sheet, at the mean soil temperature, with ECHEM.POTENTIAL and the source of E° from ECHEM.SOURCE.',
+    'Sheet "Anodes and corrosion": the life of each galvanic anode by ECHEM.ANODELIFE(mass_kg, capacity_Ah_kg or material, current_A, utilisation or anode type), and corrosion rates of the probes by ECHEM.CORRATE and ECHEM.MASSLOSS (ASTM G102), each with a plain-arithmetic check.',
     'Recalculate without a spreadsheet program: potentia recalc cathodic-protection-check.xlsx -o survey.xlsx',
     '',
     'Cautions',
@@ -260,10 +262,10 @@ const SWEEP_CASES: readonly [string, number, number, number][] = [
 function cellSweep(): ExcelJS.Workbook {
   const t = SWEEP_TEMPLATE;
   const c = t.col;
-  const wb = newWorkbook('Cell-voltage sweep: Brackenfield Cell Works, zinc-copper reference cell');
+  const wb = newWorkbook('Cell-voltage sweep: Velkamoor Cell Works, zinc-copper reference cell');
   const ws = wb.addWorksheet(t.sheet);
   ws.getCell('A1').value =
-    'Brackenfield Cell Works: zinc-copper reference cell, EMF over composition and temperature';
+    'Velkamoor Cell Works: zinc-copper reference cell, EMF over composition and temperature';
   ws.getCell('A1').font = TITLE;
   ws.getCell('A2').value =
     'Fictional scenario, invented cases. One spilled ECHEM.POTENTIAL formula (E7) computes every case; column G repeats the Nernst equation in plain spreadsheet arithmetic as a check.';
@@ -315,6 +317,7 @@ function cellSweep(): ExcelJS.Workbook {
   ws.getColumn(1).width = 22;
   for (const col of [2, 3, 4, 5, 6, 7, 8]) ws.getColumn(col).width = 15;
 
+  faradaySheet(wb);
   potentialsSheet(
     wb,
     ['Zn2+ + 2 e- -> Zn', 'Cu2+ + 2 e- -> Cu', '2 H+ + 2 e- -> H2(g)'],
@@ -322,9 +325,10 @@ function cellSweep(): ExcelJS.Workbook {
   );
   notesSheet(wb, [
     'Cell-voltage sweep',
-    'Scenario: Brackenfield Cell Works (a fictional maker of laboratory reference cells) tabulates the reversible EMF of a zinc-copper cell over electrolyte composition and storage temperature. All cases are invented.',
+    'Scenario: Velkamoor Cell Works (an invented maker of laboratory reference cells) tabulates the reversible EMF of a zinc-copper cell over electrolyte composition and storage temperature. All cases are invented.',
     'How to use: edit the activities (columns B and C; their headers in row 6 name the species) and temperatures (column D); add cases by extending the ranges in E7 (an array formula over E7:E18).',
     'E7: =ECHEM.POTENTIAL(cell, species header, values matrix, temperature column, Potentials table) spills one EMF per case. Column F gives E° at each temperature; column G is the Nernst equation in plain arithmetic with the SI exact constants; column H shows the difference in µV.',
+    'Sheet "Faraday and capacity": mass plated by a charge (ECHEM.DEPOSIT), plating time and thickness (ECHEM.PLATETIME, ECHEM.THICKNESS), theoretical capacities (ECHEM.CAPACITY) and specific energies (ECHEM.SPECENERGY), with plain-arithmetic checks.',
     'Recalculate without a spreadsheet program: potentia recalc cell-voltage-sweep.xlsx -o sweep.xlsx',
     '',
     'Cautions',
@@ -353,9 +357,9 @@ function calibration(): ExcelJS.Workbook {
   const t = CAL_TEMPLATE;
   const c = t.col;
   const s = t.summaryCol;
-  const wb = newWorkbook('Electrode calibration: Lowmere Analytical, pH electrode at three temperatures');
+  const wb = newWorkbook('Electrode calibration: Drennavik Analytical, pH electrode at three temperatures');
   const ws = wb.addWorksheet(t.sheet);
-  ws.getCell('A1').value = 'Lowmere Analytical: pH electrode calibration at three temperatures';
+  ws.getCell('A1').value = 'Drennavik Analytical: pH electrode calibration at three temperatures';
   ws.getCell('A1').font = TITLE;
   ws.getCell('A2').value =
     'Fictional scenario, invented readings. Measured slope by SLOPE() against the ideal Nernst slope ECHEM.NERNSTSLOPE(temp_C) at each temperature.';
@@ -414,7 +418,7 @@ function calibration(): ExcelJS.Workbook {
   );
   notesSheet(wb, [
     'Electrode calibration',
-    'Scenario: Lowmere Analytical (a fictional water-testing laboratory) calibrates a combination pH electrode in three buffers at 15, 25 and 37 °C. All readings are invented.',
+    'Scenario: Drennavik Analytical (an invented water-testing laboratory) calibrates a combination pH electrode in three buffers at 15, 25 and 37 °C. All readings are invented.',
     'How to use: enter the buffer pH at each temperature and the electrode reading in mV (yellow cells, rows 5-13, three buffers per temperature).',
     'Row 17-19: measured slope = SLOPE(mV, pH); ideal slope = -1000 x ECHEM.NERNSTSLOPE(temp_C), i.e. -RT ln10 / F in mV per pH unit with the SI exact constants; % of ideal; the potential at pH 7 on the fitted line; and the E° of the Ag/AgCl element at that temperature from the Potentials sheet.',
     'The same layout serves an ion-selective electrode: put log10 of the ion activity in column B, and use ECHEM.NERNSTSLOPE(temp_C, z) for an ion of charge z (the sign of the slope follows the charge).',
@@ -424,6 +428,195 @@ function calibration(): ExcelJS.Workbook {
     ...CAUTIONS,
   ]);
   return wb;
+}
+
+// ---------------------------------------------------------------------------------------
+// Sheets of the Faraday, corrosion and anode functions
+
+/** Layout of the cell-voltage template's Faraday and capacity sheet. */
+export const FARADAY_SHEET = {
+  name: 'Faraday and capacity',
+  depositRows: [5, 6, 7],
+  plateRows: [11, 12, 13],
+  capacityRows: [17, 18, 19],
+  energyRows: [22, 23],
+  cautionsRow: 26,
+} as const;
+
+/** Invented plating cases: reaction, charge (C), efficiency, molar mass (g/mol) and n for the hand check. */
+const DEPOSIT_CASES: readonly [string, number, number, number, number][] = [
+  ['Cu2+ + 2 e- -> Cu', 3600, 0.98, 63.546, 2],
+  ['Zn2+ + 2 e- -> Zn', 7200, 0.9, 65.38, 2],
+  ['Ag+ + e- -> Ag', 1800, 1, 107.87, 1],
+];
+/** Invented plating jobs: reaction, thickness (µm), current density (A/m²), density (g/cm³), efficiency. */
+const PLATE_CASES: readonly [string, number, number, number, number][] = [
+  ['Cu2+ + 2 e- -> Cu', 25, 200, 8.96, 0.98],
+  ['Zn2+ + 2 e- -> Zn', 10, 150, 7.13, 0.9],
+  ['Ni2+ + 2 e- -> Ni', 15, 300, 8.9, 0.95],
+];
+const CAPACITY_CASES: readonly [string, string | number][] = [
+  ['Zn2+ + 2 e- -> Zn', ''],
+  ['Cu2+ + 2 e- -> Cu', ''],
+  ['LiFePO4', 1],
+];
+const ENERGY_CASES: readonly [string, number][] = [
+  ['Zn + Cu2+ -> Zn2+ + Cu', 25],
+  ['Pb + PbO2 + 2 H2SO4 -> 2 PbSO4 + 2 H2O', 25],
+];
+
+function faradaySheet(wb: ExcelJS.Workbook): void {
+  const t = FARADAY_SHEET;
+  const ws = wb.addWorksheet(t.name);
+  ws.getCell('A1').value =
+    'Velkamoor Cell Works: electrode plating, theoretical capacity and specific energy';
+  ws.getCell('A1').font = TITLE;
+  ws.getCell('A2').value =
+    "Invented cases. Faraday's law (ECHEM.DEPOSIT, PLATETIME, THICKNESS) with a plain-arithmetic check, theoretical capacities (ECHEM.CAPACITY) and specific energies (ECHEM.SPECENERGY, E° from the built-in table).";
+  header(ws, 4, [
+    'Electrode reaction',
+    'Charge (C)',
+    'Efficiency',
+    'Molar mass (g/mol, for the check)',
+    'n (for the check)',
+    'Deposit (g)',
+    'Hand check (g)',
+  ]);
+  DEPOSIT_CASES.forEach(([reaction, q, eff, m, n], i) => {
+    const r = t.depositRows[i]!;
+    input(ws.getCell(`A${r}`), reaction);
+    input(ws.getCell(`B${r}`), q);
+    input(ws.getCell(`C${r}`), eff);
+    ws.getCell(`D${r}`).value = m;
+    ws.getCell(`E${r}`).value = n;
+    formula(ws.getCell(`F${r}`), `ECHEM.DEPOSIT(A${r},B${r},C${r})`);
+    formula(ws.getCell(`G${r}`), `B${r}*C${r}*D${r}/(E${r}*96485.33212)`);
+    for (const col of ['F', 'G']) ws.getCell(`${col}${r}`).numFmt = '0.0000';
+  });
+  header(ws, 10, [
+    'Electrode reaction',
+    'Thickness (µm)',
+    'Current density (A/m²)',
+    'Deposit density (g/cm³)',
+    'Efficiency',
+    'Plating time (s)',
+    'Plating time (h)',
+    'Thickness back from that time (µm)',
+  ]);
+  PLATE_CASES.forEach(([reaction, um, i0, rho, eff], i) => {
+    const r = t.plateRows[i]!;
+    input(ws.getCell(`A${r}`), reaction);
+    input(ws.getCell(`B${r}`), um);
+    input(ws.getCell(`C${r}`), i0);
+    input(ws.getCell(`D${r}`), rho);
+    input(ws.getCell(`E${r}`), eff);
+    formula(ws.getCell(`F${r}`), `ECHEM.PLATETIME(A${r},B${r},C${r},D${r},E${r})`);
+    formula(ws.getCell(`G${r}`), `F${r}/3600`);
+    formula(ws.getCell(`H${r}`), `ECHEM.THICKNESS(A${r},C${r},F${r},D${r},E${r})`);
+    ws.getCell(`F${r}`).numFmt = '0';
+    ws.getCell(`G${r}`).numFmt = '0.00';
+    ws.getCell(`H${r}`).numFmt = '0.000';
+  });
+  header(ws, 16, ['Electrode reaction or material', 'Basis', 'Theoretical capacity (mAh/g)']);
+  CAPACITY_CASES.forEach(([text, basis], i) => {
+    const r = t.capacityRows[i]!;
+    input(ws.getCell(`A${r}`), text);
+    input(ws.getCell(`B${r}`), basis);
+    formula(ws.getCell(`C${r}`), `ECHEM.CAPACITY(A${r},B${r})`);
+    ws.getCell(`C${r}`).numFmt = '0.0';
+  });
+  header(ws, 21, ['Cell reaction', 'Temperature (°C)', 'Theoretical specific energy (Wh/kg of reactants)']);
+  ENERGY_CASES.forEach(([text, temp], i) => {
+    const r = t.energyRows[i]!;
+    input(ws.getCell(`A${r}`), text);
+    input(ws.getCell(`B${r}`), temp);
+    formula(ws.getCell(`C${r}`), `ECHEM.SPECENERGY(A${r},B${r})`);
+    ws.getCell(`C${r}`).numFmt = '0.0';
+  });
+  cautions(ws, t.cautionsRow, [
+    'Capacities and specific energies are theoretical (active material only); practical cells deliver a fraction of them.',
+    'Plating baths and electrolysis evolve gases (hydrogen, oxygen, chlorine) and use hazardous chemicals; battery building, charging and handling carry fire and chemical hazards. Follow the applicable standards, local codes, the maker’s data and licensed practice.',
+  ]);
+  ws.getColumn(1).width = 44;
+  for (const col of [2, 3, 4, 5, 6, 7, 8]) ws.getColumn(col).width = 16;
+}
+
+/** Layout of the cathodic-protection template's anode and corrosion-rate sheet. */
+export const ANODE_SHEET = {
+  name: 'Anodes and corrosion',
+  anodeRows: [5, 6, 7, 8],
+  probeRows: [12, 13, 14],
+  cautionsRow: 17,
+} as const;
+
+/** Invented anodes: id, material or capacity, net mass (kg), mean current (A), utilisation or type, and the
+ * capacity and utilisation in numbers for the plain-arithmetic check. */
+const ANODE_CASES: readonly [string, string | number, number, number, string | number, number, number][] = [
+  ['A-01 bracelet', 'zinc', 45, 0.12, 'bracelet', 780, 0.8],
+  ['A-02 stand-off', 'zinc', 60, 0.2, 'long slender stand-off', 780, 0.9],
+  ['A-03 spare', 780, 30, 0.15, 0.85, 780, 0.85],
+  ['A-04 valve pit', 'magnesium', 17, 0.05, 'short slender stand-off', 1100, 0.85],
+];
+/** Invented corrosion probes: id, metal or alloy, i_corr (µA/cm²), and EW and density for the check. */
+const PROBE_CASES: readonly [string, string, number, number, number][] = [
+  ['P-1 buried coupon', 'carbon steel', 4.2, 27.92, 7.86],
+  ['P-2 coupon at a coating holiday', 'carbon steel', 18.5, 27.92, 7.86],
+  ['P-3 stainless fitting', '316', 0.08, 25.5, 8.0],
+];
+
+function anodeSheet(wb: ExcelJS.Workbook): void {
+  const t = ANODE_SHEET;
+  const ws = wb.addWorksheet(t.name);
+  ws.getCell('A1').value = 'Tessivar Water Board: Quorrel Ridge main, anode life and corrosion rates';
+  ws.getCell('A1').font = TITLE;
+  ws.getCell('A2').value =
+    'Invented anodes and probe readings. Anode life by ECHEM.ANODELIFE (capacities and utilisation factors by name, DNV-RP-B401 from memory; magnesium common practice); corrosion rates from i_corr by ECHEM.CORRATE and MASSLOSS (ASTM G102).';
+  header(ws, 4, [
+    'Anode',
+    'Material or capacity (Ah/kg)',
+    'Net mass (kg)',
+    'Mean current (A)',
+    'Utilisation or anode type',
+    'Life (years)',
+    'Hand check (years)',
+  ]);
+  ANODE_CASES.forEach(([id, material, kg, amps, u, cap, uNum], i) => {
+    const r = t.anodeRows[i]!;
+    ws.getCell(`A${r}`).value = id;
+    input(ws.getCell(`B${r}`), material);
+    input(ws.getCell(`C${r}`), kg);
+    input(ws.getCell(`D${r}`), amps);
+    input(ws.getCell(`E${r}`), u);
+    formula(ws.getCell(`F${r}`), `ECHEM.ANODELIFE(C${r},B${r},D${r},E${r})`);
+    formula(ws.getCell(`G${r}`), `C${r}*${cap}*${uNum}/(D${r}*8760)`);
+    for (const col of ['F', 'G']) ws.getCell(`${col}${r}`).numFmt = '0.0';
+  });
+  header(ws, 11, [
+    'Probe',
+    'Metal or alloy',
+    'i_corr (µA/cm²)',
+    'Corrosion rate (mm/y)',
+    'Mass loss (g/(m²·d))',
+    'Hand check (mm/y)',
+  ]);
+  PROBE_CASES.forEach(([id, metal, i0, ew, rho], i) => {
+    const r = t.probeRows[i]!;
+    ws.getCell(`A${r}`).value = id;
+    input(ws.getCell(`B${r}`), metal);
+    input(ws.getCell(`C${r}`), i0);
+    formula(ws.getCell(`D${r}`), `ECHEM.CORRATE(B${r},C${r})`);
+    formula(ws.getCell(`E${r}`), `ECHEM.MASSLOSS(B${r},C${r})`);
+    formula(ws.getCell(`F${r}`), `0.00327*C${r}*${ew}/${rho}`);
+    for (const col of ['D', 'F']) ws.getCell(`${col}${r}`).numFmt = '0.0000';
+    ws.getCell(`E${r}`).numFmt = '0.000';
+  });
+  cautions(ws, t.cautionsRow, [
+    'Anode capacities and utilisation factors are defaults recalled from DNV-RP-B401 and common practice: design with the edition of the standard you work to and the anode maker’s certified data.',
+    'Corrosion rates from i_corr assume uniform attack; pitting, crevice and microbially influenced corrosion can be far faster locally.',
+    'Cathodic-protection design and assessment follow the applicable standards (e.g. AMPP/NACE SP0169, ISO 15589-1, DNV-RP-B401), local codes and licensed practice.',
+  ]);
+  ws.getColumn(1).width = 30;
+  for (const col of [2, 3, 4, 5, 6, 7]) ws.getColumn(col).width = 18;
 }
 
 // ---------------------------------------------------------------------------------------

@@ -187,3 +187,43 @@ export {
 } from './eph/cases';
 export { type EphSvgOptions, EPH_CAUTION, EPH_CLASS_STYLE, renderEphSvg } from './eph/svg';
 export { EPH_SPECIES } from './data/species/ephSpecies';
+// beyond equilibrium: Faraday's law, corrosion rates, anodes, capacity and energy,
+// electrode kinetics, inverse Nernst, junction potentials, ion-selective electrodes
+export { molarMassOfFormula, molarMassOfSpecies } from './faraday/molarMass';
+export { type FaradayPlan, faradayPlan, depositMassG, plateTimeS, thicknessUm } from './faraday/faraday';
+export { specificCapacityMAhG } from './faraday/capacity';
+export { asIons, cellEnergyPlan, specificEnergyWhKg, type CellEnergyPlan } from './faraday/specificEnergy';
+export {
+  G102_K1,
+  G102_K2,
+  corrodingMetal,
+  equivalentWeightOfComposition,
+  corrosionRateMmY,
+  massLossRateGm2d,
+  type CorrodingMetal,
+} from './corrosion/corrosionRate';
+export { HOURS_PER_YEAR, anodeCapacityAhKg, anodeUtilisation, anodeLifeYears } from './corrosion/anodeLife';
+export {
+  KINETICS_RANGE_C,
+  type KineticParams,
+  kineticParams,
+  butlerVolmerCurrent,
+  overpotentialV,
+  tafelSlopeV,
+} from './kinetics/butlerVolmer';
+export { type MixedPotential, mixedPotential } from './kinetics/mixedPotential';
+export { type SolvedUnknown, solveForUnknown } from './measurement/solveFor';
+export { junctionPotentialV } from './measurement/junction';
+export { iseResponseV } from './measurement/ionSelective';
+export {
+  MAX_POTENTIAL_V,
+  AQUEOUS_RANGE_C,
+  potentialInVolts,
+  celsiusInRange,
+  fraction as fractionInUnitInterval,
+} from './measurement/guards';
+export { ATOMIC_WEIGHTS, ATOMIC_WEIGHTS_SOURCE } from './data/atomicWeights';
+export { METAL_DENSITIES_G_CM3 } from './data/metalDensities';
+export { ALLOYS, G102_VALENCES } from './data/alloys';
+export { ANODE_MATERIALS, ANODE_UTILISATION, DEFAULT_UTILISATION } from './data/anodes';
+export { LIMITING_IONIC_CONDUCTIVITY_S_CM2_MOL } from './data/conductivities';

@@ -288,48 +288,219 @@ export function CHECKTABLE(table: any[][]): any[][] {
 }
 
 /**
- * The thermodynamically stable species of an element at a potential and pH (E–pH / Pourbaix diagram). Example: =ECHEM.PREDOMINANT("Fe", -1, 7) gives Fe(s).
- * @customfunction PREDOMINANT
- * @helpurl https://localhost:3000/taskpane.html#ref-predominant
- * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
- * @param E_V Electrode potential in V vs SHE; one cell or a column of cases
- * @param pH pH of the solution; one cell or a column of cases; −2–16
- * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default 0.000001)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
- * @returns Species text, e.g. "Fe2O3(s)", one row per case
+ * Corrosion rate in mm/y from a corrosion current density, CR = K1·i_corr·EW/ρ (ASTM G102). Example: =ECHEM.CORRATE("Fe", 1) gives 0.0116019.
+ * @customfunction CORRATE
+ * @helpurl https://localhost:3000/taskpane.html#ref-corrate
+ * @param metal_or_alloy Element ("Fe"), metal name ("zinc"), alloy ("carbon steel", "304", "S31600", "C70600", "Alloy 400", "3003") or a composition in mass % ("Cu 88.6, Ni 10, Fe 1.4"); any label where density and equivalent weight are both given
+ * @param current_density_uA_cm2 Corrosion current density i_corr in µA/cm²; ≥ 0 µA/cm²
+ * @param [density_g_cm3] Density in g/cm³, to override the listed value; > 0 g/cm³ (default: the metal's or alloy's)
+ * @param [equivalent_weight] Equivalent weight in g per equivalent, to override the computed value; > 0 g (default: by ASTM G102 from the composition)
+ * @returns Corrosion rate in mm/y, one row per case
  */
-export function PREDOMINANT(element: any[][], E_V: any[][], pH: any[][], activity?: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('PREDOMINANT'), element, E_V, pH, activity, temp_C);
+export function CORRATE(metal_or_alloy: any[][], current_density_uA_cm2: any[][], density_g_cm3?: any[][], equivalent_weight?: any[][]): any[][] {
+  return toExcel(implementation('CORRATE'), metal_or_alloy, current_density_uA_cm2, density_g_cm3, equivalent_weight);
 }
 
 /**
- * Immunity, corrosion or passivation: the class of the stable species of an element at a potential and pH. Example: =ECHEM.EPHCLASS("Zn", -0.5, 4) gives corrosion.
- * @customfunction EPHCLASS
- * @helpurl https://localhost:3000/taskpane.html#ref-ephclass
- * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
- * @param E_V Electrode potential in V vs SHE; one cell or a column of cases
- * @param pH pH of the solution; one cell or a column of cases; −2–16
- * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default 0.000001)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
- * @returns "immunity" (the metal), "corrosion" (a dissolved species) or "passivation" (a solid oxide or hydroxide), one row per case
+ * Mass-loss rate in g/(m²·d) from a corrosion current density, MR = K2·i_corr·EW (ASTM G102). Example: =ECHEM.MASSLOSS("Fe", 1) gives 0.250018.
+ * @customfunction MASSLOSS
+ * @helpurl https://localhost:3000/taskpane.html#ref-massloss
+ * @param metal_or_alloy Element ("Fe"), metal name ("zinc"), alloy ("carbon steel", "304", "S31600", "C70600", "Alloy 400", "3003") or a composition in mass % ("Cu 88.6, Ni 10, Fe 1.4"); any label where density and equivalent weight are both given
+ * @param current_density_uA_cm2 Corrosion current density i_corr in µA/cm²; ≥ 0 µA/cm²
+ * @param [density_g_cm3] Density in g/cm³, to override the listed value; > 0 g/cm³ (default: the metal's or alloy's)
+ * @param [equivalent_weight] Equivalent weight in g per equivalent, to override the computed value; > 0 g (default: by ASTM G102 from the composition)
+ * @returns Mass-loss rate in g/(m²·d), one row per case
  */
-export function EPHCLASS(element: any[][], E_V: any[][], pH: any[][], activity?: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('EPHCLASS'), element, E_V, pH, activity, temp_C);
+export function MASSLOSS(metal_or_alloy: any[][], current_density_uA_cm2: any[][], density_g_cm3?: any[][], equivalent_weight?: any[][]): any[][] {
+  return toExcel(implementation('MASSLOSS'), metal_or_alloy, current_density_uA_cm2, density_g_cm3, equivalent_weight);
 }
 
 /**
- * An element's E–pH diagram as line segments (species A, species B, pH1, E1, pH2, E2) plus the two water lines, for an XY chart. Example: =ECHEM.EPHLINES("Zn") gives {species A, species B, pH1, E1 (V vs SHE), pH2, E2 (V vs SHE); Zn(s), ZnO2 2-, 13.9804, -1.36492, 14, -1.36725; Zn(s), HZnO2-, 10.0177, -1.01328, 13.9804, -1.36492; Zn(s), ZnO(s), 8.76681, -0.939278, 10.0177, -1.01328; … (10 rows)}.
- * @customfunction EPHLINES
- * @helpurl https://localhost:3000/taskpane.html#ref-ephlines
- * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
- * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (default 1e-6); > 0, ≤ 1 (default 0.000001)
- * @param [temp_C] Temperature in °C, 0–100; 0–100 °C (default 25)
- * @param [pH_min] Lowest pH of the lines; −2–16 (default 0)
- * @param [pH_max] Highest pH of the lines; −2–16 (default 14)
- * @returns Rows under a header: species A | species B | pH1 | E1 (V vs SHE) | pH2 | E2 (V vs SHE)
+ * Life in years of a galvanic anode: mass·capacity·utilisation/(current·8760), with published capacities and utilisation factors by name. Example: =ECHEM.ANODELIFE(100, "zinc", 0.5, "long slender stand-off") gives 16.0274.
+ * @customfunction ANODELIFE
+ * @helpurl https://localhost:3000/taskpane.html#ref-anodelife
+ * @param mass_kg Net anode mass in kg; > 0 kg
+ * @param capacity_Ah_kg Electrochemical capacity in Ah/kg, or a material: "Al-Zn-In" (2000), "zinc" (780), "magnesium" (1100), "high-potential magnesium" (1230); > 0 Ah/kg
+ * @param current_A Mean current output in A over the life; > 0 A
+ * @param [utilisation] Utilisation factor in (0, 1], or an anode type: "long slender stand-off" (0.90), "short slender stand-off" (0.85), "long flush-mounted" (0.85), "bracelet" (0.80); > 0, ≤ 1 (default 0.8)
+ * @returns Anode life in years, one row per case
  */
-export function EPHLINES(element: any[][], activity?: any[][], temp_C?: any[][], pH_min?: any[][], pH_max?: any[][]): any[][] {
-  return toExcel(implementation('EPHLINES'), element, activity, temp_C, pH_min, pH_max);
+export function ANODELIFE(mass_kg: any[][], capacity_Ah_kg: any[][], current_A: any[][], utilisation?: any[][]): any[][] {
+  return toExcel(implementation('ANODELIFE'), mass_kg, capacity_Ah_kg, current_A, utilisation);
+}
+
+/**
+ * Mass in g deposited (or dissolved) by a charge through a half-reaction, by Faraday's law m = Q·M·ε/(n·F). Example: =ECHEM.DEPOSIT("Cu2+ + 2 e- -> Cu", 96485.33212) gives 31.773.
+ * @customfunction DEPOSIT
+ * @helpurl https://localhost:3000/taskpane.html#ref-deposit
+ * @param reaction Half-reaction with its electrons, e.g. "Cu2+ + 2 e- -> Cu", or a couple such as "Cu2+/Cu"; the solid is what is deposited or dissolved; one cell or a column of cases
+ * @param charge_C Charge passed in C (A·s; 1 A·h = 3600 C); ≥ 0 C
+ * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default 1)
+ * @returns Mass in g, one row per case
+ */
+export function DEPOSIT(reaction: any[][], charge_C: any[][], efficiency?: any[][]): any[][] {
+  return toExcel(implementation('DEPOSIT'), reaction, charge_C, efficiency);
+}
+
+/**
+ * Time in s to plate a thickness at a current density: t = ρ·d·n·F/(i·M·ε). Example: =ECHEM.PLATETIME("Cu2+ + 2 e- -> Cu", 25, 200, 8.96) gives 3401.11.
+ * @customfunction PLATETIME
+ * @helpurl https://localhost:3000/taskpane.html#ref-platetime
+ * @param reaction Half-reaction with its electrons, e.g. "Cu2+ + 2 e- -> Cu", or a couple such as "Cu2+/Cu"; the solid is what is deposited or dissolved; one cell or a column of cases
+ * @param thickness_um Thickness of the deposit in µm; > 0 µm
+ * @param current_density_A_m2 Current density in A/m² (1 A/dm² = 100 A/m²); > 0 A/m²
+ * @param density_g_cm3 Density of the deposit in g/cm³ (e.g. 8.96 for copper); > 0 g/cm³
+ * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default 1)
+ * @returns Time in s, one row per case
+ */
+export function PLATETIME(reaction: any[][], thickness_um: any[][], current_density_A_m2: any[][], density_g_cm3: any[][], efficiency?: any[][]): any[][] {
+  return toExcel(implementation('PLATETIME'), reaction, thickness_um, current_density_A_m2, density_g_cm3, efficiency);
+}
+
+/**
+ * Thickness in µm plated by a current density over a time: d = i·t·M·ε/(n·F·ρ). Example: =ECHEM.THICKNESS("Ni2+ + 2 e- -> Ni", 300, 3600, 8.9, 0.95) gives 35.0633.
+ * @customfunction THICKNESS
+ * @helpurl https://localhost:3000/taskpane.html#ref-thickness
+ * @param reaction Half-reaction with its electrons, e.g. "Cu2+ + 2 e- -> Cu", or a couple such as "Cu2+/Cu"; the solid is what is deposited or dissolved; one cell or a column of cases
+ * @param current_density_A_m2 Current density in A/m² (1 A/dm² = 100 A/m²); ≥ 0 A/m²
+ * @param time_s Plating time in s; ≥ 0 s
+ * @param density_g_cm3 Density of the deposit in g/cm³ (e.g. 8.96 for copper); > 0 g/cm³
+ * @param [efficiency] Current (Faradaic) efficiency, a fraction in (0, 1]; > 0, ≤ 1 (default 1)
+ * @returns Thickness in µm, one row per case
+ */
+export function THICKNESS(reaction: any[][], current_density_A_m2: any[][], time_s: any[][], density_g_cm3: any[][], efficiency?: any[][]): any[][] {
+  return toExcel(implementation('THICKNESS'), reaction, current_density_A_m2, time_s, density_g_cm3, efficiency);
+}
+
+/**
+ * Theoretical specific capacity in mAh/g of an electrode reaction or active material: n·F/(3.6·M). Example: =ECHEM.CAPACITY("Li+ + e- -> Li") gives 3861.88.
+ * @customfunction CAPACITY
+ * @helpurl https://localhost:3000/taskpane.html#ref-capacity
+ * @param reaction_or_species Electrode half-reaction ("CoO2 + Li+ + e- -> LiCoO2"), couple ("Zn2+/Zn") or active material ("LiFePO4"); one cell or a column of cases
+ * @param [basis] For a reaction: "reduced" (per mass of the solids on the reduced side), "oxidised", or a species of the reaction; for a species alone: its electrons per formula unit (default: "reduced" (a reaction) or the common valence (an element))
+ * @returns Specific capacity in mAh/g, one row per case
+ */
+export function CAPACITY(reaction_or_species: any[][], basis?: any[][]): any[][] {
+  return toExcel(implementation('CAPACITY'), reaction_or_species, basis);
+}
+
+/**
+ * Theoretical specific energy in Wh/kg of a cell reaction, n·F·E°/(3.6·Σ reactant masses), with E° from the potentials table. Example: =ECHEM.SPECENERGY("Pb + PbO2 + 2 H2SO4 -> 2 PbSO4 + 2 H2O") gives 170.225.
+ * @customfunction SPECENERGY
+ * @helpurl https://localhost:3000/taskpane.html#ref-specenergy
+ * @param cell_reaction Cell (discharge) reaction, e.g. "Pb + PbO2 + 2 H2SO4 -> 2 PbSO4 + 2 H2O", or a cell diagram; one cell or a column of cases
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @returns Specific energy in Wh per kg of reactants, one row per case
+ */
+export function SPECENERGY(cell_reaction: any[][], temp_C?: any[][]): any[][] {
+  return toExcel(implementation('SPECENERGY'), cell_reaction, temp_C);
+}
+
+/**
+ * Butler–Volmer current density at an overpotential, with an optional mass-transfer limit; anodic positive, same unit as i0. Example: =ECHEM.BVCURRENT(0.05, 0.001, 0.5) gives 0.00226805.
+ * @customfunction BVCURRENT
+ * @helpurl https://localhost:3000/taskpane.html#ref-bvcurrent
+ * @param eta_V Overpotential η = E − E_eq in V
+ * @param i0 Exchange current density (A/m², mA/cm² …; the result is in the same unit); > 0
+ * @param alpha_a Anodic transfer coefficient αa in (0, 1]; > 0, ≤ 1
+ * @param [alpha_c] Cathodic transfer coefficient αc in (0, 1]; > 0, ≤ 1 (default: 1 − alpha_a)
+ * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default 25)
+ * @param [i_lim] Limiting current density (same unit as i0): one value for both directions, or two (anodic, cathodic magnitude) (default: no mass-transfer limit)
+ * @returns Current density (unit of i0), one row per case
+ */
+export function BVCURRENT(eta_V: any[][], i0: any[][], alpha_a: any[][], alpha_c?: any[][], temp_C?: any[][], i_lim?: any[][]): any[][] {
+  return toExcel(implementation('BVCURRENT'), eta_V, i0, alpha_a, alpha_c, temp_C, i_lim);
+}
+
+/**
+ * Overpotential in V that gives a current density, the inverse of BVCURRENT (exact for αa = αc, else a safeguarded Newton iteration). Example: =ECHEM.OVERPOTENTIAL(0.001, 0.001, 0.5) gives 0.0247271.
+ * @customfunction OVERPOTENTIAL
+ * @helpurl https://localhost:3000/taskpane.html#ref-overpotential
+ * @param i Current density (anodic positive, same unit as i0)
+ * @param i0 Exchange current density (A/m², mA/cm² …; the result is in the same unit); > 0
+ * @param alpha_a Anodic transfer coefficient αa in (0, 1]; > 0, ≤ 1
+ * @param [alpha_c] Cathodic transfer coefficient αc in (0, 1]; > 0, ≤ 1 (default: 1 − alpha_a)
+ * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default 25)
+ * @param [i_lim] Limiting current density (same unit as i0): one value for both directions, or two (anodic, cathodic magnitude) (default: no mass-transfer limit)
+ * @returns Overpotential in V, one row per case
+ */
+export function OVERPOTENTIAL(i: any[][], i0: any[][], alpha_a: any[][], alpha_c?: any[][], temp_C?: any[][], i_lim?: any[][]): any[][] {
+  return toExcel(implementation('OVERPOTENTIAL'), i, i0, alpha_a, alpha_c, temp_C, i_lim);
+}
+
+/**
+ * Tafel slope b = ln10·RT/(α·n·F) in V per decade of current. Example: =ECHEM.TAFELSLOPE(0.5) gives 0.118319.
+ * @customfunction TAFELSLOPE
+ * @helpurl https://localhost:3000/taskpane.html#ref-tafelslope
+ * @param alpha Transfer coefficient α in (0, 1]; > 0, ≤ 1
+ * @param [temp_C] Temperature in °C (−80 to 200 °C); one cell or a column of cases; −80–200 °C (default 25)
+ * @param [n] Electrons in the rate-determining step; > 0 (default 1)
+ * @returns Tafel slope in V/decade, one row per case
+ */
+export function TAFELSLOPE(alpha: any[][], temp_C?: any[][], n?: any[][]): any[][] {
+  return toExcel(implementation('TAFELSLOPE'), alpha, temp_C, n);
+}
+
+/**
+ * Corrosion potential and current (two cells) where an anodic and a cathodic Tafel reaction balance (Wagner–Traud), solved exactly in log space. Example: =ECHEM.MIXEDPOTENTIAL(-0.5, 0.000001, 0.06, 0, 1e-7, 0.12) gives {-0.373333, 0.000129155}.
+ * @customfunction MIXEDPOTENTIAL
+ * @helpurl https://localhost:3000/taskpane.html#ref-mixedpotential
+ * @param E_a Equilibrium potential of the anodic reaction (e.g. metal dissolution) in V
+ * @param i0_a Exchange current density of the anodic reaction (any unit; i_corr has the same); > 0
+ * @param b_a Anodic Tafel slope in V/decade (positive, e.g. 0.06); > 0 V/decade
+ * @param E_c Equilibrium potential of the cathodic reaction (e.g. hydrogen evolution, oxygen reduction) in V
+ * @param i0_c Exchange current density of the cathodic reaction (same unit as i0_a); > 0
+ * @param b_c Cathodic Tafel slope in V/decade (positive, e.g. 0.12); > 0 V/decade
+ * @returns Two cells per case: E_corr in V (the scale of E_a and E_c) and i_corr (the unit of i0)
+ */
+export function MIXEDPOTENTIAL(E_a: any[][], i0_a: any[][], b_a: any[][], E_c: any[][], i0_c: any[][], b_c: any[][]): any[][] {
+  return toExcel(implementation('MIXEDPOTENTIAL'), E_a, i0_a, b_a, E_c, i0_c, b_c);
+}
+
+/**
+ * The activity of one species, or the pH, that gives a measured potential (the Nernst equation solved exactly in log space). Example: =ECHEM.SOLVEFOR("2 H+ + 2 e- -> H2", -0.2, "pH", "H2", 1) gives 3.3807.
+ * @customfunction SOLVEFOR
+ * @helpurl https://localhost:3000/taskpane.html#ref-solvefor
+ * @param reaction Half-reaction (a reduction), couple such as "Cu2+/Cu", cell diagram such as "Zn | Zn2+ || Cu2+ | Cu", or full reaction; one cell or a column of cases
+ * @param E_V Measured potential in V vs SHE (or the cell EMF)
+ * @param unknown The species to solve for ("Cu2+", "left:Ag+") or "pH"
+ * @param [species] Names of the species whose values follow, one per column of values, e.g. "Cu2+", "O2", "pH" or "left:Ag+" (default: standard state)
+ * @param [values] Activities: mol/L for solutes, bar for gases, the pH under a "pH" column; one row per case (default: none)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
+ * @returns Activity (mol/L; bar for a gas) or pH, one row per case
+ */
+export function SOLVEFOR(reaction: any[][], E_V: any[][], unknown: any[][], species?: any[][], values?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
+  return toExcel(implementation('SOLVEFOR'), reaction, E_V, unknown, species, values, temp_C, table);
+}
+
+/**
+ * Liquid-junction potential E_j = φ(right) − φ(left) in V by the Henderson equation, from limiting ionic conductivities at 25 °C (CRC Handbook). Example: =ECHEM.JUNCTION({"HCl","KCl"}, {0.1,0}, {0,0.1}) gives 0.0268516.
+ * @customfunction JUNCTION
+ * @helpurl https://localhost:3000/taskpane.html#ref-junction
+ * @param species Ions ("H+", "Cl-") or strong electrolytes by formula ("HCl", "KCl"), one per column
+ * @param left_values Concentrations in mol/L in the left solution, one per species; one row per case
+ * @param right_values Concentrations in mol/L in the right solution; one row per case
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @returns E_j in V, one row per case
+ */
+export function JUNCTION(species: any[][], left_values: any[][], right_values: any[][], temp_C?: any[][]): any[][] {
+  return toExcel(implementation('JUNCTION'), species, left_values, right_values, temp_C);
+}
+
+/**
+ * Potential in V of an ion-selective electrode by the Nikolsky–Eisenman equation, E = E0 + (S/z)·log10(a_i + Σ K_ij·a_j^(z_i/z_j)). Example: =ECHEM.ISERESPONSE(0.2, 0.05916, {"K+","Na+"}, {0.0001,0.1}, 0.001) gives -0.0188311.
+ * @customfunction ISERESPONSE
+ * @helpurl https://localhost:3000/taskpane.html#ref-iseresponse
+ * @param E0_V The electrode’s E0 in V (from calibration)
+ * @param slope_V Slope in V per decade for a singly charged ion (0.05916 ideal at 25 °C); divided by z of the primary ion; in V/decade
+ * @param primary The primary ion, then the interfering ions, e.g. "K+", "Na+", "NH4+"
+ * @param activities Activities of the primary and interfering ions, in that order; one row per case
+ * @param [selectivities] Selectivity coefficients K_ij, one per interfering ion (default: none (no interfering ions))
+ * @returns E in V, one row per case
+ */
+export function ISERESPONSE(E0_V: any[][], slope_V: any[][], primary: any[][], activities: any[][], selectivities?: any[][]): any[][] {
+  return toExcel(implementation('ISERESPONSE'), E0_V, slope_V, primary, activities, selectivities);
 }
 
 // Excel finds each function by its id. Guarded so that the page also loads outside Excel.
@@ -354,7 +525,19 @@ if (typeof CustomFunctions !== 'undefined') {
   CustomFunctions.associate('SOURCE', SOURCE);
   CustomFunctions.associate('LISTTABLE', LISTTABLE);
   CustomFunctions.associate('CHECKTABLE', CHECKTABLE);
-  CustomFunctions.associate('PREDOMINANT', PREDOMINANT);
-  CustomFunctions.associate('EPHCLASS', EPHCLASS);
-  CustomFunctions.associate('EPHLINES', EPHLINES);
+  CustomFunctions.associate('CORRATE', CORRATE);
+  CustomFunctions.associate('MASSLOSS', MASSLOSS);
+  CustomFunctions.associate('ANODELIFE', ANODELIFE);
+  CustomFunctions.associate('DEPOSIT', DEPOSIT);
+  CustomFunctions.associate('PLATETIME', PLATETIME);
+  CustomFunctions.associate('THICKNESS', THICKNESS);
+  CustomFunctions.associate('CAPACITY', CAPACITY);
+  CustomFunctions.associate('SPECENERGY', SPECENERGY);
+  CustomFunctions.associate('BVCURRENT', BVCURRENT);
+  CustomFunctions.associate('OVERPOTENTIAL', OVERPOTENTIAL);
+  CustomFunctions.associate('TAFELSLOPE', TAFELSLOPE);
+  CustomFunctions.associate('MIXEDPOTENTIAL', MIXEDPOTENTIAL);
+  CustomFunctions.associate('SOLVEFOR', SOLVEFOR);
+  CustomFunctions.associate('JUNCTION', JUNCTION);
+  CustomFunctions.associate('ISERESPONSE', ISERESPONSE);
 }

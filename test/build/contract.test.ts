@@ -126,6 +126,22 @@ const SAMPLES: Record<string, unknown[]> = {
       ['Cu2+ + 2 e- -> Cu', 0.34, '', 'my lab'],
     ],
   ],
+  // Faraday, corrosion, kinetics and measurement functions
+  DEPOSIT: [cell('Cu2+ + 2 e- -> Cu'), [[1000], [3600]], null],
+  PLATETIME: [cell('Cu2+ + 2 e- -> Cu'), cell(25), cell(200), cell(8.96), cell(0.98)],
+  THICKNESS: [cell('Ni2+ + 2 e- -> Ni'), cell(300), cell(3600), cell(8.9), null],
+  CAPACITY: [[['Li+ + e- -> Li'], ['LiFePO4']], [[null], [1]]],
+  SPECENERGY: [cell('Pb + PbO2 + 2 H2SO4 -> 2 PbSO4 + 2 H2O'), null],
+  CORRATE: [[['Fe'], ['304']], cell(1), null, null],
+  MASSLOSS: [cell('carbon steel'), cell(4.2), null, null],
+  ANODELIFE: [cell(100), cell('zinc'), cell(0.5), cell('long slender stand-off')],
+  BVCURRENT: [[[-0.1], [0], [0.1]], cell(1e-3), cell(0.5), null, null, null],
+  OVERPOTENTIAL: [cell(1e-3), cell(1e-3), cell(0.5), null, null, cell(0.01)],
+  TAFELSLOPE: [cell(0.5), null, null],
+  MIXEDPOTENTIAL: [cell(-0.5), cell(1e-6), cell(0.06), cell(0), cell(1e-7), cell(0.12)],
+  SOLVEFOR: [cell('2 H+ + 2 e- -> H2'), cell(-0.2), cell('pH'), cell('H2'), cell(1), null, null],
+  JUNCTION: [[['HCl', 'KCl']], [[0.1, 0]], [[0, 0.1]], null],
+  ISERESPONSE: [cell(0.2), cell(0.05916), [['K+', 'Na+']], [[1e-4, 0.1]], [[1e-3]]],
 };
 
 let metadata: MetaFunction[];

@@ -18,6 +18,7 @@
  */
 import { CATALOGUE, type Arg, type ErrorCode } from '../../src/functions/catalogue';
 import { domainOf, isPerCase, kindOf, unitOf, type KindName } from '../../src/functions/spec/kinds';
+import { BEYOND_EQUILIBRIUM_CASES } from './badInputCasesBeyond';
 import type { ParamSpec } from '../../src/functions/spec/types';
 
 /** The kinds of bad input a user can give. */
@@ -1602,10 +1603,11 @@ function derivedCases(): BadInputCase[] {
 }
 
 const key = (c: BadInputCase) => `${c.fn}|${c.argument}|${c.input}`;
-const HAND_KEYS = new Set(HAND_CASES.map(key));
+const ALL_HAND_CASES: readonly BadInputCase[] = [...HAND_CASES, ...BEYOND_EQUILIBRIUM_CASES];
+const HAND_KEYS = new Set(ALL_HAND_CASES.map(key));
 
 /** Every case: the derived ones that no hand case replaces, then the hand cases. */
 export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   ...derivedCases().filter((c) => !HAND_KEYS.has(key(c))),
-  ...HAND_CASES,
+  ...ALL_HAND_CASES,
 ];

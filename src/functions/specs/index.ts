@@ -10,3 +10,7 @@ export { REFERENCE_SPECS } from './references';
 export { TABLE_SPECS } from './table';
 export { SOLUTIONS_SPECS } from './solutions';
 export { EPH_SPECS } from './eph';
+export { FARADAY_SPECS } from './faraday';
+export { CORROSION_SPECS } from './corrosion';
+export { KINETICS_SPECS } from './kinetics';
+export { MEASUREMENT_SPECS } from './measurement';

@@ -1,0 +1,222 @@
+/**
+ * Electrode kinetics: the Butler–Volmer equation with an optional mass-transfer
+ * limit, its inverse, and the Tafel slope.
+ *
+ * Sign convention (IUPAC): anodic current and overpotential positive.
+ *   i = i0 · [exp(αa·f·η) − exp(−αc·f·η)],  f = F/(RT),  αc = 1 − αa by default.
+ * With limiting currents i_lim,a (anodic) and i_lim,c (cathodic, magnitude), the
+ * surface concentrations scale the two terms by (1 − i/i_lim,a) and (1 + i/i_lim,c)
+ * (Bard & Faulkner, Electrochemical Methods, 2nd ed. 2001, eq. 3.4.10, from memory;
+ * there written with cathodic current positive), which solved for i gives
+ *   i = i0·[e^{αa f η} − e^{−αc f η}] / (1 + i0·e^{αa f η}/i_lim,a + i0·e^{−αc f η}/i_lim,c).
+ * A limit left out is infinite (its term drops). The form is evaluated with the
+ * larger exponent factored out, so it never overflows for |η| ≤ 10 V.
+ *
+ * Tafel slope b = ln10·RT/(α·n·F), V per decade (Bard & Faulkner §3.4.3).
+ */
+import { EngineError } from '../errors';
+import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, ZERO_CELSIUS_K } from '../constants';
+import { celsiusInRange, finiteNumber, positiveNumber, potentialInVolts } from '../measurement/guards';
+
+/** Temperature range of the kinetics functions, °C (liquid electrolytes). */
+export const KINETICS_RANGE_C: readonly [number, number] = [-80, 200];
+
+/** Kinetic parameters of one electrode reaction. */
+export interface KineticParams {
+  /** exchange current density (any unit; results are in the same unit) */
+  readonly i0: number;
+  readonly alphaA: number;
+  readonly alphaC: number;
+  readonly tempC: number;
+  /** anodic limiting current density (positive), or Infinity */
+  readonly iLimA: number;
+  /** cathodic limiting current density (magnitude, positive), or Infinity */
+  readonly iLimC: number;
+}
+
+function transferCoefficient(x: number, arg: string): number {
+  finiteNumber(x, arg);
+  if (!(x > 0 && x <= 1))
+    throw new EngineError('argument', `${arg} must be a transfer coefficient in (0, 1]; got ${x}.`, arg);
+  return x;
+}
+
+/**
+ * Check and complete the parameters: αc defaults to 1 − αa; limits default to none.
+ *
+ * @throws EngineError (`argument`) for i0 ≤ 0, α outside (0, 1], a limit ≤ 0, temp_C outside −80…200 °C
+ * @example
+ * kineticParams(1e-3, 0.5).alphaC // 0.5
+ */
+export function kineticParams(
+  i0: number,
+  alphaA: number,
+  alphaC?: number | null,
+  tempC = 25,
+  iLimA?: number | null,
+  iLimC?: number | null,
+): KineticParams {
+  positiveNumber(i0, 'i0', 'exchange current density');
+  transferCoefficient(alphaA, 'alpha_a');
+  let ac: number;
+  if (alphaC === null || alphaC === undefined) {
+    if (alphaA >= 1)
+      throw new EngineError(
+        'argument',
+        'alpha_a = 1 leaves alpha_c = 1 − alpha_a = 0; give alpha_c, or an alpha_a below 1.',
+        'alpha_a',
+      );
+    ac = 1 - alphaA;
+  } else ac = transferCoefficient(alphaC, 'alpha_c');
+  celsiusInRange(tempC, 'temp_C', KINETICS_RANGE_C);
+  const la =
+    iLimA === null || iLimA === undefined
+      ? Infinity
+      : positiveNumber(iLimA, 'i_lim', 'anodic limiting current');
+  const lc =
+    iLimC === null || iLimC === undefined
+      ? Infinity
+      : positiveNumber(iLimC, 'i_lim', 'cathodic limiting current');
+  return { i0, alphaA, alphaC: ac, tempC, iLimA: la, iLimC: lc };
+}
+
+function fOf(tempC: number): number {
+  return FARADAY_C_PER_MOL / (GAS_CONSTANT_J_PER_MOL_K * (tempC + ZERO_CELSIUS_K));
+}
+
+/** Current density at an overpotential, without argument checks. */
+function currentAt(p: KineticParams, f: number, eta: number): number {
+  const a = p.alphaA * f * eta;
+  const c = -p.alphaC * f * eta;
+  // factor out the larger exponential; expm1 keeps the digits near η = 0
+  if (a >= c) {
+    const r = Math.exp(c - a);
+    const num = -p.i0 * Math.expm1(c - a);
+    const den = Math.exp(-a) + p.i0 / p.iLimA + (p.i0 * r) / p.iLimC;
+    return num / den;
+  }
+  const r = Math.exp(a - c);
+  const num = p.i0 * Math.expm1(a - c);
+  const den = Math.exp(-c) + (p.i0 * r) / p.iLimA + p.i0 / p.iLimC;
+  return num / den;
+}
+
+/**
+ * Butler–Volmer current density at an overpotential, with optional limits.
+ *
+ * Domain: |eta_V| ≤ 10 V; i0 > 0; α in (0, 1]; temp_C −80…200 °C.
+ * Precision: float64, relative ~1e-15 (the exponentials are factored).
+ *
+ * @example
+ * butlerVolmerCurrent(0.05, kineticParams(1e-3, 0.5)) // 2.2681e-3 = 2·i0·sinh(0.5·f·0.05)
+ */
+export function butlerVolmerCurrent(etaV: number, p: KineticParams): number {
+  potentialInVolts(etaV, 'eta_V');
+  const i = currentAt(p, fOf(p.tempC), etaV);
+  if (!Number.isFinite(i))
+    throw new EngineError(
+      'range',
+      'The current density is beyond the number range; check i0 and eta_V.',
+      'eta_V',
+    );
+  return i;
+}
+
+/** Overpotentials searched for the inverse, V. */
+const ETA_SEARCH_V = 50;
+
+/**
+ * Overpotential (V) that gives a current density: the inverse of
+ * {@link butlerVolmerCurrent}. Exact (asinh) for αa = αc without limits; otherwise a
+ * bracketed Newton iteration safeguarded by bisection (the current is strictly
+ * increasing in η, so the root is unique).
+ *
+ * Domain: −i_lim,c < i < i_lim,a (strictly); the other domains as for the current.
+ * Precision: |Δη| below 1e-15 V·max(1, |η|) or the float64 step.
+ *
+ * @throws EngineError (`argument`) where i is at or beyond a limiting current
+ * @example
+ * overpotentialV(1e-3, kineticParams(1e-3, 0.5)) // 0.024727 V = asinh(0.5)/(0.5·f)
+ */
+export function overpotentialV(i: number, p: KineticParams): number {
+  finiteNumber(i, 'i');
+  if (i >= p.iLimA)
+    throw new EngineError(
+      'argument',
+      `i = ${i} is at or beyond the anodic limiting current ${p.iLimA}; no overpotential gives it.`,
+      'i',
+    );
+  if (i <= -p.iLimC)
+    throw new EngineError(
+      'argument',
+      `i = ${i} is at or beyond the cathodic limiting current −${p.iLimC}; no overpotential gives it.`,
+      'i',
+    );
+  const f = fOf(p.tempC);
+  if (i === 0) return 0;
+  if (p.alphaA === p.alphaC && p.iLimA === Infinity && p.iLimC === Infinity) {
+    return Math.asinh(i / (2 * p.i0)) / (p.alphaA * f);
+  }
+  // bracket [lo, hi] with g(lo) < i < g(hi), g(0) = 0
+  let lo: number;
+  let hi: number;
+  if (i > 0) {
+    lo = 0;
+    hi = p.iLimA === Infinity ? Math.log1p(i / p.i0) / (p.alphaA * f) : 1e-3;
+    while (currentAt(p, f, hi) < i) {
+      lo = hi;
+      hi *= 2;
+      if (hi > ETA_SEARCH_V) throw beyondSearch(i);
+    }
+  } else {
+    hi = 0;
+    lo = p.iLimC === Infinity ? -Math.log1p(-i / p.i0) / (p.alphaC * f) : -1e-3;
+    while (currentAt(p, f, lo) > i) {
+      hi = lo;
+      lo *= 2;
+      if (lo < -ETA_SEARCH_V) throw beyondSearch(i);
+    }
+  }
+  let eta = (lo + hi) / 2;
+  for (let k = 0; k < 200; k++) {
+    const g = currentAt(p, f, eta) - i;
+    if (g === 0) return eta;
+    if (g > 0) hi = eta;
+    else lo = eta;
+    // derivative by a small central difference (the current is smooth and monotone)
+    const h = 1e-7;
+    const d = (currentAt(p, f, eta + h) - currentAt(p, f, eta - h)) / (2 * h);
+    let next = d > 0 && Number.isFinite(d) ? eta - g / d : NaN;
+    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
+    if (
+      Math.abs(next - eta) <= 1e-15 * Math.max(1, Math.abs(eta)) ||
+      hi - lo <= 1e-15 * Math.max(1, Math.abs(eta))
+    )
+      return next;
+    eta = next;
+  }
+  return eta;
+}
+
+function beyondSearch(i: number): EngineError {
+  return new EngineError(
+    'range',
+    `The overpotential for i = ${i} is beyond ±${ETA_SEARCH_V} V; check i, i0 and the limits.`,
+    'i',
+  );
+}
+
+/**
+ * Tafel slope b = ln10·RT/(α·n·F), V per decade.
+ *
+ * Domain: α in (0, 1]; n > 0 (default 1); temp_C −80…200 °C.
+ *
+ * @example
+ * tafelSlopeV(0.5) // 0.118319 V/decade at 25 °C
+ */
+export function tafelSlopeV(alpha: number, tempC = 25, n = 1): number {
+  transferCoefficient(alpha, 'alpha');
+  celsiusInRange(tempC, 'temp_C', KINETICS_RANGE_C);
+  positiveNumber(n, 'n', 'electrons');
+  return (Math.LN10 * GAS_CONSTANT_J_PER_MOL_K * (tempC + ZERO_CELSIUS_K)) / (alpha * n * FARADAY_C_PER_MOL);
+}
