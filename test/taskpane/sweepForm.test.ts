@@ -21,8 +21,8 @@ function needed(text: string) {
 describe('mergeSpeciesRows', () => {
   test('fills the rows from the reaction at unit activity', () => {
     expect(mergeSpeciesRows([], needed('Fe3+/Fe2+'))).toEqual([
-      { name: 'Fe3+', value: '1', origin: 'reaction' },
-      { name: 'Fe2+', value: '1', origin: 'reaction' },
+      { name: 'Fe3+', value: '1', origin: 'reaction', gas: false },
+      { name: 'Fe2+', value: '1', origin: 'reaction', gas: false },
     ]);
   });
   test('keeps typed values and the user own rows; drops rows the new reaction does not need', () => {
@@ -32,7 +32,7 @@ describe('mergeSpeciesRows', () => {
       { name: 'Cl-', value: '0.5', origin: 'user' },
     ];
     expect(mergeSpeciesRows(rows, needed('Fe2+ + 2 e- -> Fe'))).toEqual([
-      { name: 'Fe2+', value: '0.01', origin: 'reaction' },
+      { name: 'Fe2+', value: '0.01', origin: 'reaction', gas: false },
       { name: 'Cl-', value: '0.5', origin: 'user' },
     ]);
   });
