@@ -43,7 +43,7 @@
     const want = parseAddress(address);
     const cells = {};
     sheet.ranges.forEach(function (r) {
-      if (!r.values) return;
+      if (r.read || !r.values) return;
       const at = parseAddress(r.address);
       r.values.forEach(function (row, i) {
         row.forEach(function (v, j) {
