@@ -4,7 +4,7 @@
  * and Office failures reaching the user's status area.
  */
 import { BUILTIN_POTENTIALS } from '../../src/engine/index';
-import { PartialWriteError, writeNewSheet } from '../../src/taskpane/officeActions';
+import { PartialWriteError, splitRangeRef, writeNewSheet } from '../../src/taskpane/officeActions';
 import { planPotentialsSheet, POTENTIALS_HEADER } from '../../src/taskpane/potentialsSheet';
 import { planExampleSheet } from '../../src/taskpane/reference';
 import { runReported, type StatusKind } from '../../src/taskpane/status';
@@ -290,5 +290,17 @@ describe('Office failures reach the user', () => {
     expect(error).toBeInstanceOf(PartialWriteError);
     expect((error as PartialWriteError).cause).toBe(cause);
     expect((error as PartialWriteError).sheetName).toBe('E vs log a(Cu2+)');
+  });
+});
+
+describe('splitRangeRef (the table range the preview reads)', () => {
+  test.each([
+    ["'Potentials (2)'!A2:D115", { sheet: 'Potentials (2)', address: 'A2:D115' }],
+    ["'Bob''s data'!A2:D9", { sheet: "Bob's data", address: 'A2:D9' }],
+    ['Potentials!$A$2:$D$115', { sheet: 'Potentials', address: '$A$2:$D$115' }],
+    ['A2:D20', { sheet: null, address: 'A2:D20' }],
+    ['MyTable', { name: 'MyTable' }],
+  ])('%s', (ref, parts) => {
+    expect(splitRangeRef(ref)).toEqual(parts);
   });
 });

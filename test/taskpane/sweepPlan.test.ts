@@ -16,6 +16,8 @@ import {
   HEADER_ROW,
   linearSteps,
   logSteps,
+  missingSummary,
+  sentenceCase,
   MAX_POINTS,
   planSweep,
   readNumber,
@@ -349,5 +351,49 @@ describe('planSweep: layout and formula', () => {
     expect(plan.sheetName).toBe('E vs log a(Cu2+) (3)');
     expect(plan.summary).toContain('=ECHEM.POTENTIAL(B1,A6,A7:A31,B7:B31) in D7');
     expect(plan.freezeRows).toBe(HEADER_ROW);
+  });
+});
+
+describe('messages: sentence case, and what the write button says', () => {
+  test('sentenceCase capitalises and ends with a full stop', () => {
+    expect(sentenceCase('reaction is missing: give a reaction')).toBe('Reaction is missing: give a reaction.');
+    expect(sentenceCase('Already fine.')).toBe('Already fine.');
+    expect(sentenceCase('')).toBe('');
+  });
+
+  test('missingSummary names the inputs to fix, without repeating their messages', () => {
+    const e = (label: string) => ({ field: label.toLowerCase(), label, message: `Message about ${label}.` });
+    expect(missingSummary([])).toBe('');
+    expect(missingSummary([e('From')])).toBe('Not ready: From needs fixing (see the message beside it).');
+    expect(missingSummary([e('From'), e('To'), e('Cases')])).toBe(
+      'Not ready: From, To and Cases need fixing (see the messages beside them).',
+    );
+  });
+
+  test('a comma locale reads "0,01" in every number box; a point locale says to use a point', () => {
+    const r = readSweepForm(
+      form({ from: '0,001', to: '0,1', species: [{ name: 'Cu2+', value: '0,5' }], variable: { kind: 'activity', species: 'Cu2+', scale: 'linear' } }),
+      { decimalComma: true },
+    );
+    expect(r.ok && [r.input.from, r.input.to]).toEqual([0.001, 0.1]);
+    const refused = readSweepForm(form({ from: '0,001' }));
+    expect(refused).toEqual({
+      ok: false,
+      errors: [
+        {
+          field: 'from',
+          label: 'From',
+          message: 'From "0,001" is not a number: write a number such as 0.01, 1e-6 or 10^-6 (with a decimal point).',
+        },
+      ],
+    });
+  });
+
+  test('the reaction check given is used as it is (checked once per change)', () => {
+    const check = checkReaction('Fe3+/Fe2+');
+    const r = readSweepForm(form({ reaction: 'Fe3+/Fe2+', species: [{ name: 'Fe2+', value: '1' }], variable: { kind: 'activity', species: 'Fe3+', scale: 'log' } }), { check });
+    expect(r.ok).toBe(true);
+    const bad = readSweepForm(form(), { check: { ok: false, message: 'Given check.', position: null } });
+    expect(bad).toEqual({ ok: false, errors: [{ field: 'reaction', label: 'Reaction', message: 'Given check.' }] });
   });
 });
