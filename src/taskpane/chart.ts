@@ -16,7 +16,12 @@ export interface ChartModel {
   readonly width: number;
   readonly height: number;
   /** The plot area: x from left to right, y from top to bottom. */
-  readonly plot: { readonly left: number; readonly top: number; readonly right: number; readonly bottom: number };
+  readonly plot: {
+    readonly left: number;
+    readonly top: number;
+    readonly right: number;
+    readonly bottom: number;
+  };
   readonly xTicks: readonly Tick[];
   readonly yTicks: readonly Tick[];
   /** The data as SVG polyline points ("x,y x,y …"). */
@@ -54,7 +59,10 @@ export function niceTicks(min: number, max: number, target = 5): number[] {
 /** A tick label: as many decimals as the step needs, with a true minus sign. */
 export function tickLabel(value: number, step: number): string {
   const decimals = Math.max(0, Math.min(6, -Math.floor(Math.log10(step) + 1e-9)));
-  return value.toFixed(decimals).replace(/^-(?=0(?:\.0+)?$)/, '').replace('-', '\u2212');
+  return value
+    .toFixed(decimals)
+    .replace(/^-(?=0(?:\.0+)?$)/, '')
+    .replace('-', '\u2212');
 }
 
 /**
@@ -66,7 +74,12 @@ export function tickLabel(value: number, step: number): string {
  */
 export function chartModel(
   points: readonly { readonly x: number; readonly y: number }[],
-  opts: { readonly width: number; readonly height?: number; readonly xTitle: string; readonly yTitle: string },
+  opts: {
+    readonly width: number;
+    readonly height?: number;
+    readonly xTitle: string;
+    readonly yTitle: string;
+  },
 ): ChartModel | null {
   const pts = points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
   if (pts.length < 2) return null;

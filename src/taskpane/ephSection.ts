@@ -35,7 +35,18 @@ export interface EphDrawRequest {
 export type EphRenderer = (request: EphDrawRequest) => string;
 
 /** The elements the section offers where the engine exports no list of its own (`EPH_ELEMENTS`). */
-export const DEFAULT_EPH_ELEMENTS: readonly string[] = ['Fe', 'Cu', 'Zn', 'Al', 'Ni', 'Cr', 'Pb', 'Sn', 'Mg', 'Ag'];
+export const DEFAULT_EPH_ELEMENTS: readonly string[] = [
+  'Fe',
+  'Cu',
+  'Zn',
+  'Al',
+  'Ni',
+  'Cr',
+  'Pb',
+  'Sn',
+  'Mg',
+  'Ag',
+];
 
 /** What the engine and catalogue offer the section. */
 export interface EphSupport {
@@ -47,13 +58,17 @@ export interface EphSupport {
 }
 
 /** The engine's renderer and the catalogue's EPHLINES, where present. */
-export function ephSupport(source: Record<string, unknown> = engine as unknown as Record<string, unknown>): EphSupport {
+export function ephSupport(
+  source: Record<string, unknown> = engine as unknown as Record<string, unknown>,
+): EphSupport {
   const r = source['renderEphSvg'];
   const probe = callFunction('EPHLINES', ['Fe'])[0]?.[0];
   const missing = isCellError(probe) && /There is no function/.test(probe.message);
   const list = source['EPH_ELEMENTS'];
   const elements =
-    Array.isArray(list) && list.every((e) => typeof e === 'string') ? (list as string[]) : DEFAULT_EPH_ELEMENTS;
+    Array.isArray(list) && list.every((e) => typeof e === 'string')
+      ? (list as string[])
+      : DEFAULT_EPH_ELEMENTS;
   return { render: typeof r === 'function' ? (r as EphRenderer) : null, lines: !missing, elements };
 }
 
@@ -78,7 +93,8 @@ export function readEphForm(
     errors.push({
       field: 'element',
       label: 'Element',
-      message: element === '' ? 'Choose an element.' : `"${element}" is not an element symbol (for example Fe).`,
+      message:
+        element === '' ? 'Choose an element.' : `"${element}" is not an element symbol (for example Fe).`,
     });
   }
   const activity = readNumber(form.activity, decimalComma);
@@ -127,7 +143,9 @@ export function ephSheetPlan(
       {
         address: 'C2',
         values: [
-          ['Activity of the dissolved species of the element (dimensionless; for a dilute ideal solution, mol/L divided by 1 mol/L).'],
+          [
+            'Activity of the dissolved species of the element (dimensionless; for a dilute ideal solution, mol/L divided by 1 mol/L).',
+          ],
         ],
         italic: true,
       },
@@ -148,13 +166,15 @@ export function ephSheetPlan(
 export function sanitizedSvg(svgText: string, doc: Document): SVGSVGElement | null {
   const parsed = new DOMParser().parseFromString(svgText, 'image/svg+xml');
   const root = parsed.documentElement;
-  if (root.nodeName.toLowerCase() !== 'svg' || parsed.getElementsByTagName('parsererror').length > 0) return null;
+  if (root.nodeName.toLowerCase() !== 'svg' || parsed.getElementsByTagName('parsererror').length > 0)
+    return null;
   for (const bad of Array.from(root.querySelectorAll('script, foreignObject'))) bad.remove();
   for (const el of [root, ...Array.from(root.querySelectorAll('*'))]) {
     for (const attr of Array.from(el.attributes)) {
       const name = attr.name.toLowerCase();
       if (name.startsWith('on')) el.removeAttribute(attr.name);
-      if ((name === 'href' || name === 'xlink:href') && !attr.value.startsWith('#')) el.removeAttribute(attr.name);
+      if ((name === 'href' || name === 'xlink:href') && !attr.value.startsWith('#'))
+        el.removeAttribute(attr.name);
     }
   }
   return doc.importNode(root, true) as unknown as SVGSVGElement;

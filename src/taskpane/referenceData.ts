@@ -72,7 +72,10 @@ export function searchReference<T extends Pick<ReferenceItem, 'searchText'>>(
   items: readonly T[],
   query: string,
 ): T[] {
-  const words = query.toLowerCase().split(/\s+/).filter((w) => w !== '');
+  const words = query
+    .toLowerCase()
+    .split(/\s+/)
+    .filter((w) => w !== '');
   return items.filter((i) => words.every((w) => i.searchText.includes(w)));
 }
 
@@ -82,7 +85,10 @@ export function searchReference<T extends Pick<ReferenceItem, 'searchText'>>(
  * @throws Error saying why the list could not be loaded
  */
 export async function loadReference(
-  fetchImpl: (url: string, init: { credentials: 'same-origin' }) => Promise<{
+  fetchImpl: (
+    url: string,
+    init: { credentials: 'same-origin' },
+  ) => Promise<{
     ok: boolean;
     status: number;
     statusText: string;
@@ -90,6 +96,7 @@ export async function loadReference(
   }> = (url, init) => fetch(url, init),
 ): Promise<ReferenceItem[]> {
   const response = await fetchImpl(REFERENCE_URL, { credentials: 'same-origin' });
-  if (!response.ok) throw new Error(`${REFERENCE_URL} answered ${response.status} ${response.statusText}`.trim());
+  if (!response.ok)
+    throw new Error(`${REFERENCE_URL} answered ${response.status} ${response.statusText}`.trim());
   return referenceItems(await response.json());
 }

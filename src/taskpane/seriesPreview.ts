@@ -56,7 +56,11 @@ export interface SeriesSlope {
  * series (E is linear in log a and in pH), the mean slope for a temperature series; null
  * for a linear activity series or where an end failed.
  */
-export function seriesSlope(input: SweepInput, layout: SweepLayout, values: readonly PreviewValue[]): SeriesSlope | null {
+export function seriesSlope(
+  input: SweepInput,
+  layout: SweepLayout,
+  values: readonly PreviewValue[],
+): SeriesSlope | null {
   const v = input.variable;
   if (v.kind === 'activity' && v.scale !== 'log') return null;
   const first = values[0];
@@ -65,7 +69,8 @@ export function seriesSlope(input: SweepInput, layout: SweepLayout, values: read
   const x1 = layout.x[layout.x.length - 1];
   if (!first?.ok || !last?.ok || x0 === undefined || x1 === undefined || x0 === x1) return null;
   const slopeV = (last.e - first.e) / (x1 - x0);
-  const per = v.kind === 'pH' ? 'V per pH unit' : v.kind === 'temperature' ? 'V per °C (mean)' : 'V per decade';
+  const per =
+    v.kind === 'pH' ? 'V per pH unit' : v.kind === 'temperature' ? 'V per °C (mean)' : 'V per decade';
   return { slopeV, per };
 }
 

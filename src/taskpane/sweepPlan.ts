@@ -556,7 +556,10 @@ function activityLabel(name: string): { a: string; gas: boolean } {
  * chart. `check` is the reaction check already made for `input.reaction` (checked here
  * where it is not given).
  */
-export function planSweep(input: SweepInput, check: ReactionCheck = checkReaction(input.reaction)): SweepLayout {
+export function planSweep(
+  input: SweepInput,
+  check: ReactionCheck = checkReaction(input.reaction),
+): SweepLayout {
   const v = input.variable;
   const steps =
     v.kind === 'activity' && v.scale === 'log'

@@ -507,7 +507,8 @@ async function runPreview(input: SweepInput, layout: SweepLayout, run: number): 
       } catch (error) {
         tableNote = `with the built-in table, as ${input.table} could not be read (${error instanceof Error ? error.message : String(error)})`;
       }
-    } else tableNote = `with the built-in table (outside Excel ${input.table} cannot be read; the sheet uses it)`;
+    } else
+      tableNote = `with the built-in table (outside Excel ${input.table} cannot be read; the sheet uses it)`;
   }
   if (run !== previewRun) return;
   const values = previewValues(input, layout, table);
@@ -550,18 +551,28 @@ function drawChart(model: ChartModel, titleId: string): SVGSVGElement {
   });
   root.append(svg('title', { id: titleId }, model.summary));
   const { left, top, right, bottom } = model.plot;
-  root.append(svg('rect', { x: left, y: top, width: right - left, height: bottom - top, class: 'chart-frame' }));
+  root.append(
+    svg('rect', { x: left, y: top, width: right - left, height: bottom - top, class: 'chart-frame' }),
+  );
   for (const t of model.xTicks) {
     root.append(svg('line', { x1: t.position, x2: t.position, y1: top, y2: bottom, class: 'chart-grid' }));
-    root.append(svg('text', { x: t.position, y: bottom + 16, 'text-anchor': 'middle', class: 'chart-tick' }, t.label));
+    root.append(
+      svg('text', { x: t.position, y: bottom + 16, 'text-anchor': 'middle', class: 'chart-tick' }, t.label),
+    );
   }
   for (const t of model.yTicks) {
     root.append(svg('line', { x1: left, x2: right, y1: t.position, y2: t.position, class: 'chart-grid' }));
-    root.append(svg('text', { x: left - 5, y: t.position + 4, 'text-anchor': 'end', class: 'chart-tick' }, t.label));
+    root.append(
+      svg('text', { x: left - 5, y: t.position + 4, 'text-anchor': 'end', class: 'chart-tick' }, t.label),
+    );
   }
   root.append(svg('polyline', { points: model.polyline, class: 'chart-line' }));
   root.append(
-    svg('text', { x: (left + right) / 2, y: model.height - 8, 'text-anchor': 'middle', class: 'chart-title' }, model.xTitle),
+    svg(
+      'text',
+      { x: (left + right) / 2, y: model.height - 8, 'text-anchor': 'middle', class: 'chart-title' },
+      model.xTitle,
+    ),
   );
   const yMid = (top + bottom) / 2;
   root.append(
@@ -632,7 +643,9 @@ function ephInput() {
     for (const e of result.errors) {
       const err = document.getElementById(`eph-err-${e.field}`);
       if (err) err.textContent = e.message;
-      document.getElementById(e.field === 'tempC' ? 'eph-temp' : `eph-${e.field}`)?.setAttribute('aria-invalid', 'true');
+      document
+        .getElementById(e.field === 'tempC' ? 'eph-temp' : `eph-${e.field}`)
+        ?.setAttribute('aria-invalid', 'true');
     }
     ephProblem = missingSummary(result.errors);
   } else ephProblem = null;
@@ -645,7 +658,11 @@ function refreshEphButtons(): void {
   draw.disabled = ephProblem !== null || eph.render === null;
   const write = byId<HTMLButtonElement>('eph-write');
   const why = byId('eph-why');
-  setWritable(write, null, ephProblem ?? (eph.lines ? null : 'This build has no ECHEM.EPHLINES to write the lines.'));
+  setWritable(
+    write,
+    null,
+    ephProblem ?? (eph.lines ? null : 'This build has no ECHEM.EPHLINES to write the lines.'),
+  );
   why.textContent = ephProblem ?? (write.disabled && !host.excel ? NEEDS_EXCEL : '');
 }
 
@@ -665,7 +682,10 @@ function drawEph(): void {
       heightPx: Math.round(width * 1.1),
     });
   } catch (error) {
-    sinkFor(byId('eph-status')).show('error', `Drawing failed: ${error instanceof Error ? error.message : String(error)}`);
+    sinkFor(byId('eph-status')).show(
+      'error',
+      `Drawing failed: ${error instanceof Error ? error.message : String(error)}`,
+    );
     return;
   }
   const el = sanitizedSvg(text, document);
@@ -675,7 +695,10 @@ function drawEph(): void {
   }
   el.setAttribute('role', 'img');
   if (!el.getAttribute('aria-label') && !el.querySelector('title'))
-    el.setAttribute('aria-label', `E–pH diagram of ${input.element} at activity ${formatValue(input.activity)}, ${formatValue(input.tempC)} °C`);
+    el.setAttribute(
+      'aria-label',
+      `E–pH diagram of ${input.element} at activity ${formatValue(input.activity)}, ${formatValue(input.tempC)} °C`,
+    );
   box.replaceChildren(el);
 }
 
@@ -718,7 +741,8 @@ function renderEntry(entry: ReferenceItem): HTMLElement {
     make('code', { text: entry.qualifiedName }),
   ]);
   const first = /^[^.]*\.?/.exec(entry.description)?.[0] ?? '';
-  if (first) summary.append(make('span', { className: 'ref-gist', text: ` ${first.replace(/ Example:.*$/, '')}` }));
+  if (first)
+    summary.append(make('span', { className: 'ref-gist', text: ` ${first.replace(/ Example:.*$/, '')}` }));
   const details = make('details', { className: 'ref-entry', id: entry.anchor }, [summary]);
   details.append(make('p', { className: 'signature' }, [make('code', { text: entry.signature })]));
   if (entry.description) details.append(make('p', { text: entry.description }));
@@ -849,7 +873,8 @@ function start(): void {
   });
   byId('ref-search').addEventListener('input', applySearch);
   window.addEventListener('hashchange', goToHash);
-  if (typeof ResizeObserver !== 'undefined') new ResizeObserver(() => renderChart()).observe(byId('sw-chart'));
+  if (typeof ResizeObserver !== 'undefined')
+    new ResizeObserver(() => renderChart()).observe(byId('sw-chart'));
   startEph();
 
   onReactionChanged();

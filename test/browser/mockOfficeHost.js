@@ -73,7 +73,11 @@
         range.read = true;
         pendingLoads.push(function () {
           // not enumerable: a read is not a write, and the recorded writes stay as they were
-          Object.defineProperty(range, 'values', { value: readBack(sheet, address), enumerable: false, writable: true });
+          Object.defineProperty(range, 'values', {
+            value: readBack(sheet, address),
+            enumerable: false,
+            writable: true,
+          });
         });
         return range;
       },

@@ -105,15 +105,17 @@ async function axeViolations(page: Page): Promise<string[]> {
   const present = await page.evaluate(() => typeof (globalThis as { axe?: unknown }).axe !== 'undefined');
   if (!present) await page.evaluate(AXE_SOURCE);
   return page.evaluate(async () => {
-    const axe = (globalThis as unknown as {
-      axe: {
-        getRules(): { ruleId: string }[];
-        run(
-          ctx: Document,
-          opts: unknown,
-        ): Promise<{ violations: { id: string; help: string; nodes: { target: unknown[] }[] }[] }>;
-      };
-    }).axe;
+    const axe = (
+      globalThis as unknown as {
+        axe: {
+          getRules(): { ruleId: string }[];
+          run(
+            ctx: Document,
+            opts: unknown,
+          ): Promise<{ violations: { id: string; help: string; nodes: { target: unknown[] }[] }[] }>;
+        };
+      }
+    ).axe;
     const rules: Record<string, { enabled: boolean }> = {};
     for (const r of axe.getRules()) rules[r.ruleId] = { enabled: true };
     const result = await axe.run(document, { rules, resultTypes: ['violations'] });
@@ -151,7 +153,10 @@ async function scrollsSideways(page: Page): Promise<boolean> {
  * inside the viewport and be what is drawn at its own centre (nothing on top of it).
  * Returns the problems and the number of stops.
  */
-async function tabThrough(page: Page, key: 'Tab' | 'Shift+Tab'): Promise<{ hidden: string[]; stops: number }> {
+async function tabThrough(
+  page: Page,
+  key: 'Tab' | 'Shift+Tab',
+): Promise<{ hidden: string[]; stops: number }> {
   await page.evaluate((backward: boolean) => {
     (document.activeElement as HTMLElement | null)?.blur();
     window.scrollTo(0, backward ? document.body.scrollHeight : 0);
@@ -169,7 +174,8 @@ async function tabThrough(page: Page, key: 'Tab' | 'Shift+Tab'): Promise<{ hidde
       const cy = Math.min(Math.max(b.top + Math.min(b.height, 30) / 2, 0), window.innerHeight - 1);
       const top = document.elementFromPoint(cx, cy);
       const inView = b.bottom > 0 && b.top < window.innerHeight && b.right > 0 && b.left < window.innerWidth;
-      const drawn = !!top && (top === el || el.contains(top) || top.contains(el) || top === el.closest('label'));
+      const drawn =
+        !!top && (top === el || el.contains(top) || top.contains(el) || top === el.closest('label'));
       const id = `${el.tagName}#${el.id}.${el.className}:${el.textContent?.slice(0, 20) ?? ''}:${Math.round(b.top + window.scrollY)}`;
       return { key: id, ok: inView && drawn };
     });
@@ -206,7 +212,9 @@ async function controlStyles(page: Page): Promise<Record<string, Record<string, 
     ];
     const out: Record<string, Record<string, string>> = {};
     const controls = Array.from(
-      document.querySelectorAll<HTMLElement>('input, select, button, textarea, summary, output, [role="tab"]'),
+      document.querySelectorAll<HTMLElement>(
+        'input, select, button, textarea, summary, output, [role="tab"]',
+      ),
     );
     controls.forEach((el, i) => {
       if (el.getClientRects().length === 0) return;
@@ -238,7 +246,10 @@ if (!haveChromium && underCI) {
   const cspViolations: string[] = [];
 
   beforeAll(async () => {
-    const sources = Math.max(newest(path.join(ROOT, 'src')), fs.statSync(path.join(ROOT, 'webpack.config.js')).mtimeMs);
+    const sources = Math.max(
+      newest(path.join(ROOT, 'src')),
+      fs.statSync(path.join(ROOT, 'webpack.config.js')).mtimeMs,
+    );
     const prodBuilt = fs.existsSync(path.join(DIST, 'taskpane.js'))
       ? fs.statSync(path.join(DIST, 'taskpane.js')).mtimeMs
       : 0;
@@ -325,7 +336,9 @@ if (!haveChromium && underCI) {
   const SECTIONS = [
     { tab: 'Potentials', panel: '#potentials', primary: '#pot-insert', shot: 'potentials.png' },
     { tab: 'Case series', panel: '#series', primary: '#sw-build', shot: 'case-series.png' },
-    ...(ENGINE_HAS_EPH ? [{ tab: 'E–pH diagram', panel: '#eph', primary: '#eph-draw', shot: 'eph-diagram.png' }] : []),
+    ...(ENGINE_HAS_EPH
+      ? [{ tab: 'E–pH diagram', panel: '#eph', primary: '#eph-draw', shot: 'eph-diagram.png' }]
+      : []),
     { tab: 'Reference', panel: '#reference', primary: '#ref-search', shot: 'reference.png' },
   ];
 
@@ -333,9 +346,11 @@ if (!haveChromium && underCI) {
     const page = await openPane(MOCK_HOST);
     await page.getByText('Connected to Excel.').waitFor();
     const tabs = page.getByRole('tab');
-    expect(await tabs.evaluateAll((els) => els.filter((e) => !(e as HTMLElement).hidden).map((e) => e.textContent?.trim()))).toEqual(
-      SECTIONS.map((s) => s.tab),
-    );
+    expect(
+      await tabs.evaluateAll((els) =>
+        els.filter((e) => !(e as HTMLElement).hidden).map((e) => e.textContent?.trim()),
+      ),
+    ).toEqual(SECTIONS.map((s) => s.tab));
     expect(await page.locator('#tab-eph').isHidden()).toBe(!ENGINE_HAS_EPH);
     // the caution is inside the banner landmark, above the sections
     expect(await page.locator('header.banner #cautions').isVisible()).toBe(true);
@@ -404,7 +419,9 @@ if (!haveChromium && underCI) {
   test('inside Excel: the case series, its preview and chart, the build, the potentials sheet, an Office failure', async () => {
     const page = await openPane(MOCK_HOST, { existing: ['Sheet1', 'Potentials'] });
     await page.getByText('Connected to Excel.').waitFor();
-    expect(await page.locator('#cautions').textContent()).toContain('thermodynamic estimates, not measurements');
+    expect(await page.locator('#cautions').textContent()).toContain(
+      'thermodynamic estimates, not measurements',
+    );
     await openSection(page, 'Case series');
 
     const reaction = page.getByLabel('Reaction (half-reaction, couple, cell diagram or full reaction)');
@@ -425,7 +442,9 @@ if (!haveChromium && underCI) {
     await commit(page.getByLabel('To (activity)'), '1');
     await commit(page.getByLabel('Cases (both ends included)'), '9');
     await commit(page.getByLabel('Value of Fe2+ (activity)'), '0.01');
-    expect(await page.locator('#sw-varied').textContent()).toBe('Varied: a(Fe3+) from 1e-4 to 1, log-spaced, 9 points.');
+    expect(await page.locator('#sw-varied').textContent()).toBe(
+      'Varied: a(Fe3+) from 1e-4 to 1, log-spaced, 9 points.',
+    );
 
     // what will be written, and where
     await page.locator('#sw-formula', { hasText: '=ECHEM.POTENTIAL(B1,A6:B6,A7:B15,C7:C15)' }).waitFor();
@@ -439,20 +458,26 @@ if (!haveChromium && underCI) {
     // 0.05916 V per decade at 25 °C (RT ln10/F from the SI exact constants)
     const preview = page.locator('#sw-preview');
     await preview.filter({ hasText: 'Computed by ECHEM.POTENTIAL with the built-in table' }).waitFor();
-    expect(await preview.textContent()).toContain('E = 0.6527 V vs SHE for the first case, 0.8893 V vs SHE for the last');
+    expect(await preview.textContent()).toContain(
+      'E = 0.6527 V vs SHE for the first case, 0.8893 V vs SHE for the last',
+    );
     expect(await preview.textContent()).toContain('Slope along the series: 0.05916 V per decade');
     expect(await preview.textContent()).toContain('Nernst slope for n = 1 at 25 °C: 0.05916 V per decade');
     // the chart in the pane, drawn from the same values: axes, ticks, units, one point per case
     const chart = page.locator('#sw-chart svg');
     await chart.waitFor();
-    expect(await chart.locator('text.chart-title').allTextContents()).toEqual(['log10 a(Fe3+)', 'E / V vs SHE']);
+    expect(await chart.locator('text.chart-title').allTextContents()).toEqual([
+      'log10 a(Fe3+)',
+      'E / V vs SHE',
+    ]);
     expect(await chart.locator('text.chart-tick').count()).toBeGreaterThanOrEqual(5);
     const ys = await chart
       .locator('polyline')
       .evaluate((e) => (e.getAttribute('points') ?? '').split(' ').map((p) => Number(p.split(',')[1])));
     expect(ys).toHaveLength(9);
     // E rises with log a(Fe3+): the line climbs (SVG y falls) by equal steps
-    for (let k = 1; k < 9; k++) expect((ys[k] as number) - (ys[k - 1] as number)).toBeCloseTo((ys[1] as number) - (ys[0] as number), 0);
+    for (let k = 1; k < 9; k++)
+      expect((ys[k] as number) - (ys[k - 1] as number)).toBeCloseTo((ys[1] as number) - (ys[0] as number), 0);
     expect((ys[8] as number) < (ys[0] as number)).toBe(true);
     expect(await chart.locator('title').textContent()).toContain('9 cases');
 
@@ -479,17 +504,29 @@ if (!haveChromium && underCI) {
     const sweep = sheets.find((s) => s.name === 'E vs log a(Fe3+)');
     expect(sweep?.added).toBe(true);
     expect(written(sweep, 'B1').values).toEqual([['Fe3+/Fe2+']]);
-    expect(written(sweep, 'A6:E6').values).toEqual([['Fe3+', 'Fe2+', 'temp_C', 'log10 a(Fe3+)', 'E / V vs SHE']]);
+    expect(written(sweep, 'A6:E6').values).toEqual([
+      ['Fe3+', 'Fe2+', 'temp_C', 'log10 a(Fe3+)', 'E / V vs SHE'],
+    ]);
     const cases = written(sweep, 'A7:C15').values as number[][];
     expect(cases.map((r) => r[0])).toEqual(
-      [1e-4, 1e-3 / Math.sqrt(10), 1e-3, 1e-2 / Math.sqrt(10), 0.01, 0.1 / Math.sqrt(10), 0.1, 1 / Math.sqrt(10), 1].map(
-        (v) => Number(v.toPrecision(15)),
-      ),
+      [
+        1e-4,
+        1e-3 / Math.sqrt(10),
+        1e-3,
+        1e-2 / Math.sqrt(10),
+        0.01,
+        0.1 / Math.sqrt(10),
+        0.1,
+        1 / Math.sqrt(10),
+        1,
+      ].map((v) => Number(v.toPrecision(15))),
     );
     expect(cases.every((r) => r[1] === 0.01 && r[2] === 25)).toBe(true);
     expect(written(sweep, 'D7:D15').formulas?.[0]).toEqual(['=LOG10(A7)']);
     expect(written(sweep, 'E7').formulas).toEqual([['=ECHEM.POTENTIAL(B1,A6:B6,A7:B15,C7:C15)']]);
-    expect(String(written(sweep, 'B2:B4').values?.[1]?.[0])).toContain('for a dilute, ideal solution the concentration in mol/L');
+    expect(String(written(sweep, 'B2:B4').values?.[1]?.[0])).toContain(
+      'for a dilute, ideal solution the concentration in mol/L',
+    );
     const sheetChart = sweep?.charts[0];
     expect(sheetChart?.type).toBe('XYScatterLines');
     expect(sheetChart?.recordedSeries).toEqual({ name: 'E / V vs SHE', xValues: 'D7:D15', values: 'E7:E15' });
@@ -503,13 +540,18 @@ if (!haveChromium && underCI) {
     await page.locator('#pot-insert').click();
     await page.locator('#pot-status.success', { hasText: 'Created sheet "Potentials (2)"' }).waitFor();
     const status = (await page.locator('#pot-status').textContent()) ?? '';
-    const m = /Pass ('Potentials \(2\)'!A2:D(\d+)) as the table argument \(it has room for 50 rows you add\)\./.exec(status);
+    const m =
+      /Pass ('Potentials \(2\)'!A2:D(\d+)) as the table argument \(it has room for 50 rows you add\)\./.exec(
+        status,
+      );
     expect(m).not.toBeNull();
     const tableRef = m?.[1] ?? '';
     sheets = await recordedSheets(page);
     expect(sheets.find((s) => s.name === 'Potentials')?.ranges).toEqual([]);
     const pot = sheets.find((s) => s.name === 'Potentials (2)');
-    expect(written(pot, 'A1:D1').values).toEqual([['Half-reaction', 'E° (V vs SHE, 25 °C)', 'dE°/dT (mV/K)', 'Source']]);
+    expect(written(pot, 'A1:D1').values).toEqual([
+      ['Half-reaction', 'E° (V vs SHE, 25 °C)', 'dE°/dT (mV/K)', 'Source'],
+    ]);
     const dataRows = (pot?.ranges.find((r) => /^A2:D\d+$/.test(r.address) && r.values)?.values ?? []).length;
     expect(Number(m?.[2])).toBe(dataRows + 1 + 50);
     expect(String(written(pot, 'F1:F3').values?.[1]?.[0])).toContain('50 empty rows below the data');
@@ -517,13 +559,19 @@ if (!haveChromium && underCI) {
 
     // the case series now offers that range as its table, and the preview reads it from the workbook
     await openSection(page, 'Case series');
-    expect(await page.getByLabel('Potentials table (optional range, e.g. Potentials!A2:D115)').inputValue()).toBe(tableRef);
-    expect(await page.locator('#sw-formula').textContent()).toBe(`=ECHEM.POTENTIAL(B1,A6:B6,A7:B15,C7:C15,${tableRef})`);
+    expect(
+      await page.getByLabel('Potentials table (optional range, e.g. Potentials!A2:D115)').inputValue(),
+    ).toBe(tableRef);
+    expect(await page.locator('#sw-formula').textContent()).toBe(
+      `=ECHEM.POTENTIAL(B1,A6:B6,A7:B15,C7:C15,${tableRef})`,
+    );
     await preview.filter({ hasText: `with your table ${tableRef}` }).waitFor();
     expect(await preview.textContent()).toContain('E = 0.6527 V vs SHE for the first case');
     // a made-up E° in the user's table (0.500 V for Fe3+/Fe2+) moves the preview: it is their table that counts
     await page.evaluate(() => {
-      const g = globalThis as unknown as { __potentiaMock: { sheets: { name: string; ranges: { address: string; values?: unknown[][] }[] }[] } };
+      const g = globalThis as unknown as {
+        __potentiaMock: { sheets: { name: string; ranges: { address: string; values?: unknown[][] }[] }[] };
+      };
       const sheet = g.__potentiaMock.sheets.find((s) => s.name === 'Potentials (2)');
       const data = sheet?.ranges.find((r) => /^A2:D\d+$/.test(r.address) && r.values);
       const row = data?.values?.find((r) => r[0] === 'Fe3+ + e- -> Fe2+');
@@ -575,13 +623,16 @@ if (!haveChromium && underCI) {
     expect(await page.locator('#sw-err-from').textContent()).toBe('');
     expect(await from.getAttribute('aria-invalid')).toBeNull();
     await from.blur();
-    const message = 'From "0,01" is not a number: write a number such as 0.01, 1e-6 or 10^-6 (with a decimal point).';
+    const message =
+      'From "0,01" is not a number: write a number such as 0.01, 1e-6 or 10^-6 (with a decimal point).';
     expect(await page.locator('#sw-err-from').textContent()).toBe(message);
     expect(await from.getAttribute('aria-invalid')).toBe('true');
     // shown once on the page, and the button names the input to fix
     expect(await page.getByText(message, { exact: true }).count()).toBe(1);
     expect(await page.locator('#sw-build').isDisabled()).toBe(true);
-    expect(await page.locator('#sw-why').textContent()).toBe('Not ready: From needs fixing (see the message beside it).');
+    expect(await page.locator('#sw-why').textContent()).toBe(
+      'Not ready: From needs fixing (see the message beside it).',
+    );
     await commit(page.getByLabel('Cases (both ends included)'), 'many');
     expect(await page.locator('#sw-why').textContent()).toBe(
       'Not ready: From and Cases need fixing (see the messages beside them).',
@@ -606,7 +657,10 @@ if (!haveChromium && underCI) {
     const page = await openPane(MOCK_HOST, { locale: 'de-DE' });
     await page.getByText('Connected to Excel.').waitFor();
     await openSection(page, 'Case series');
-    await commit(page.getByLabel('Reaction (half-reaction, couple, cell diagram or full reaction)'), 'Fe3+/Fe2+');
+    await commit(
+      page.getByLabel('Reaction (half-reaction, couple, cell diagram or full reaction)'),
+      'Fe3+/Fe2+',
+    );
     await page.getByLabel('Quantity').selectOption('activity:Fe3+');
     await commit(page.getByLabel('From (activity)'), '1e-4');
     await commit(page.getByLabel('Cases (both ends included)'), '9');
@@ -692,7 +746,9 @@ if (!haveChromium && underCI) {
     await page.locator('#ref-nernstslope[open]').waitFor();
     await page.waitForFunction(() => document.activeElement?.id === 'ref-nernstslope-title');
     expect(await page.locator('#tab-reference').getAttribute('aria-selected')).toBe('true');
-    expect(await page.locator('#ref-nernstslope .signature').textContent()).toBe('ECHEM.NERNSTSLOPE([temp_C], [n])');
+    expect(await page.locator('#ref-nernstslope .signature').textContent()).toBe(
+      'ECHEM.NERNSTSLOPE([temp_C], [n])',
+    );
     const heading = await page.locator('#ref-nernstslope-title').boundingBox();
     expect(heading && heading.y >= 0 && heading.y + heading.height <= PANE.height).toBe(true);
     expect(await axeViolations(page)).toEqual([]);
@@ -711,7 +767,10 @@ if (!haveChromium && underCI) {
     expect(await page.locator('#sw-why').textContent()).toContain('Writing sheets needs Excel');
     await page.locator('#sw-formula', { hasText: '=ECHEM.POTENTIAL(B1,A6,A7:A31,B7:B31)' }).waitFor();
     await page.locator('#sw-chart svg').waitFor();
-    await commit(page.getByLabel('Reaction (half-reaction, couple, cell diagram or full reaction)'), 'Cu2+ + 2e- ->> Cu');
+    await commit(
+      page.getByLabel('Reaction (half-reaction, couple, cell diagram or full reaction)'),
+      'Cu2+ + 2e- ->> Cu',
+    );
     await page.locator('#sw-reaction-msg.error-text').waitFor();
     expect(await axeViolations(page)).toEqual([]);
     await openSection(page, 'Reference');
@@ -729,7 +788,9 @@ if (!haveChromium && underCI) {
     const notExcel =
       'globalThis.Office = { onReady: function (cb) { var i = { host: "Word", platform: "PC" }; if (cb) cb(i); return Promise.resolve(i); } };';
     const page = await openPane(notExcel);
-    await page.locator('#host-status', { hasText: 'Not running inside Excel (the host here is Word).' }).waitFor();
+    await page
+      .locator('#host-status', { hasText: 'Not running inside Excel (the host here is Word).' })
+      .waitFor();
     expect(await page.locator('#sw-build').isDisabled()).toBe(true);
     expect(await page.locator('#pot-insert').isDisabled()).toBe(true);
     await page.close();

@@ -55,7 +55,15 @@ describe('chartModel', () => {
   });
 
   test('non-finite points are left out; fewer than two finite points give no chart', () => {
-    expect(chartModel([{ x: 0, y: 1 }, { x: 1, y: Number.NaN }], { width: 300, xTitle: 'x', yTitle: 'y' })).toBeNull();
+    expect(
+      chartModel(
+        [
+          { x: 0, y: 1 },
+          { x: 1, y: Number.NaN },
+        ],
+        { width: 300, xTitle: 'x', yTitle: 'y' },
+      ),
+    ).toBeNull();
     const m = chartModel([...pts, { x: 1, y: Number.NaN }], { width: 300, xTitle: 'x', yTitle: 'y' });
     expect(m?.polyline.split(' ')).toHaveLength(3);
   });

@@ -16,7 +16,9 @@ describe('ephSupport', () => {
     const s = ephSupport({});
     expect(s.render).toBeNull();
     expect(s.elements).toBe(DEFAULT_EPH_ELEMENTS);
-    expect(s.elements).toEqual(expect.arrayContaining(['Fe', 'Cu', 'Zn', 'Al', 'Ni', 'Cr', 'Pb', 'Sn', 'Mg', 'Ag']));
+    expect(s.elements).toEqual(
+      expect.arrayContaining(['Fe', 'Cu', 'Zn', 'Al', 'Ni', 'Cr', 'Pb', 'Sn', 'Mg', 'Ag']),
+    );
   });
 });
 
@@ -29,7 +31,9 @@ describe('readEphForm', () => {
       tempC: 25,
       referenceScale: null,
     });
-    expect(readEphForm({ element: 'Cu', activity: '0,001', tempC: '60', referenceScale: 'SCE' }, true)).toEqual({
+    expect(
+      readEphForm({ element: 'Cu', activity: '0,001', tempC: '60', referenceScale: 'SCE' }, true),
+    ).toEqual({
       ok: true,
       element: 'Cu',
       activity: 0.001,
@@ -47,7 +51,10 @@ describe('readEphForm', () => {
   ])('%j: one sentence against %s', (over, field, text) => {
     const r = readEphForm({ referenceScale: 'SHE', ...over });
     expect(r.ok).toBe(false);
-    expect(r).toEqual({ ok: false, errors: [expect.objectContaining({ field, message: expect.stringContaining(text) })] });
+    expect(r).toEqual({
+      ok: false,
+      errors: [expect.objectContaining({ field, message: expect.stringContaining(text) })],
+    });
   });
 });
 

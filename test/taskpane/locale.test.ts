@@ -35,13 +35,13 @@ describe('readNumber with and without a decimal comma', () => {
     expect(readNumber(text, comma)).toBe(value);
   });
 
-  test('the hint shows the locale\'s own way of writing 0.01', () => {
+  test("the hint shows the locale's own way of writing 0.01", () => {
     expect(numberHint(true)).toContain('0,01');
     expect(numberHint(false)).toContain('0.01');
     expect(numberHint(false)).toContain('decimal point');
   });
 
-  test('localNumber shows defaults in the locale\'s separator, leaving exponents and integers alone', () => {
+  test("localNumber shows defaults in the locale's separator, leaving exponents and integers alone", () => {
     expect(localNumber('0.001', ',')).toBe('0,001');
     expect(localNumber('1e-6', ',')).toBe('1e-6');
     expect(localNumber('14', ',')).toBe('14');

@@ -5,14 +5,21 @@
 import * as fs from 'fs';
 import * as path from 'path';
 import { CATALOGUE } from '../../src/functions/catalogue';
-import { loadReference, referenceItems, RESULT_UNITS, resultUnit, searchReference } from '../../src/taskpane/referenceData';
+import {
+  loadReference,
+  referenceItems,
+  RESULT_UNITS,
+  resultUnit,
+  searchReference,
+} from '../../src/taskpane/referenceData';
 
 const metadata = {
   functions: [
     {
       id: 'NERNSTSLOPE',
       name: 'NERNSTSLOPE',
-      description: 'Nernst slope RT ln10/(nF) in V per decade of activity. Example: =ECHEM.NERNSTSLOPE(25, 1) gives 0.059159.',
+      description:
+        'Nernst slope RT ln10/(nF) in V per decade of activity. Example: =ECHEM.NERNSTSLOPE(25, 1) gives 0.059159.',
       parameters: [{ name: 'temp_C', description: 'Temperature in °C', optional: true }],
       result: { dimensionality: 'matrix' },
     },
@@ -64,14 +71,22 @@ describe('loadReference', () => {
 
   test('an HTTP failure says what answered', async () => {
     await expect(
-      loadReference(async () => ({ ok: false, status: 404, statusText: 'Not Found', json: async () => null })),
+      loadReference(async () => ({
+        ok: false,
+        status: 404,
+        statusText: 'Not Found',
+        json: async () => null,
+      })),
     ).rejects.toThrow('functions.json answered 404 Not Found');
   });
 
   const built = path.join(__dirname, '..', '..', 'dist', 'functions.json');
-  (fs.existsSync(built) ? test : test.skip)('the built metadata gives one item with a known unit per catalogue function', () => {
-    const items = referenceItems(JSON.parse(fs.readFileSync(built, 'utf8')));
-    expect(items.map((i) => i.id).sort()).toEqual(CATALOGUE.map((f) => f.id).sort());
-    expect(items.filter((i) => i.unit === 'see the description')).toEqual([]);
-  });
+  (fs.existsSync(built) ? test : test.skip)(
+    'the built metadata gives one item with a known unit per catalogue function',
+    () => {
+      const items = referenceItems(JSON.parse(fs.readFileSync(built, 'utf8')));
+      expect(items.map((i) => i.id).sort()).toEqual(CATALOGUE.map((f) => f.id).sort());
+      expect(items.filter((i) => i.unit === 'see the description')).toEqual([]);
+    },
+  );
 });

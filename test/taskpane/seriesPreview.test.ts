@@ -131,7 +131,7 @@ describe('preview through the catalogue, and slopes (published checks)', () => {
 });
 
 describe('the preview uses the same function and arguments as the sheet', () => {
-  test('the arguments are the sheet formula\'s: species header, values, temp_C column, table', () => {
+  test("the arguments are the sheet formula's: species header, values, temp_C column, table", () => {
     const i = input({ points: '3', species: [{ name: 'Cu2+', value: '1' }] });
     const args = potentialArgs(i, planSweep(i), null);
     expect(args).toEqual(['Cu2+/Cu', [['Cu2+']], [[1e-6], [0.001], [1]], [[25], [25], [25]], undefined]);
@@ -149,7 +149,8 @@ describe('the preview uses the same function and arguments as the sheet', () => 
     const mine = previewValues(i, layout, table).map((v) => (v.ok ? v.e : NaN));
     const builtin = previewValues(i, layout, null).map((v) => (v.ok ? v.e : NaN));
     expect(mine[2]).toBeCloseTo(0.5, 12);
-    for (let k = 0; k < 3; k++) expect((mine[k] as number) - (builtin[k] as number)).toBeCloseTo(0.5 - 0.337, 12);
+    for (let k = 0; k < 3; k++)
+      expect((mine[k] as number) - (builtin[k] as number)).toBeCloseTo(0.5 - 0.337, 12);
   });
 
   test('ECHEM.NERNSTSLOPE gives RT ln10/(nF): 59.159 mV at 25 °C for n = 1, half that for n = 2', () => {
@@ -160,7 +161,12 @@ describe('the preview uses the same function and arguments as the sheet', () => 
   });
 
   test('a linear activity series has no single slope; a temperature series gives the mean dE/dT', () => {
-    const lin = input({ variable: { kind: 'activity', species: 'Cu2+', scale: 'linear' }, from: '0.001', to: '0.1', points: '5' });
+    const lin = input({
+      variable: { kind: 'activity', species: 'Cu2+', scale: 'linear' },
+      from: '0.001',
+      to: '0.1',
+      points: '5',
+    });
     expect(seriesSlope(lin, planSweep(lin), previewValues(lin, planSweep(lin), null))).toBeNull();
     const temp = input({ variable: { kind: 'temperature' }, from: '5', to: '65', points: '13' });
     const s = seriesSlope(temp, planSweep(temp), previewValues(temp, planSweep(temp), null));
@@ -169,7 +175,11 @@ describe('the preview uses the same function and arguments as the sheet', () => 
   });
 
   test('a failing case carries the message in sentence case', () => {
-    const i = input({ reaction: 'Fe3+/Fe2+', species: [{ name: 'Fe3+', value: '1' }], variable: { kind: 'pH' } });
+    const i = input({
+      reaction: 'Fe3+/Fe2+',
+      species: [{ name: 'Fe3+', value: '1' }],
+      variable: { kind: 'pH' },
+    });
     const values = previewValues(i, planSweep(i), null);
     expect(values[0]).toEqual({ ok: false, message: expect.stringMatching(/^[A-Z].*Fe2\+/) });
   });

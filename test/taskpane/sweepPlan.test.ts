@@ -1,11 +1,8 @@
 /**
- * The sweep builder's pure logic: the reaction check, reading the form, case values
- * (log and linear spacing), the sheet layout and formula text, and the engine preview,
- * with published checks where chemistry appears.
- *
- * Sources: RT ln10/F = 59.15935 mV at 25 °C and 64.1199 mV at 50 °C, derived from the SI
- * 2019 exact constants (F = N_A·e, R = N_A·k). E° values: OpenStax Chemistry 2e, Appendix L
- * (Cu2+/Cu +0.337 V, Zn2+/Zn −0.7618 V, O2/H2O +1.229 V, O2/OH- +0.401 V, MnO4-/Mn2+ +1.507 V).
+ * The case series' pure logic: the reaction check, reading the form (messages in sentence
+ * case, decimal commas where the locale uses them), case values (log and linear spacing),
+ * and the sheet layout and formula text. The preview values are checked against published
+ * figures in seriesPreview.test.ts.
  */
 import {
   caretLine,
@@ -26,9 +23,6 @@ import {
   type SweepInput,
   sweepSheetPlan,
 } from '../../src/taskpane/sweepPlan';
-
-const SLOPE_25 = 0.05915935; // V per decade, derived from the SI exact constants
-const SLOPE_50 = 0.0641199; // V per decade at 50 °C, derived likewise
 
 function form(over: Partial<SweepForm> = {}): SweepForm {
   return {
@@ -356,7 +350,9 @@ describe('planSweep: layout and formula', () => {
 
 describe('messages: sentence case, and what the write button says', () => {
   test('sentenceCase capitalises and ends with a full stop', () => {
-    expect(sentenceCase('reaction is missing: give a reaction')).toBe('Reaction is missing: give a reaction.');
+    expect(sentenceCase('reaction is missing: give a reaction')).toBe(
+      'Reaction is missing: give a reaction.',
+    );
     expect(sentenceCase('Already fine.')).toBe('Already fine.');
     expect(sentenceCase('')).toBe('');
   });
@@ -372,7 +368,12 @@ describe('messages: sentence case, and what the write button says', () => {
 
   test('a comma locale reads "0,01" in every number box; a point locale says to use a point', () => {
     const r = readSweepForm(
-      form({ from: '0,001', to: '0,1', species: [{ name: 'Cu2+', value: '0,5' }], variable: { kind: 'activity', species: 'Cu2+', scale: 'linear' } }),
+      form({
+        from: '0,001',
+        to: '0,1',
+        species: [{ name: 'Cu2+', value: '0,5' }],
+        variable: { kind: 'activity', species: 'Cu2+', scale: 'linear' },
+      }),
       { decimalComma: true },
     );
     expect(r.ok && [r.input.from, r.input.to]).toEqual([0.001, 0.1]);
@@ -383,7 +384,8 @@ describe('messages: sentence case, and what the write button says', () => {
         {
           field: 'from',
           label: 'From',
-          message: 'From "0,001" is not a number: write a number such as 0.01, 1e-6 or 10^-6 (with a decimal point).',
+          message:
+            'From "0,001" is not a number: write a number such as 0.01, 1e-6 or 10^-6 (with a decimal point).',
         },
       ],
     });
@@ -391,9 +393,19 @@ describe('messages: sentence case, and what the write button says', () => {
 
   test('the reaction check given is used as it is (checked once per change)', () => {
     const check = checkReaction('Fe3+/Fe2+');
-    const r = readSweepForm(form({ reaction: 'Fe3+/Fe2+', species: [{ name: 'Fe2+', value: '1' }], variable: { kind: 'activity', species: 'Fe3+', scale: 'log' } }), { check });
+    const r = readSweepForm(
+      form({
+        reaction: 'Fe3+/Fe2+',
+        species: [{ name: 'Fe2+', value: '1' }],
+        variable: { kind: 'activity', species: 'Fe3+', scale: 'log' },
+      }),
+      { check },
+    );
     expect(r.ok).toBe(true);
     const bad = readSweepForm(form(), { check: { ok: false, message: 'Given check.', position: null } });
-    expect(bad).toEqual({ ok: false, errors: [{ field: 'reaction', label: 'Reaction', message: 'Given check.' }] });
+    expect(bad).toEqual({
+      ok: false,
+      errors: [{ field: 'reaction', label: 'Reaction', message: 'Given check.' }],
+    });
   });
 });
