@@ -89,7 +89,7 @@ export function chartModel(
   const xs = pts.map((p) => p.x);
   const ys = pts.map((p) => p.y);
   const xTarget = Math.max(2, Math.floor((plot.right - plot.left) / 64));
-  const yTarget = Math.max(2, Math.floor((plot.bottom - plot.top) / 40));
+  const yTarget = Math.max(2, Math.floor((plot.bottom - plot.top) / 30));
   let xt = niceTicks(Math.min(...xs), Math.max(...xs), xTarget);
   let yt = niceTicks(Math.min(...ys), Math.max(...ys), yTarget);
   const x0 = Math.min(...xs, ...xt);

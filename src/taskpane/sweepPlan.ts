@@ -599,17 +599,17 @@ export function planSweep(
     xTitle = logX ? (gas ? `log10 (${a} / bar)` : `log10 ${a}`) : `${a}${unit}`;
     x = logX ? steps.map((s) => tidy(Math.log10(s), 12)) : steps;
     label = logX ? `log ${a}` : a;
-    description = `${a}${unit} from ${formatValue(input.from)} to ${formatValue(input.to)}, ${logX ? 'log-spaced' : 'evenly spaced'}, ${n} points`;
+    description = `${a}${unit} from ${formatValue(input.from)} to ${formatValue(input.to)}, ${logX ? 'log-spaced' : 'evenly spaced'}, ${n} cases`;
   } else if (v.kind === 'pH') {
     xTitle = 'pH';
     x = steps;
     label = 'pH';
-    description = `pH from ${formatValue(input.from)} to ${formatValue(input.to)}, evenly spaced, ${n} points (a(H+) = 10^-pH)`;
+    description = `pH from ${formatValue(input.from)} to ${formatValue(input.to)}, evenly spaced, ${n} cases (a(H+) = 10^-pH)`;
   } else {
     xTitle = 'Temperature / °C';
     x = steps;
     label = 'T';
-    description = `temperature from ${formatValue(input.from)} to ${formatValue(input.to)} °C, evenly spaced, ${n} points`;
+    description = `temperature from ${formatValue(input.from)} to ${formatValue(input.to)} °C, evenly spaced, ${n} cases`;
   }
   const baseName = `${yShort} vs ${label}`;
   if (input.fixed.length > 0) {

@@ -394,6 +394,11 @@ if (!haveChromium && underCI) {
       });
       await page.screenshot({ path: path.join(SHOTS, s.shot) });
     }
+    // the case series' preview: the chart drawn in the pane, the computed values, the formula
+    await openSection(page, 'Case series');
+    await page.locator('#sw-chart svg').evaluate((e) => e.scrollIntoView({ block: 'start' }));
+    await page.evaluate(() => window.scrollBy(0, -40));
+    await page.screenshot({ path: path.join(SHOTS, 'case-series-preview.png') });
     expect(cspViolations).toEqual([]);
     await page.close();
   });
@@ -443,7 +448,7 @@ if (!haveChromium && underCI) {
     await commit(page.getByLabel('Cases (both ends included)'), '9');
     await commit(page.getByLabel('Value of Fe2+ (activity)'), '0.01');
     expect(await page.locator('#sw-varied').textContent()).toBe(
-      'Varied: a(Fe3+) from 1e-4 to 1, log-spaced, 9 points.',
+      'Varied: a(Fe3+) from 1e-4 to 1, log-spaced, 9 cases.',
     );
 
     // what will be written, and where
