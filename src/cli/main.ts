@@ -63,6 +63,8 @@ export async function main(argv: readonly string[], io: Io = processIo()): Promi
         return (await import('./tableCommand')).tableCommand(rest, io);
       case 'demo':
         return await (await import('./demo')).demoCommand(rest, io);
+      case 'eph':
+        return (await import('./ephCommand')).ephCommand(rest, io);
       default:
         throw new UsageError(`unknown command "${command}"; the commands are eval, recalc, table and demo`);
     }

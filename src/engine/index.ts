@@ -105,3 +105,47 @@ export {
 // activity and reference electrodes
 export * from './activity';
 export * from './references';
+
+// species-header grammar (i11): one reading of `left:Ag+`, `l:Ag+`, `pH`, `left:pH`
+export {
+  type SpeciesHeaderParts,
+  splitSpeciesHeader,
+  canonicalSpeciesHeader,
+} from './notation/speciesHeader';
+
+// E–pH (Pourbaix) diagrams
+export { EPH_ELEMENTS, type EphElement } from './eph/elements';
+export {
+  type SpeciesGibbs,
+  type EphPhaseKind,
+  type EphClass,
+  type EphPlane,
+  type EphPlanes,
+  type EphPoint,
+  type EphWindow,
+  type EphRegion,
+  type EphBoundary,
+  type EphWaterLine,
+  type EphDiagram,
+  EPH_LIMITS,
+  DEFAULT_EPH_WINDOW,
+  defaultSpeciesGibbs,
+  defaultEphWindow,
+  findEphElement,
+  ephPlanes,
+  ephDiagram,
+  predominantSpecies,
+  waterLines,
+  clearEphCache,
+} from './eph/diagram';
+export {
+  type EphMode,
+  type CaseColumn,
+  type EphLineRow,
+  EPH_LINE_HEADER,
+  predominantCases,
+  classifySpecies,
+  ephLineRows,
+} from './eph/cases';
+export { type EphSvgOptions, EPH_CAUTION, EPH_CLASS_STYLE, renderEphSvg } from './eph/svg';
+export { EPH_SPECIES } from './data/species/ephSpecies';

@@ -4,7 +4,7 @@
  * shows); #NUM! is for numeric range; #N/A for "not in the table".
  */
 import { isEngineError, type EngineErrorKind } from '../engine';
-import type { CellError, ErrorCode } from './catalogue';
+import type { CellError, ErrorCode } from './cellTypes';
 
 const CODE_BY_KIND: Record<EngineErrorKind, ErrorCode> = {
   parse: '#VALUE!',

@@ -133,20 +133,20 @@ describe('published values', () => {
     expect(num(call(F.COMBINE, [[0.771, -0.447]], [[1, 2]]))).toBeCloseTo((0.771 - 2 * 0.447) / 3, 12);
   });
 
-  it('SOURCE names the publication; DIAGRAM writes the activities in', () => {
+  it('SOURCE names the publication; CELLNOTATION writes the activities in', () => {
     const s = call(F.SOURCE, c('Cu2+/Cu'));
     expect(String(s[0]![0])).toContain('OpenStax Chemistry 2e, Appendix L');
-    expect(call(F.DIAGRAM, c('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]])).toEqual([
+    expect(call(F.CELLNOTATION, c('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]])).toEqual([
       ['Zn(s) | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu(s)'],
     ]);
   });
 
-  it('POTENTIALS spills the table with a header row; CHECKTABLE says OK or lists the problems', () => {
-    const t = call(F.POTENTIALS, c('Cu'));
+  it('LISTTABLE spills the table with a header row; CHECKTABLE says OK or lists the problems', () => {
+    const t = call(F.LISTTABLE, c('Cu'));
     expect(t.length).toBeGreaterThan(2);
     expect(t[0]!).toHaveLength(4);
     expect(t.find((r) => r[0] === 'Cu2+ + 2 e- -> Cu')?.[1]).toBe(0.337);
-    expect(call(F.POTENTIALS).length).toBeGreaterThan(60);
+    expect(call(F.LISTTABLE).length).toBeGreaterThan(60);
     expect(call(F.CHECKTABLE, [['Cu2+ + 2 e- -> Cu', 0.34, '', 'my lab']])).toEqual([['OK']]);
     const problems = call(F.CHECKTABLE, [
       ['Cu2+ + e- -> Cu', 0.34, '', 'typo'],

@@ -1,7 +1,120 @@
 import type { SpeciesThermoRecord } from './types';
 
 /**
- * Species that E–pH (Pourbaix) diagrams need beyond those of the potentials table:
- * oxides, hydroxides, oxyanions and hydroxo complexes.
+ * Species that E–pH (Pourbaix) diagrams need: for each element the metal, its aqueous ions,
+ * oxides, hydroxides, oxyanions and hydroxo complexes, plus water and its ions.
+ *
+ * Source set: the NBS tables of chemical thermodynamic properties (Wagman et al., J. Phys.
+ * Chem. Ref. Data 11, Suppl. 2, 1982), recalled from memory, for every value unless the
+ * record's source names Pourbaix, Atlas of Electrochemical Equilibria in Aqueous Solutions
+ * (1966), also from memory. Units: kJ/mol, J/(mol·K); 298.15 K, 1 bar.
+ *
+ * `[table]` in a comment marks a species that the potentials table's species also are, so
+ * that the integrator can dedupe these records with those of the species data layer.
  */
-export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [];
+const NBS = 'NBS tables (Wagman et al. 1982), from memory';
+const POURBAIX = 'Pourbaix, Atlas of Electrochemical Equilibria (1966), from memory';
+
+export const EPH_SPECIES: readonly SpeciesThermoRecord[] = [
+  // water and its ions
+  { species: 'H2O(l)', dfGkJ: -237.129, dfHkJ: -285.83, sJK: 69.91, cpJK: 75.291, source: NBS }, // [table]
+  { species: 'H+', dfGkJ: 0, dfHkJ: 0, sJK: 0, cpJK: 0, source: `${NBS} (convention)` }, // [table]
+  { species: 'OH-', dfGkJ: -157.244, dfHkJ: -229.994, sJK: -10.75, cpJK: -148.5, source: NBS }, // [table]
+  { species: 'O2(g)', dfGkJ: 0, dfHkJ: 0, sJK: 205.138, cpJK: 29.355, source: NBS }, // [table]
+  { species: 'H2(g)', dfGkJ: 0, dfHkJ: 0, sJK: 130.684, cpJK: 28.824, source: NBS }, // [table]
+
+  // iron
+  { species: 'Fe(s)', dfGkJ: 0, dfHkJ: 0, sJK: 27.28, cpJK: 25.1, source: NBS }, // [table]
+  { species: 'Fe2+', dfGkJ: -78.9, dfHkJ: -89.1, sJK: -137.7, source: NBS }, // [table]
+  { species: 'Fe3+', dfGkJ: -4.7, dfHkJ: -48.5, sJK: -315.9, source: NBS }, // [table]
+  { species: 'FeOH 2+', dfGkJ: -229.41, dfHkJ: -290.8, sJK: -142, source: NBS },
+  { species: 'HFeO2-', dfGkJ: -377.7, source: NBS },
+  { species: 'Fe(OH)2(s)', dfGkJ: -486.5, dfHkJ: -569.0, sJK: 88, source: NBS },
+  { species: 'Fe(OH)3(s)', dfGkJ: -696.5, dfHkJ: -823.0, sJK: 106.7, source: NBS },
+  { species: 'Fe3O4(s)', dfGkJ: -1015.4, dfHkJ: -1118.4, sJK: 146.4, cpJK: 143.43, source: NBS },
+  { species: 'Fe2O3(s)', dfGkJ: -742.2, dfHkJ: -824.2, sJK: 87.4, cpJK: 103.85, source: NBS },
+
+  // copper
+  { species: 'Cu(s)', dfGkJ: 0, dfHkJ: 0, sJK: 33.15, cpJK: 24.435, source: NBS }, // [table]
+  { species: 'Cu+', dfGkJ: 49.98, dfHkJ: 71.67, sJK: 40.6, source: NBS }, // [table]
+  { species: 'Cu2+', dfGkJ: 65.49, dfHkJ: 64.77, sJK: -99.6, source: NBS }, // [table]
+  { species: 'Cu2O(s)', dfGkJ: -146.0, dfHkJ: -168.6, sJK: 93.14, cpJK: 63.64, source: NBS },
+  { species: 'CuO(s)', dfGkJ: -129.7, dfHkJ: -157.3, sJK: 42.63, cpJK: 42.3, source: NBS },
+  { species: 'HCuO2-', dfGkJ: -258.5, source: NBS },
+  { species: 'CuO2 2-', dfGkJ: -183.6, source: NBS },
+
+  // zinc
+  { species: 'Zn(s)', dfGkJ: 0, dfHkJ: 0, sJK: 41.63, cpJK: 25.4, source: NBS }, // [table]
+  { species: 'Zn2+', dfGkJ: -147.06, dfHkJ: -153.89, sJK: -112.1, cpJK: 46, source: NBS }, // [table]
+  { species: 'ZnO(s)', dfGkJ: -318.3, dfHkJ: -348.28, sJK: 43.64, cpJK: 40.25, source: NBS },
+  { species: 'HZnO2-', dfGkJ: -464.0, source: NBS },
+  { species: 'ZnO2 2-', dfGkJ: -384.2, source: NBS },
+
+  // aluminium
+  { species: 'Al(s)', dfGkJ: 0, dfHkJ: 0, sJK: 28.33, cpJK: 24.35, source: NBS }, // [table]
+  { species: 'Al3+', dfGkJ: -485.0, dfHkJ: -531, sJK: -321.7, source: NBS }, // [table]
+  {
+    species: 'Al2O3(s)',
+    dfGkJ: -1582.3,
+    dfHkJ: -1675.7,
+    sJK: 50.92,
+    cpJK: 79.04,
+    source: `${NBS}; corundum`,
+  },
+  { species: 'AlO2-', dfGkJ: -830.9, dfHkJ: -930.9, sJK: -36.8, source: NBS },
+
+  // nickel
+  { species: 'Ni(s)', dfGkJ: 0, dfHkJ: 0, sJK: 29.87, cpJK: 26.07, source: NBS }, // [table]
+  { species: 'Ni2+', dfGkJ: -45.6, dfHkJ: -54.0, sJK: -128.9, source: NBS }, // [table]
+  { species: 'Ni(OH)2(s)', dfGkJ: -447.2, dfHkJ: -529.7, sJK: 88, source: NBS }, // [table: NiO2/Ni(OH)2]
+  { species: 'HNiO2-', dfGkJ: -349.2, source: NBS },
+  { species: 'Ni3O4(s)', dfGkJ: -711.9, source: POURBAIX },
+  { species: 'Ni2O3(s)', dfGkJ: -469.7, source: POURBAIX },
+  { species: 'NiO2(s)', dfGkJ: -215.1, source: POURBAIX }, // [table]
+
+  // chromium
+  { species: 'Cr(s)', dfGkJ: 0, dfHkJ: 0, sJK: 23.77, cpJK: 23.35, source: NBS }, // [table]
+  { species: 'Cr2+', dfGkJ: -176.1, source: POURBAIX },
+  { species: 'Cr3+', dfGkJ: -215.5, source: POURBAIX }, // [table]
+  { species: 'Cr2O3(s)', dfGkJ: -1058.1, dfHkJ: -1139.7, sJK: 81.2, cpJK: 118.74, source: NBS },
+  { species: 'CrO2-', dfGkJ: -535.9, source: POURBAIX },
+  { species: 'HCrO4-', dfGkJ: -764.7, dfHkJ: -878.2, sJK: 184.1, source: NBS },
+  { species: 'CrO4 2-', dfGkJ: -727.75, dfHkJ: -881.15, sJK: 50.21, source: NBS },
+
+  // lead
+  { species: 'Pb(s)', dfGkJ: 0, dfHkJ: 0, sJK: 64.81, cpJK: 26.44, source: NBS }, // [table]
+  { species: 'Pb2+', dfGkJ: -24.43, dfHkJ: -1.7, sJK: 10.5, source: NBS }, // [table]
+  { species: 'PbO(s)', dfGkJ: -188.93, dfHkJ: -218.99, sJK: 66.5, cpJK: 45.81, source: `${NBS}; red` },
+  { species: 'Pb3O4(s)', dfGkJ: -601.2, dfHkJ: -718.4, sJK: 211.3, cpJK: 146.9, source: NBS },
+  { species: 'PbO2(s)', dfGkJ: -217.33, dfHkJ: -277.4, sJK: 68.6, cpJK: 64.64, source: NBS }, // [table]
+  { species: 'HPbO2-', dfGkJ: -338.9, source: NBS },
+
+  // tin
+  { species: 'Sn(s)', dfGkJ: 0, dfHkJ: 0, sJK: 51.55, cpJK: 26.99, source: `${NBS}; white tin` }, // [table]
+  { species: 'Sn2+', dfGkJ: -27.2, dfHkJ: -8.8, sJK: -17, source: NBS }, // [table]
+  { species: 'Sn4+', dfGkJ: 2.5, dfHkJ: 30.5, sJK: -117, source: NBS }, // [table]
+  { species: 'SnO(s)', dfGkJ: -256.9, dfHkJ: -285.8, sJK: 56.5, cpJK: 44.31, source: NBS },
+  { species: 'SnO2(s)', dfGkJ: -519.6, dfHkJ: -580.7, sJK: 52.3, cpJK: 52.59, source: NBS },
+  { species: 'HSnO2-', dfGkJ: -410.0, source: NBS },
+  { species: 'SnO3 2-', dfGkJ: -574.1, source: POURBAIX },
+
+  // magnesium
+  { species: 'Mg(s)', dfGkJ: 0, dfHkJ: 0, sJK: 32.68, cpJK: 24.89, source: NBS }, // [table]
+  { species: 'Mg2+', dfGkJ: -454.8, dfHkJ: -466.85, sJK: -138.1, source: NBS }, // [table]
+  { species: 'MgO(s)', dfGkJ: -569.43, dfHkJ: -601.7, sJK: 26.94, cpJK: 37.15, source: NBS },
+  {
+    species: 'Mg(OH)2(s)',
+    dfGkJ: -833.51,
+    dfHkJ: -924.54,
+    sJK: 63.18,
+    cpJK: 77.03,
+    source: `${NBS}; brucite`,
+  },
+
+  // silver
+  { species: 'Ag(s)', dfGkJ: 0, dfHkJ: 0, sJK: 42.55, cpJK: 25.351, source: NBS }, // [table]
+  { species: 'Ag+', dfGkJ: 77.107, dfHkJ: 105.579, sJK: 72.68, cpJK: 21.8, source: NBS }, // [table]
+  { species: 'Ag2O(s)', dfGkJ: -11.2, dfHkJ: -31.05, sJK: 121.3, cpJK: 65.86, source: NBS },
+  { species: 'AgO(s)', dfGkJ: 10.8, source: POURBAIX },
+  { species: 'Ag(OH)2-', dfGkJ: -260.2, source: NBS },
+];
