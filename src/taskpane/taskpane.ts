@@ -14,7 +14,7 @@
 import './taskpane.css';
 import { BUILTIN_POTENTIALS } from '../engine/index';
 import { type ChartModel, chartModel } from './chart';
-import { ephSheetPlan, ephSupport, readEphForm, sanitizedSvg } from './ephSection';
+import { ephLines, ephSheetPlan, ephSupport, readEphForm, sanitizedSvg } from './ephSection';
 import { decimalSeparatorOf, hostLocale, localNumber } from './locale';
 import { readRangeValues, writeNewSheet } from './officeActions';
 import { filterPotentials, planPotentialsSheet } from './potentialsSheet';
@@ -175,6 +175,7 @@ function selectTab(tab: HTMLButtonElement, focus = false): void {
   }
   if (focus) tab.focus();
   if (tab.id === 'tab-series') renderChart();
+  if (tab.id === 'tab-eph' && byId('eph-diagram').childElementCount === 0) drawEph();
 }
 
 function onTabKey(ev: KeyboardEvent): void {
@@ -670,7 +671,7 @@ function drawEph(): void {
   const input = ephInput();
   const box = byId('eph-diagram');
   if (!input.ok || !eph.render) return;
-  const width = Math.max(150, box.clientWidth);
+  const width = box.clientWidth;
   let text: string;
   try {
     text = eph.render({
@@ -679,7 +680,7 @@ function drawEph(): void {
       tempC: input.tempC,
       referenceScale: input.referenceScale,
       widthPx: width,
-      heightPx: Math.round(width * 1.1),
+      heightPx: Math.round(Math.max(320, width) * 1.15),
     });
   } catch (error) {
     sinkFor(byId('eph-status')).show(
@@ -700,16 +701,23 @@ function drawEph(): void {
       `E–pH diagram of ${input.element} at activity ${formatValue(input.activity)}, ${formatValue(input.tempC)} °C`,
     );
   box.replaceChildren(el);
+  byId('eph-status').hidden = true;
 }
 
 async function writeEph(): Promise<void> {
   const input = ephInput();
   if (!input.ok) return;
+  const lines = ephLines(input);
+  const sink = sinkFor(byId('eph-status'));
+  if (typeof lines === 'string') {
+    sink.show('error', `Writing the E–pH lines failed: ${lines}`);
+    return;
+  }
   await withBusy(() =>
     runReported(
       'Writing the E–pH lines',
-      () => writeNewSheet((existing) => ephSheetPlan(input, existing)),
-      sinkFor(byId('eph-status')),
+      () => writeNewSheet((existing) => ephSheetPlan(input, Math.max(0, lines.length - 1), existing)),
+      sink,
       (p) => p.summary,
     ),
   );
@@ -720,13 +728,14 @@ function startEph(): void {
   byId('tab-eph').hidden = false;
   byId<HTMLSelectElement>('eph-element').replaceChildren(
     ...eph.elements.map((e) => {
-      const o = make('option', { text: e });
-      o.value = e;
+      const o = make('option', { text: e.name ? `${e.symbol} (${e.name})` : e.symbol });
+      o.value = e.symbol;
       return o;
     }),
   );
   byId<HTMLInputElement>('eph-activity').value = localNumber('1e-6', decimalComma ? ',' : '.');
   for (const id of ['eph-activity', 'eph-temp']) onCommit(byId(id), () => void ephInput());
+  for (const id of ['eph-element', 'eph-scale']) byId(id).addEventListener('change', () => void ephInput());
   byId('eph-draw').addEventListener('click', drawEph);
   byId('eph-write').addEventListener('click', () => void writeEph());
 }

@@ -617,6 +617,52 @@ if (!haveChromium && underCI) {
     await page.close();
   });
 
+  (ENGINE_HAS_EPH ? test : test.skip)(
+    'the E–pH section: draws on opening, redraws with a second axis, writes a new sheet with a chart',
+    async () => {
+      const page = await openPane(MOCK_HOST, { existing: ['Sheet1', 'E-pH Fe'] });
+      await page.getByText('Connected to Excel.').waitFor();
+      await openSection(page, 'E–pH diagram');
+      const diagram = page.locator('#eph-diagram svg');
+      await diagram.waitFor();
+      expect(await diagram.getAttribute('role')).toBe('img');
+      expect(await diagram.locator('title').first().textContent()).toContain('iron (Fe)');
+      expect(await diagram.locator('script, foreignObject').count()).toBe(0);
+      // the drawing fits the pane: no sideways scrolling
+      expect(await scrollsSideways(page)).toBe(false);
+      await page.getByLabel('Second E axis (reference electrode)').selectOption('SCE');
+      await page.getByLabel('Element').selectOption('Zn');
+      await page.locator('#eph-draw').click();
+      await page.locator('#eph-diagram svg title', { hasText: 'zinc (Zn)' }).waitFor();
+      expect(await page.locator('#eph-diagram svg').textContent()).toContain('SCE');
+      expect(await axeViolations(page)).toEqual([]);
+      // a bad activity: one sentence beside the box, Draw and Write say what is missing
+      await commit(page.getByLabel('Activity of dissolved species'), '5');
+      expect(await page.locator('#eph-err-activity').textContent()).toContain('at most 1');
+      expect(await page.locator('#eph-draw').isDisabled()).toBe(true);
+      expect(await page.locator('#eph-why').textContent()).toBe(
+        'Not ready: Activity needs fixing (see the message beside it).',
+      );
+      await commit(page.getByLabel('Activity of dissolved species'), '1e-6');
+      await page.getByLabel('Element').selectOption('Fe');
+      await page.locator('#eph-write').click();
+      await page.locator('#eph-status.success', { hasText: 'Created sheet "E-pH Fe (2)"' }).waitFor();
+      const sheets = await recordedSheets(page);
+      expect(sheets.find((x) => x.name === 'E-pH Fe')?.ranges).toEqual([]);
+      const sheet = sheets.find((x) => x.name === 'E-pH Fe (2)');
+      expect(written(sheet, 'A7').formulas).toEqual([['=ECHEM.EPHLINES(B1,B2,B3)']]);
+      expect(written(sheet, 'B1').values).toEqual([['Fe']]);
+      expect(written(sheet, 'H7:I8').formulas).toEqual([
+        ['=C8', '=D8'],
+        ['=E8', '=F8'],
+      ]);
+      expect(sheet?.charts[0]?.type).toBe('XYScatterLines');
+      expect(sheet?.charts[0]?.axes.valueAxis.title.text).toBe('E / V vs SHE');
+      expect(await axeViolations(page)).toEqual([]);
+      await page.close();
+    },
+  );
+
   test('validation on change, not on each key; one message per problem; the button says what is missing', async () => {
     const page = await openPane(MOCK_HOST);
     await page.getByText('Connected to Excel.').waitFor();
