@@ -631,9 +631,9 @@ if (!haveChromium && underCI) {
       // the drawing fits the pane: no sideways scrolling
       expect(await scrollsSideways(page)).toBe(false);
       await page.getByLabel('Second E axis (reference electrode)').selectOption('SCE');
-      await page.getByLabel('Element').selectOption('Zn');
+      await page.getByLabel('Element', { exact: true }).selectOption('Zn');
       await page.locator('#eph-draw').click();
-      await page.locator('#eph-diagram svg title', { hasText: 'zinc (Zn)' }).waitFor();
+      await page.locator('#eph-diagram svg title', { hasText: 'zinc (Zn)' }).waitFor({ state: 'attached' });
       expect(await page.locator('#eph-diagram svg').textContent()).toContain('SCE');
       expect(await axeViolations(page)).toEqual([]);
       // a bad activity: one sentence beside the box, Draw and Write say what is missing
@@ -644,7 +644,7 @@ if (!haveChromium && underCI) {
         'Not ready: Activity needs fixing (see the message beside it).',
       );
       await commit(page.getByLabel('Activity of dissolved species'), '1e-6');
-      await page.getByLabel('Element').selectOption('Fe');
+      await page.getByLabel('Element', { exact: true }).selectOption('Fe');
       await page.locator('#eph-write').click();
       await page.locator('#eph-status.success', { hasText: 'Created sheet "E-pH Fe (2)"' }).waitFor();
       const sheets = await recordedSheets(page);
