@@ -337,7 +337,7 @@ if (!haveChromium && underCI) {
     { tab: 'Potentials', panel: '#potentials', primary: '#pot-insert', shot: 'potentials.png' },
     { tab: 'Case series', panel: '#series', primary: '#sw-build', shot: 'case-series.png' },
     ...(ENGINE_HAS_EPH
-      ? [{ tab: 'E–pH diagram', panel: '#eph', primary: '#eph-draw', shot: 'eph-diagram.png' }]
+      ? [{ tab: 'E–pH', panel: '#eph', primary: '#eph-draw', shot: 'eph-diagram.png' }]
       : []),
     { tab: 'Reference', panel: '#reference', primary: '#ref-search', shot: 'reference.png' },
   ];
@@ -622,7 +622,7 @@ if (!haveChromium && underCI) {
     async () => {
       const page = await openPane(MOCK_HOST, { existing: ['Sheet1', 'E-pH Fe'] });
       await page.getByText('Connected to Excel.').waitFor();
-      await openSection(page, 'E–pH diagram');
+      await openSection(page, 'E–pH');
       const diagram = page.locator('#eph-diagram svg');
       await diagram.waitFor();
       expect(await diagram.getAttribute('role')).toBe('img');
