@@ -43,6 +43,11 @@ export const RESULT_UNITS: Readonly<Record<string, string>> = {
   DIAGRAM: 'text (the cell diagram)',
   POTENTIALS: 'a table: half-reaction, E° in V vs SHE, dE°/dT in mV/K, source',
   CHECKTABLE: 'text (one line per problem row, or OK)',
+  CELLNOTATION: 'text (the IUPAC cell diagram)',
+  LISTTABLE: 'a table: half-reaction, E° in V vs SHE, dE°/dT in mV/K, source',
+  PREDOMINANT: 'text (the stable species)',
+  EPHCLASS: 'text: immunity, corrosion or passivation',
+  EPHLINES: 'a table: species A, species B, pH1, E1 in V vs SHE, pH2, E2 in V vs SHE',
 };
 
 /** The result unit of a function id. */
