@@ -659,12 +659,10 @@ function refreshEphButtons(): void {
   draw.disabled = ephProblem !== null || eph.render === null;
   const write = byId<HTMLButtonElement>('eph-write');
   const why = byId('eph-why');
-  setWritable(
-    write,
-    null,
-    ephProblem ?? (eph.lines ? null : 'This build has no ECHEM.EPHLINES to write the lines.'),
-  );
-  why.textContent = ephProblem ?? (write.disabled && !host.excel ? NEEDS_EXCEL : '');
+  const noLines = eph.lines ? null : 'This build has no ECHEM.EPHLINES to write the lines.';
+  setWritable(write, why, ephProblem ?? noLines);
+  // a problem with the inputs stops Draw too, so it is what the line beside both buttons says
+  if (ephProblem !== null) why.textContent = ephProblem;
 }
 
 function drawEph(): void {
