@@ -225,9 +225,18 @@ export class EchemPlugin extends FunctionPlugin {
     if (spec === undefined) {
       return new HfCellError(ErrorType.NAME, `${ast.procedureName} is not an ECHEM function`);
     }
-    return this.runFunction(ast.args, state, this.metadata(ast.procedureName), (...raw: unknown[]) =>
-      this.evaluate(spec, ast, state, raw),
-    ) as InterpreterValue;
+    // The arguments are evaluated here rather than through runFunction, which would answer
+    // for the function when one argument is an error: the catalogue decides what an error in
+    // an input means, as it does for the Excel wrapper (docs/design.md, "Errors").
+    const metadata = this.metadata(ast.procedureName);
+    const raw = this.evaluateArguments(ast.args, state, metadata).map(([value]) => value);
+    if (!this.isNumberOfArgumentValuesValid(metadata.parameters ?? [], raw.length)) {
+      return new HfCellError(
+        ErrorType.NA,
+        `${formulaName(spec)} takes ${spec.params.length} arguments (${spec.params.map((p) => p.name).join(', ')})`,
+      );
+    }
+    return this.evaluate(spec, ast, state, raw);
   }
 
   echemSize(ast: ProcedureAst, state: InterpreterState): ArraySize {

@@ -130,6 +130,8 @@ export {
   EPH_LIMITS,
   DEFAULT_EPH_WINDOW,
   defaultSpeciesGibbs,
+  makeSpeciesGibbs,
+  type SpeciesRecordLookup,
   defaultEphWindow,
   findEphElement,
   ephPlanes,

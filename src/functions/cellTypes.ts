@@ -29,6 +29,9 @@ export type ResultCell = number | string | CellError;
 /** What a catalogue function returns: always rows of cells (a 1×1 grid for one value). */
 export type Result = ResultCell[][];
 
+/** The cells of a user's potentials table, or null for the built-in table. */
+export type TableCells = readonly (readonly unknown[])[] | null;
+
 /** True where `v` is a {@link CellError}. */
 export function isCellError(v: unknown): v is CellError {
   return typeof v === 'object' && v !== null && (v as { kind?: unknown }).kind === 'cell-error';

@@ -366,7 +366,7 @@ export function EPHCLASS(
 }
 
 /**
- * An element's E–pH diagram as line segments (species A, species B, pH1, E1, pH2, E2) plus the two water lines, for an XY chart. Example: =ECHEM.EPHLINES("Zn") gives {species A, species B, pH1, E1 (V vs SHE), pH2, E2 (V vs SHE); Zn(s), ZnO2 2-, 13.9804, -1.36492, 14, -1.36725; Zn(s), HZnO2-, 10.0177, -1.01328, 13.9804, -1.36492; Zn(s), ZnO(s), 8.77163, -0.939563, 10.0177, -1.01328; … (10 rows)}.
+ * An element's E–pH diagram as line segments (species A, species B, pH1, E1, pH2, E2) plus the two water lines, for an XY chart. Example: =ECHEM.EPHLINES("Zn") gives {species A, species B, pH1, E1 (V vs SHE), pH2, E2 (V vs SHE); Zn(s), ZnO2 2-, 13.9804, -1.36492, 14, -1.36725; Zn(s), HZnO2-, 10.0177, -1.01328, 13.9804, -1.36492; Zn(s), ZnO(s), 8.76681, -0.939278, 10.0177, -1.01328; … (10 rows)}.
  * @customfunction EPHLINES
  * @helpurl https://localhost:3000/taskpane.html#ref-ephlines
  * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag

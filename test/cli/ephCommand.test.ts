@@ -11,9 +11,9 @@ import { captureIo, F, tempDir } from './helpers';
 const dir = tempDir('eph');
 const parser = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '@' });
 
-/** Zn2+/Zn at activity a by hand: ΔfG°(Zn2+) = −147.06 kJ/mol (NBS tables, Wagman et al. 1982, from memory). */
+/** Zn2+/Zn at activity a by hand: E° = −0.7618 V (OpenStax Chemistry 2e, Appendix L), slope (s/2) per decade. */
 const znLine = (log10a: number): number =>
-  -147.06e3 / (2 * F) + ((8.31446261815324 * 298.15 * Math.LN10) / F / 2) * log10a;
+  -0.7618 + ((8.31446261815324 * 298.15 * Math.LN10) / F / 2) * log10a;
 
 describe('potentia eph', () => {
   test('writes a parseable SVG of the diagram with the reference axis', async () => {

@@ -56,8 +56,8 @@ describe('EPHLINES', () => {
     const r = callFunction('EPHLINES', ['Zn']);
     expect(r[0]).toEqual(['species A', 'species B', 'pH1', 'E1 (V vs SHE)', 'pH2', 'E2 (V vs SHE)']);
     const zn = r.find((row) => row[0] === 'Zn(s)' && row[1] === 'Zn2+');
-    // Zn2+ + 2e- -> Zn: E = ΔfG°(Zn2+)/(2F) + (s/2) log a, ΔfG° = −147.06 kJ/mol
-    expect(Math.abs((zn?.[3] as number) - (-147.06e3 / (2 * F) + (s25 / 2) * -6))).toBeLessThan(1e-9);
+    // Zn2+ + 2e- -> Zn: E = E° + (s/2) log a, E° = −0.7618 V (OpenStax Chemistry 2e, Appendix L)
+    expect(Math.abs((zn?.[3] as number) - (-0.7618 + (s25 / 2) * -6))).toBeLessThan(1e-9);
     expect(r[r.length - 1]?.slice(0, 2)).toEqual(['O2(g)', 'H2O(l)']);
     for (const row of r.slice(1)) expect(row).toHaveLength(6);
   });

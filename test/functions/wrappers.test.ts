@@ -11,6 +11,7 @@ import { StubError } from './customFunctionsStub';
 import * as F from '../../src/functions/functions';
 import { CATALOGUE, type Result } from '../../src/functions/catalogue';
 import { argFromExcel, resultToExcel, toExcel } from '../../src/functions/excelErrors';
+import { F as F_SI, s } from '../support';
 
 type Cell = number | string | StubError;
 const call = (fn: (...a: any[]) => any[][], ...args: unknown[]): Cell[][] => fn(...args) as Cell[][]; // eslint-disable-line @typescript-eslint/no-explicit-any
@@ -33,11 +34,9 @@ function err(result: Cell[][]): StubError {
   return v as StubError;
 }
 
-// SI 2019 exact constants: F = N_A·e, R = N_A·k.
-const N_A = 6.02214076e23;
-const F_C = N_A * 1.602176634e-19;
-const R_J = N_A * 1.380649e-23;
-const slopeAt = (tC: number) => (R_J * (tC + 273.15) * Math.LN10) / F_C;
+// SI 2019 exact constants (F = N_A·e, R = N_A·k) and RT ln10/F, from the shared test support
+const F_C = F_SI;
+const slopeAt = s;
 
 describe('association', () => {
   it('associates every catalogue id once, with the exported function of that name', () => {
@@ -258,10 +257,13 @@ describe('errors', () => {
     expect(huge.message).toBeUndefined(); // Excel shows no message on #NUM!
   });
 
-  it('an error value in an input cell reaches the catalogue as its code and is named in the message', () => {
+  it('an error value in an input cell propagates: #N/A stays #N/A, with a message naming the argument', () => {
     const e = err(call(F.POTENTIAL, c('Cu2+/Cu'), c('Cu2+'), c(0.01), [[new StubError('#N/A')]]));
-    expect(e.code).toBe('#VALUE!');
-    expect(e.message).toContain('#N/A');
+    expect(e.code).toBe('#N/A');
+    expect(e.message).toBe('temp_C holds the error #N/A from its cell: fix that cell (or the formula that gives it) first.');
+    const d = err(call(F.POTENTIAL, c('Cu2+/Cu'), c('Cu2+'), [[new StubError('#DIV/0!')]]));
+    expect(d.code).toBe('#VALUE!');
+    expect(d.message).toContain('values (Cu2+) holds the error #DIV/0!');
   });
 });
 

@@ -56,19 +56,24 @@ const T0_K = 298.15;
 
 const RECORDS = new Map<string, SpeciesThermoRecord>(EPH_SPECIES.map((r) => [r.species, r]));
 
-/**
- * The default {@link SpeciesGibbs}, built on EPH_SPECIES: Gibbs–Helmholtz with the formation
- * enthalpy taken constant (ΔfCp = 0), ΔfG°(T) = ΔfH° − T (ΔfH° − ΔfG°)/T0, where the record has
- * ΔfH°; ΔfG°(25 °C) at every temperature where it has none (those records are few and say so
- * in the element notes). Domain 0–100 °C (checked by callers). Precision: the ΔfCp = 0 error is
- * below about 1 mV in a boundary at 100 °C for water (ΔfCp ≈ 32 J/(mol·K)).
- *
- * @throws EngineError (`notFound`) for a species without a record
- * @example
- * defaultSpeciesGibbs('H2O(l)', 25) // −237.129
- * defaultSpeciesGibbs('H2O(l)', 60) // ≈ −231.41
- */
-export const defaultSpeciesGibbs: SpeciesGibbs = (speciesText, tempC) => {
+/** The elements' reference states, for formation entropies and heat capacities. */
+const ELEMENT_STATE: Readonly<Record<string, { species: string; per: number }>> = {
+  H: { species: 'H2(g)', per: 0.5 },
+  O: { species: 'O2(g)', per: 0.5 },
+};
+
+interface FormationTerms {
+  readonly gKJ: number;
+  /** ΔfS°, kJ/(mol·K) */
+  readonly sKJK: number;
+  /** ΔfCp°, kJ/(mol·K) */
+  readonly cpKJK: number;
+}
+
+/** A species' record by its text ("Fe2+", "Fe2O3(s)", "H2(g)"); throws where there is none. */
+export type SpeciesRecordLookup = (speciesText: string) => SpeciesThermoRecord;
+
+function ephRecord(speciesText: string): SpeciesThermoRecord {
   const r = RECORDS.get(speciesText);
   if (!r) {
     throw new EngineError(
@@ -77,10 +82,70 @@ export const defaultSpeciesGibbs: SpeciesGibbs = (speciesText, tempC) => {
       'species',
     );
   }
-  if (r.dfHkJ === undefined) return r.dfGkJ;
-  const tK = tempC + ZERO_CELSIUS_K;
-  return r.dfHkJ - (tK * (r.dfHkJ - r.dfGkJ)) / T0_K;
-};
+  return r;
+}
+
+/**
+ * A {@link SpeciesGibbs} built on any record lookup (the E–pH records by default; the species
+ * data layer's `findSpeciesRecord` once merged): Gibbs–Helmholtz with a constant heat capacity
+ * of formation,
+ * ΔfG°(T) = ΔfG° − (T − T0)·ΔfS° + ΔfCp°·[(T − T0) − T ln(T/T0)], T0 = 298.15 K.
+ *
+ * ΔfS° and ΔfCp° are those of the formation from the elements (H2(g), O2(g), the metal(s)) and,
+ * for an ion, the electrons of the SHE convention (S°(e-) = ½S°(H2), Cp°(e-) = ½Cp°(H2),
+ * ΔfG°(e-) = 0). ΔfS° from the absolute S°; where a record has no S°, (ΔfH° − ΔfG°)/T0; where
+ * it has neither, 0 (ΔfG° keeps its 25 °C value). A species without Cp° contributes none, so
+ * that Σν·ΔfG°(T) over a reaction is the reaction's own Gibbs–Helmholtz expression with
+ * ΔrS° = Σν·S° and ΔrCp° = Σν·Cp° (element and electron terms cancel).
+ *
+ * @example
+ * const gibbs = makeSpeciesGibbs((t) => myRecords.get(t)!);
+ * gibbs('H2O(l)', 60) // ≈ −231.41 kJ/mol
+ */
+export function makeSpeciesGibbs(lookup: SpeciesRecordLookup): SpeciesGibbs {
+  const cache = new Map<string, FormationTerms>();
+  const terms = (speciesText: string): FormationTerms => {
+    const hit = cache.get(speciesText);
+    if (hit) return hit;
+    const r = lookup(speciesText);
+    const sp = parseSpecies(speciesText);
+    const h2 = lookup('H2(g)');
+    // elements -> X^z + z e-: the electrons count on the product side (z < 0 for anions)
+    let sEl = (sp.charge * (h2.sJK ?? 0)) / 2;
+    let cpEl = (sp.charge * (h2.cpJK ?? 0)) / 2;
+    for (const [el, count] of elementsOf(sp)) {
+      const state = ELEMENT_STATE[el];
+      const ref = lookup(state ? state.species : `${el}(s)`);
+      const per = state ? state.per : 1;
+      sEl -= count * per * (ref.sJK ?? 0);
+      cpEl -= count * per * (ref.cpJK ?? 0);
+    }
+    let sJK: number;
+    if (r.sJK !== undefined) sJK = r.sJK + sEl;
+    else if (r.dfHkJ !== undefined) sJK = ((r.dfHkJ - r.dfGkJ) / T0_K) * 1000;
+    else sJK = 0;
+    const t = { gKJ: r.dfGkJ, sKJK: sJK / 1000, cpKJK: ((r.cpJK ?? 0) + cpEl) / 1000 };
+    cache.set(speciesText, t);
+    return t;
+  };
+  return (speciesText, tempC) => {
+    const f = terms(speciesText);
+    const tK = tempC + ZERO_CELSIUS_K;
+    if (tK === T0_K) return f.gKJ;
+    return f.gKJ - (tK - T0_K) * f.sKJK + f.cpKJK * (tK - T0_K - tK * Math.log(tK / T0_K));
+  };
+}
+
+/**
+ * The default {@link SpeciesGibbs}: {@link makeSpeciesGibbs} on the records of EPH_SPECIES.
+ * Domain 0–100 °C (checked by callers).
+ *
+ * @throws EngineError (`notFound`) for a species without a record
+ * @example
+ * defaultSpeciesGibbs('H2O(l)', 25) // −237.129
+ * defaultSpeciesGibbs('H2O(l)', 60) // ≈ −231.41
+ */
+export const defaultSpeciesGibbs: SpeciesGibbs = makeSpeciesGibbs(ephRecord);
 
 /** Whether a species is the metal, a dissolved species or a solid other than the metal. */
 export type EphPhaseKind = 'metal' | 'dissolved' | 'solid';

@@ -39,13 +39,15 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
       note:
         'Anhydrous solids Fe3O4 and Fe2O3 (Pourbaix 1966, Fig. 4 convention); Fe(OH)2 and Fe(OH)3 are ' +
         'in the set but are metastable (Fe(OH)2 disproportionates to Fe + Fe3O4; Fe(OH)3 lies above Fe2O3), ' +
-        'so they never predominate. NBS Fe2+ (−78.90 kJ/mol) puts Fe/Fe2+ about 30 mV above the Atlas.',
+        'so they never predominate. Fe2+ and Fe3+ from the measured E° of their couples.',
     },
     {
       symbol: 'Cu',
       name: 'copper',
       species: ['Cu(s)', 'Cu+', 'Cu2+', 'Cu2O(s)', 'CuO(s)', 'HCuO2-', 'CuO2 2-'],
-      note: 'Cu2O and CuO (tenorite) as the solids; Cu+ disproportionates and never predominates at 1e-6.',
+      note:
+        'Cu2O and CuO (tenorite) as the solids; at 1e-6 Cu+ disproportionates (by 0.2 kJ/mol) and has no region; ' +
+        'at 1e-7 it has a narrow one.',
     },
     {
       symbol: 'Zn',
@@ -73,7 +75,7 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
       species: ['Cr(s)', 'Cr2+', 'Cr3+', 'Cr2O3(s)', 'CrO2-', 'HCrO4-', 'CrO4 2-'],
       note:
         'Anhydrous Cr2O3 as the solid; dichromate left out (a dimer: at 1e-6 it never predominates); ' +
-        'Cr2+, Cr3+ and CrO2- with Atlas values.',
+        'Cr2+ and Cr3+ from the measured E° of Cr2+/Cr and Cr3+/Cr; CrO2- with an Atlas value.',
     },
     {
       symbol: 'Pb',
@@ -101,7 +103,7 @@ export const EPH_ELEMENTS: readonly EphElement[] = Object.freeze(
       species: ['Ag(s)', 'Ag+', 'Ag2O(s)', 'AgO(s)', 'Ag(OH)2-'],
       note:
         'Ag2O and AgO as the solids (AgO with an Atlas value); Ag(OH)2- as the anion. At 1e-6 the ' +
-        'solubility of Ag2O (minimum about 4e-6 near pH 12) exceeds the activity, so Ag2O has no region.',
+        'solubility of Ag2O (minimum about 2e-6 near pH 12) exceeds the activity, so Ag2O has no region.',
     },
   ].map((e) =>
     Object.freeze({

@@ -160,7 +160,7 @@ export function renderEphSvg(diagram: EphDiagram, options: EphSvgOptions = {}): 
     const widthPH = Math.max(...r.polygon.map((p) => p.pH)) - Math.min(...r.polygon.map((p) => p.pH));
     const small = X(w.pHMin + widthPH) - X(w.pHMin) < text.length * 6;
     out.push(
-      `<text class="label" data-species="${esc(r.species)}" x="${num(X(r.centroid.pH))}" y="${num(Y(r.centroid.E) + 4)}"${small ? ' font-size="9"' : ''}>${esc(text)}</text>`,
+      `<text class="label" data-species="${esc(r.species)}" x="${num(Math.min(Math.max(X(r.centroid.pH), left + text.length * 3.5), left + pw - text.length * 3.5))}" y="${num(Y(r.centroid.E) + 4)}"${small ? ' font-size="9"' : ''}>${esc(text)}</text>`,
     );
   }
   out.push('</g>');

@@ -8,7 +8,9 @@
 import { EngineError, STANDARD_TEMP_C, ZERO_CELSIUS_K } from '../../engine';
 import { isInputErrorText } from '../cellTypes';
 import { isBlank, readElectrons, readNumber, readText, readOptionalText } from '../args';
-import type { NumericDomain, ParamSpec } from './types';
+import type { KindName, NumericDomain, ParamSpec } from './types';
+
+export type { KindName } from './types';
 
 /** A temperature in °C, read and checked at the boundary (docs/design.md, "Argument kinds"). */
 export type TempC = number & { readonly __unit: 'degC' };
@@ -156,10 +158,7 @@ export const KINDS = {
     perCase: false,
     about: 'One row or one column of numbers.',
   },
-} as const satisfies Record<string, KindDef>;
-
-/** The name of a parameter kind. */
-export type KindName = keyof typeof KINDS;
+} as const satisfies Record<KindName, KindDef>;
 
 /** The kind definition of a parameter. */
 export function kindOf(p: ParamSpec): KindDef {
@@ -219,10 +218,21 @@ export function inputErrorOf(label: string, code: string): EngineError {
   );
 }
 
+/** A domain as the message says it: "between 0 and 100 °C", "≥ 0 mol/kg", "> 0 and ≤ 1". */
+function domainWords(d: NumericDomain, unit: string): string {
+  const u = unit ? ` ${unit}` : '';
+  if (d.min !== undefined && d.max !== undefined && !d.minExclusive && !d.maxExclusive)
+    return `between ${fmt(d.min)} and ${fmt(d.max)}${u}`;
+  const parts: string[] = [];
+  if (d.min !== undefined) parts.push(`${d.minExclusive ? '>' : '≥'} ${fmt(d.min)}${u}`);
+  if (d.max !== undefined) parts.push(`${d.maxExclusive ? '<' : '≤'} ${fmt(d.max)}${u}`);
+  return parts.join(' and ');
+}
+
 function outside(p: ParamSpec, x: number, d: NumericDomain, unit: string, hint = ''): EngineError {
   return new EngineError(
     'argument',
-    `${p.name} of ${fmt(x)}${unit ? ` ${unit}` : ''} is outside ${describeDomain(d, unit)}${hint}.`,
+    `${p.name} must be ${domainWords(d, unit)}; got ${String(x)}${unit ? ` ${unit}` : ''}${hint}.`,
     p.name,
   );
 }
@@ -233,7 +243,7 @@ function checkDomain(p: ParamSpec, x: number, d: NumericDomain | undefined, unit
   const high = d.max !== undefined && (d.maxExclusive ? !(x < d.max) : !(x <= d.max));
   if (low || high) throw outside(p, x, d, unit);
   if (d.integer && !Number.isInteger(x))
-    throw new EngineError('argument', `${p.name} must be a whole number; got ${fmt(x)}.`, p.name);
+    throw new EngineError('argument', `${p.name} must be a whole number; got ${String(x)}.`, p.name);
   if (d.nonZero && x === 0) throw new EngineError('argument', `${p.name} must not be 0.`, p.name);
 }
 
@@ -251,7 +261,7 @@ export function readTempC(v: unknown, p: ParamSpec, extrapolate = false): TempC 
   if (!(t > -ZERO_CELSIUS_K)) {
     throw new EngineError(
       'argument',
-      `${p.name} must be above absolute zero (−273.15 °C); got ${fmt(t)} °C. Give the temperature in degrees Celsius.`,
+      `${p.name} must be above absolute zero (−273.15 °C); got ${String(t)} °C. Give the temperature in degrees Celsius.`,
       p.name,
     );
   }
@@ -263,9 +273,9 @@ export function readTempC(v: unknown, p: ParamSpec, extrapolate = false): TempC 
     const looksKelvin =
       high && d.max !== undefined && asC >= (d.min ?? -Infinity) && asC <= d.max && t >= ZERO_CELSIUS_K;
     const hint = looksKelvin
-      ? `: it looks like a temperature in kelvin; give it in °C (${fmt(t)} K is ${fmt(Math.round(asC * 100) / 100)} °C)`
-      : p.extrapolateParam && !extrapolate
-        ? `, the range of the aqueous data; set ${p.extrapolateParam} to TRUE to extrapolate beyond it`
+      ? `: it looks like a temperature in kelvin; give it in °C (${String(t)} K is ${fmt(Math.round(asC * 100) / 100)} °C)`
+      : d === AQUEOUS_TEMP_RANGE_C
+        ? `, outside the aqueous range of the data${p.extrapolateParam ? `; set ${p.extrapolateParam} to TRUE to extrapolate` : ''}`
         : '';
     throw outside(p, t, d, '°C', hint);
   }
@@ -284,7 +294,7 @@ export function readPotentialV(v: unknown, p: ParamSpec): PotentialV {
   if (!p.allowBeyond10V && Math.abs(e) > MAX_POTENTIAL_V) {
     throw new EngineError(
       'argument',
-      `${p.name} of ${fmt(e)} V is beyond ±${MAX_POTENTIAL_V} V: were millivolts typed as volts? Give ${fmt(e / 1000)} for ${fmt(e)} mV.`,
+      `${p.name} of ${String(e)} V is beyond ±${MAX_POTENTIAL_V} V: were millivolts typed as volts? Give ${String(e / 1000)} for ${String(e)} mV.`,
       p.name,
     );
   }

@@ -6,9 +6,41 @@
  * formula-bar metadata, the runner's spill prediction, the docs and the bad-input catalogue —
  * is derived from it.
  */
-import type { Arg, ErrorCode, Result, ResultCell, Scalar } from '../cellTypes';
-import type { KindName } from './kinds';
-import type { TableCells } from './values';
+import type { Arg, ErrorCode, Result, ResultCell, Scalar, TableCells } from '../cellTypes';
+
+/** The kinds of parameter (their units, domains and readers are in kinds.ts). */
+export type KindName =
+  | 'reaction'
+  | 'reactionOrPotential'
+  | 'species'
+  | 'speciesHeader'
+  | 'values'
+  | 'temperature'
+  | 'potential'
+  | 'activity'
+  | 'molality'
+  | 'molarity'
+  | 'ionicStrength'
+  | 'currentDensity'
+  | 'current'
+  | 'charge'
+  | 'mass'
+  | 'length'
+  | 'time'
+  | 'fraction'
+  | 'count'
+  | 'electrons'
+  | 'number'
+  | 'pH'
+  | 'ionSize'
+  | 'choice'
+  | 'text'
+  | 'reference'
+  | 'salt'
+  | 'element'
+  | 'flag'
+  | 'table'
+  | 'numberList';
 
 /** A closed or open numeric bound. */
 export interface NumericDomain {

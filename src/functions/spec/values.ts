@@ -4,12 +4,11 @@
  * See docs/design.md, "Sweeps".
  */
 import { EngineError, canonicalSpeciesHeader } from '../../engine';
-import { isInputErrorText, type Arg, type Grid, type Scalar } from '../cellTypes';
+import { isInputErrorText, type Arg, type Grid, type Scalar, type TableCells } from '../cellTypes';
 import { asGrid, asList, isBlank, isBlankGrid, isEmptyTextGrid, readNumber, shapeOf } from '../args';
 import { inputErrorOf } from './kinds';
 
-/** The cells of a user's potentials table, or null for the built-in table. */
-export type TableCells = readonly (readonly unknown[])[] | null;
+export type { TableCells } from '../cellTypes';
 
 /** A table argument: its cells, or null where it is absent or empty. */
 export function tableCells(arg: Arg): TableCells {

@@ -23,12 +23,13 @@ import {
   defaultEphWindow,
   EPH_ELEMENTS,
   EPH_SPECIES,
+  makeSpeciesGibbs,
   findEphElement,
   parseSpecies,
   elementsOf,
 } from '../../../src/engine';
 import type { EphDiagram, EphBoundary } from '../../../src/engine';
-import { F, R, S25, s, engineErrorOf, expectNear } from '../support';
+import { F, R, S25, s, engineErrorOf, expectNear } from '../../support';
 
 const A = 1e-6;
 const LOG_A = -6;
@@ -39,6 +40,29 @@ const logK = (dGKJ: number, tC = 25): number => (-dGKJ * 1000) / (R * (tC + 273.
 
 // ΔfG° of water, NBS (from memory)
 const G_H2O = -237.129;
+
+// Metal ions (and PbO2, NiO2, Cr ions): ΔfG° = nFE° from the measured standard potential of the
+// couple, OpenStax Chemistry 2e, Appendix L (seen), as the species data hold them; the other
+// species of each couple at 0 (metals) or the NBS value named.
+const gE = (n: number, e0V: number): number => (n * F * e0V) / 1000;
+const G_FE2 = gE(2, -0.447); // Fe2+/Fe −0.447 V
+const G_FE3 = G_FE2 + gE(1, 0.771); // Fe3+/Fe2+ 0.771 V
+const G_ZN2 = gE(2, -0.7618);
+const G_AL3 = gE(3, -1.662);
+const G_NI2 = gE(2, -0.257);
+const G_CR2 = gE(2, -0.913); // CRC Handbook 92nd ed. (from memory)
+const G_CR3 = gE(3, -0.744);
+const G_PB2 = gE(2, -0.1262);
+const G_SN2 = gE(2, -0.1375);
+const G_SN4 = G_SN2 + gE(2, 0.151);
+const G_MG2 = gE(2, -2.372);
+const G_AG = gE(1, 0.7996);
+// PbSO4/Pb −0.3505 V and PbO2/PbSO4 1.69 V with NBS ΔfG°(SO4 2-) = −744.53
+const G_PBO2 = -744.53 + gE(2, -0.3505) + 2 * G_H2O + 744.53 + gE(2, 1.69);
+// NiO2 + 2H2O + 2e- -> Ni(OH)2 + 2OH-, 0.49 V, NBS Ni(OH)2 −447.2 and OH- −157.244
+const G_NIO2 = -447.2 + 2 * -157.244 - 2 * G_H2O + gE(2, 0.49);
+// yellow PbO, NBS (from memory)
+const G_PBO = -187.89;
 
 function boundary(d: EphDiagram, a: string, b: string): EphBoundary {
   const hit = d.boundaries.find(
@@ -101,8 +125,9 @@ describe('species data', () => {
   test('each record names its source, and every species text appears once', () => {
     const seen = new Set<string>();
     for (const r of EPH_SPECIES) {
-      expect(r.source).toMatch(/NBS|Pourbaix/);
-      expect(r.source).toMatch(/from memory/);
+      expect(r.source).toMatch(/NBS|Pourbaix|OpenStax|CRC/);
+      // recalled values say so; only OpenStax (read) needs no "from memory"
+      if (!/OpenStax/.test(r.source)) expect(r.source).toMatch(/from memory/);
       expect(seen.has(r.species)).toBe(false);
       seen.add(r.species);
     }
@@ -151,34 +176,34 @@ describe('iron (Atlas, Fe–H2O with Fe3O4 and Fe2O3)', () => {
     ]);
   });
   test('main lines, derived by hand from NBS ΔfG°', () => {
-    // Fe2+ + 2e- -> Fe: E = ΔfG°(Fe2+)/(2F) + (s/2) log a;  ΔfG°(Fe2+) = −78.90
-    expectLine(d, 'Fe(s)', 'Fe2+', e0(-78.9, 2) + (S25 / 2) * LOG_A, 0);
-    // Fe3+ + e- -> Fe2+: E = (ΔfG°(Fe3+) − ΔfG°(Fe2+))/F;  ΔfG°(Fe3+) = −4.7
-    expectLine(d, 'Fe2+', 'Fe3+', e0(-4.7 + 78.9, 1), 0);
-    // 2Fe2+ + 3H2O -> Fe2O3 + 6H+ + 2e-: ΔrG° = −742.2 + 2·78.90 − 3·(−237.129)
+    // Fe2+ + 2e- -> Fe: E = ΔfG°(Fe2+)/(2F) + (s/2) log a;  ΔfG°(Fe2+) from −0.447 V
+    expectLine(d, 'Fe(s)', 'Fe2+', e0(G_FE2, 2) + (S25 / 2) * LOG_A, 0);
+    // Fe3+ + e- -> Fe2+: E = (ΔfG°(Fe3+) − ΔfG°(Fe2+))/F;  ΔfG°(Fe3+) from 0.771 V
+    expectLine(d, 'Fe2+', 'Fe3+', e0(G_FE3 - G_FE2, 1), 0);
+    // 2Fe2+ + 3H2O -> Fe2O3 + 6H+ + 2e-: ΔrG° = −742.2 − 2ΔfG°(Fe2+) − 3·(−237.129)
     // E = E° − 3s pH − s log a(Fe2+)
-    expectLine(d, 'Fe2+', 'Fe2O3(s)', e0(-742.2 + 2 * 78.9 - 3 * G_H2O, 2) - S25 * LOG_A, -3 * S25);
+    expectLine(d, 'Fe2+', 'Fe2O3(s)', e0(-742.2 - 2 * G_FE2 - 3 * G_H2O, 2) - S25 * LOG_A, -3 * S25);
     // 3Fe + 4H2O -> Fe3O4 + 8H+ + 8e-: ΔrG° = −1015.4 + 4·237.129; slope −s
     expectLine(d, 'Fe(s)', 'Fe3O4(s)', e0(-1015.4 - 4 * G_H2O, 8), -S25);
     // 2Fe3O4 + H2O -> 3Fe2O3 + 2H+ + 2e-: ΔrG° = 3(−742.2) − 2(−1015.4) + 237.129; slope −s
     expectLine(d, 'Fe3O4(s)', 'Fe2O3(s)', e0(3 * -742.2 + 2 * 1015.4 - G_H2O, 2), -S25);
     // 3Fe2+ + 4H2O -> Fe3O4 + 8H+ + 2e-: slope −8s/2 per 3 Fe = −(8/3)s per Fe... written per
     // reaction: E = E° − 4s pH − (3/2)s log a
-    expectLine(d, 'Fe2+', 'Fe3O4(s)', e0(-1015.4 + 3 * 78.9 - 4 * G_H2O, 2) - 1.5 * S25 * LOG_A, -4 * S25);
+    expectLine(d, 'Fe2+', 'Fe3O4(s)', e0(-1015.4 - 3 * G_FE2 - 4 * G_H2O, 2) - 1.5 * S25 * LOG_A, -4 * S25);
     // 2Fe3+ + 3H2O -> Fe2O3 + 6H+: log K = −ΔrG°/(RT ln10); −6 pH − 2 log a = log K
-    const lk = logK(-742.2 + 2 * 4.7 - 3 * G_H2O);
+    const lk = logK(-742.2 - 2 * G_FE3 - 3 * G_H2O);
     expectVertical(d, 'Fe3+', 'Fe2O3(s)', (-lk - 2 * LOG_A) / 6);
   });
   test('Atlas values within the spread of the data sets (from memory: Fe2+/Fe −0.617, Fe/Fe3O4 −0.085 − 0.0591 pH)', () => {
-    // NBS Fe2+ (−78.90) against the Atlas's −84.94 kJ/mol moves Fe/Fe2+ by 31 mV
-    expectNear(boundary(d, 'Fe(s)', 'Fe2+').interceptV as number, -0.617, 0.035);
+    // Fe2+ from −0.447 V (−86.26 kJ/mol) against the Atlas's −84.94 kJ/mol: 7 mV apart
+    expectNear(boundary(d, 'Fe(s)', 'Fe2+').interceptV as number, -0.617, 0.01);
     expectNear(boundary(d, 'Fe(s)', 'Fe3O4(s)').interceptV as number, -0.085, 0.005);
   });
   test('triple points Fe/Fe2+/Fe3O4 and Fe2+/Fe3O4/Fe2O3, derived by hand', () => {
-    const eFe = e0(-78.9, 2) + (S25 / 2) * LOG_A;
+    const eFe = e0(G_FE2, 2) + (S25 / 2) * LOG_A;
     const b3 = e0(-1015.4 - 4 * G_H2O, 8);
     expectTriple(d, ['Fe(s)', 'Fe2+', 'Fe3O4(s)'], (b3 - eFe) / S25, eFe);
-    const b1 = e0(-742.2 + 2 * 78.9 - 3 * G_H2O, 2) - S25 * LOG_A;
+    const b1 = e0(-742.2 - 2 * G_FE2 - 3 * G_H2O, 2) - S25 * LOG_A;
     const b2 = e0(3 * -742.2 + 2 * 1015.4 - G_H2O, 2);
     const pH = (b1 - b2) / (2 * S25);
     expectTriple(d, ['Fe2+', 'Fe3O4(s)', 'Fe2O3(s)'], pH, b2 - S25 * pH);
@@ -224,6 +249,17 @@ describe('copper', () => {
     expect(dG).toBeLessThan(0);
     expect(d.absent).toContain('Cu+');
   });
+  test('at 1e-7 Cu+ gains a narrow region (2Cu+ -> Cu + Cu2+: ΔG = 65.49 − 2·49.98 + RT ln(1e7) > 0)', () => {
+    expect(65.49 - 2 * 49.98 + (R * 298.15 * Math.log(1e7)) / 1000).toBeGreaterThan(0);
+    const d7 = ephDiagram('Cu', 1e-7);
+    const r = d7.regions.find((x) => x.species === 'Cu+');
+    expect(r).toBeDefined();
+    // between Cu+/Cu (E = 0.518 + s log a, from ΔfG°(Cu+) = 49.98) and Cu2+/Cu+ at pH 1
+    const eLow = e0(49.98, 1) + S25 * -7;
+    const eHigh = e0(65.49 - 49.98, 1);
+    expect(eHigh).toBeGreaterThan(eLow);
+    expect(predominantSpecies('Cu', (eLow + eHigh) / 2, 1, 1e-7).species).toBe('Cu+');
+  });
 });
 
 describe('zinc', () => {
@@ -239,11 +275,11 @@ describe('zinc', () => {
     ]);
   });
   test('main lines by hand', () => {
-    expectLine(d, 'Zn(s)', 'Zn2+', e0(-147.06, 2) + (S25 / 2) * LOG_A, 0);
+    expectLine(d, 'Zn(s)', 'Zn2+', e0(G_ZN2, 2) + (S25 / 2) * LOG_A, 0);
     // Zn + H2O -> ZnO + 2H+ + 2e-
     expectLine(d, 'Zn(s)', 'ZnO(s)', e0(-318.3 - G_H2O, 2), -S25);
     // ZnO + 2H+ -> Zn2+ + H2O
-    expectVertical(d, 'Zn2+', 'ZnO(s)', (logK(-147.06 + G_H2O + 318.3) - LOG_A) / 2);
+    expectVertical(d, 'Zn2+', 'ZnO(s)', (logK(G_ZN2 + G_H2O + 318.3) - LOG_A) / 2);
     // ZnO + H2O -> HZnO2- + H+
     expectVertical(d, 'ZnO(s)', 'HZnO2-', LOG_A - logK(-464.0 + 318.3 - G_H2O));
   });
@@ -265,11 +301,11 @@ describe('aluminium', () => {
     ]);
   });
   test('main lines by hand', () => {
-    expectLine(d, 'Al(s)', 'Al3+', e0(-485.0, 3) + (S25 / 3) * LOG_A, 0);
+    expectLine(d, 'Al(s)', 'Al3+', e0(G_AL3, 3) + (S25 / 3) * LOG_A, 0);
     // 2Al + 3H2O -> Al2O3 + 6H+ + 6e-
     expectLine(d, 'Al(s)', 'Al2O3(s)', e0(-1582.3 - 3 * G_H2O, 6), -S25);
     // Al2O3 + 6H+ -> 2Al3+ + 3H2O: log K = 2 log a + 6 pH
-    expectVertical(d, 'Al3+', 'Al2O3(s)', (logK(2 * -485.0 + 3 * G_H2O + 1582.3) - 2 * LOG_A) / 6);
+    expectVertical(d, 'Al3+', 'Al2O3(s)', (logK(2 * G_AL3 + 3 * G_H2O + 1582.3) - 2 * LOG_A) / 6);
     // Al2O3 + H2O -> 2AlO2- + 2H+: log K = 2 log a − 2 pH
     expectVertical(d, 'Al2O3(s)', 'AlO2-', (2 * LOG_A - logK(2 * -830.9 + 1582.3 - G_H2O)) / 2);
   });
@@ -288,16 +324,17 @@ describe('nickel', () => {
     ]);
   });
   test('main lines by hand', () => {
-    expectLine(d, 'Ni(s)', 'Ni2+', e0(-45.6, 2) + (S25 / 2) * LOG_A, 0);
+    expectLine(d, 'Ni(s)', 'Ni2+', e0(G_NI2, 2) + (S25 / 2) * LOG_A, 0);
     // Ni + 2H2O -> Ni(OH)2 + 2H+ + 2e-
     expectLine(d, 'Ni(s)', 'Ni(OH)2(s)', e0(-447.2 - 2 * G_H2O, 2), -S25);
     // Ni(OH)2 + 2H+ -> Ni2+ + 2H2O
-    expectVertical(d, 'Ni2+', 'Ni(OH)2(s)', (logK(-45.6 + 2 * G_H2O + 447.2) - LOG_A) / 2);
+    expectVertical(d, 'Ni2+', 'Ni(OH)2(s)', (logK(G_NI2 + 2 * G_H2O + 447.2) - LOG_A) / 2);
     // Atlas: 2Ni3O4 + H2O -> 3Ni2O3 + 2H+ + 2e- (Atlas prints E° = 1.305, from memory)
     expectLine(d, 'Ni3O4(s)', 'Ni2O3(s)', e0(3 * -469.7 + 2 * 711.9 - G_H2O, 2), -S25);
     expectNear(boundary(d, 'Ni3O4(s)', 'Ni2O3(s)').interceptV as number, 1.305, 0.001);
-    // Atlas: Ni2O3 + H2O -> 2NiO2 + 2H+ + 2e- (Atlas prints 1.434, from memory)
-    expectNear(boundary(d, 'Ni2O3(s)', 'NiO2(s)').interceptV as number, 1.434, 0.001);
+    // Ni2O3 + H2O -> 2NiO2 + 2H+ + 2e- with NiO2 from the measured 0.49 V: 1.664 V (the Atlas,
+    // on its own NiO2 value, prints 1.434: a known difference, DEVELOPERS.md "E–pH diagrams")
+    expectLine(d, 'Ni2O3(s)', 'NiO2(s)', e0(2 * G_NIO2 + 469.7 - G_H2O, 2), -S25);
   });
 });
 
@@ -314,11 +351,11 @@ describe('chromium', () => {
     ]);
   });
   test('main lines by hand', () => {
-    // Atlas values for Cr2+ (−176.1) and Cr3+ (−215.5)
-    expectLine(d, 'Cr(s)', 'Cr2+', e0(-176.1, 2) + (S25 / 2) * LOG_A, 0);
-    expectLine(d, 'Cr2+', 'Cr3+', e0(-215.5 + 176.1, 1), 0);
+    // Cr2+ from −0.913 V, Cr3+ from −0.744 V
+    expectLine(d, 'Cr(s)', 'Cr2+', e0(G_CR2, 2) + (S25 / 2) * LOG_A, 0);
+    expectLine(d, 'Cr2+', 'Cr3+', e0(G_CR3 - G_CR2, 1), 0);
     // Cr2O3 + 6H+ -> 2Cr3+ + 3H2O
-    expectVertical(d, 'Cr3+', 'Cr2O3(s)', (logK(2 * -215.5 + 3 * G_H2O + 1058.1) - 2 * LOG_A) / 6);
+    expectVertical(d, 'Cr3+', 'Cr2O3(s)', (logK(2 * G_CR3 + 3 * G_H2O + 1058.1) - 2 * LOG_A) / 6);
     // HCrO4- -> CrO4 2- + H+: pKa = −log K
     expectVertical(d, 'HCrO4-', 'CrO4 2-', -logK(-727.75 + 764.7));
     // Cr2O3 + 5H2O -> 2CrO4 2- + 10H+ + 6e-: E = E° − (10/6)s pH + (2/6) s log a
@@ -348,13 +385,13 @@ describe('lead', () => {
     ]);
   });
   test('main lines by hand', () => {
-    expectLine(d, 'Pb(s)', 'Pb2+', e0(-24.43, 2) + (S25 / 2) * LOG_A, 0);
+    expectLine(d, 'Pb(s)', 'Pb2+', e0(G_PB2, 2) + (S25 / 2) * LOG_A, 0);
     // Pb2+ + 2H2O -> PbO2 + 4H+ + 2e-: E = E° − 2s pH − (s/2) log a
-    expectLine(d, 'Pb2+', 'PbO2(s)', e0(-217.33 + 24.43 - 2 * G_H2O, 2) - (S25 / 2) * LOG_A, -2 * S25);
+    expectLine(d, 'Pb2+', 'PbO2(s)', e0(G_PBO2 - G_PB2 - 2 * G_H2O, 2) - (S25 / 2) * LOG_A, -2 * S25);
   });
   test('PbO has no region at 1e-6: Pb2+/PbO would lie at a higher pH than PbO/HPbO2- (by hand)', () => {
-    const pHPb2 = (logK(-24.43 + G_H2O + 188.93) - LOG_A) / 2; // PbO + 2H+ -> Pb2+ + H2O
-    const pHHPbO2 = LOG_A - logK(-338.9 + 188.93 - G_H2O); // PbO + H2O -> HPbO2- + H+
+    const pHPb2 = (logK(G_PB2 + G_H2O - G_PBO) - LOG_A) / 2; // PbO + 2H+ -> Pb2+ + H2O
+    const pHHPbO2 = LOG_A - logK(-338.9 - G_PBO - G_H2O); // PbO + H2O -> HPbO2- + H+
     expect(pHPb2).toBeGreaterThan(pHHPbO2);
     expect(d.absent).toContain('PbO(s)');
   });
@@ -373,15 +410,15 @@ describe('tin', () => {
     ]);
   });
   test('main lines by hand', () => {
-    expectLine(d, 'Sn(s)', 'Sn2+', e0(-27.2, 2) + (S25 / 2) * LOG_A, 0);
+    expectLine(d, 'Sn(s)', 'Sn2+', e0(G_SN2, 2) + (S25 / 2) * LOG_A, 0);
     // Sn + 2H2O -> SnO2 + 4H+ + 4e-
     expectLine(d, 'Sn(s)', 'SnO2(s)', e0(-519.6 - 2 * G_H2O, 4), -S25);
     // Sn2+ + 2H2O -> SnO2 + 4H+ + 2e-
-    expectLine(d, 'Sn2+', 'SnO2(s)', e0(-519.6 + 27.2 - 2 * G_H2O, 2) - (S25 / 2) * LOG_A, -2 * S25);
+    expectLine(d, 'Sn2+', 'SnO2(s)', e0(-519.6 - G_SN2 - 2 * G_H2O, 2) - (S25 / 2) * LOG_A, -2 * S25);
   });
   test('Sn4+ and SnO never predominate (by hand)', () => {
     // SnO2 + 4H+ -> Sn4+ + 2H2O: log a(Sn4+) = log K − 4 pH < −6 for pH ≥ 0
-    expect(logK(2.5 + 2 * G_H2O + 519.6)).toBeLessThan(LOG_A);
+    expect(logK(G_SN4 + 2 * G_H2O + 519.6)).toBeLessThan(LOG_A);
     // 2SnO -> Sn + SnO2: ΔrG° = −519.6 + 2·256.9 < 0
     expect(-519.6 + 2 * 256.9).toBeLessThan(0);
     expect(d.absent).toEqual(expect.arrayContaining(['Sn4+', 'SnO(s)']));
@@ -401,8 +438,8 @@ describe('magnesium', () => {
     ]);
   });
   test('main lines by hand', () => {
-    expectLine(d, 'Mg(s)', 'Mg2+', e0(-454.8, 2) + (S25 / 2) * LOG_A, 0);
-    expectVertical(d, 'Mg2+', 'Mg(OH)2(s)', (logK(-454.8 + 2 * G_H2O + 833.51) - LOG_A) / 2);
+    expectLine(d, 'Mg(s)', 'Mg2+', e0(G_MG2, 2) + (S25 / 2) * LOG_A, 0);
+    expectVertical(d, 'Mg2+', 'Mg(OH)2(s)', (logK(G_MG2 + 2 * G_H2O + 833.51) - LOG_A) / 2);
     expectLine(d, 'Mg(s)', 'Mg(OH)2(s)', e0(-833.51 - 2 * G_H2O, 2), -S25);
   });
   test('MgO never predominates (MgO + H2O -> Mg(OH)2 has ΔrG° < 0)', () => {
@@ -424,13 +461,13 @@ describe('silver', () => {
     ]);
   });
   test('main lines by hand', () => {
-    expectLine(d, 'Ag(s)', 'Ag+', e0(77.107, 1) + S25 * LOG_A, 0);
+    expectLine(d, 'Ag(s)', 'Ag+', e0(G_AG, 1) + S25 * LOG_A, 0);
     // Ag+ + 2H2O -> Ag(OH)2- + 2H+: −2 pH = log K (activities equal)
-    expectVertical(d, 'Ag+', 'Ag(OH)2-', -logK(-260.2 - 77.107 - 2 * G_H2O) / 2);
+    expectVertical(d, 'Ag+', 'Ag(OH)2-', -logK(-260.2 - G_AG - 2 * G_H2O) / 2);
   });
   test('Ag2O has no region at 1e-6 but one at 1e-4 (by hand: Ag+/Ag2O and Ag2O/Ag(OH)2- pH)', () => {
     // Ag2O + 2H+ -> 2Ag+ + H2O: 2 log a + 2 pH = log K;  Ag2O + 3H2O -> 2Ag(OH)2- + 2H+
-    const k1 = logK(2 * 77.107 + G_H2O + 11.2);
+    const k1 = logK(2 * G_AG + G_H2O + 11.2);
     const k2 = logK(2 * -260.2 + 11.2 - 3 * G_H2O);
     const lower = (la: number) => (k1 - 2 * la) / 2;
     const upper = (la: number) => (2 * la - k2) / 2;
@@ -506,20 +543,32 @@ describe('temperature', () => {
     expectNear(o?.interceptV as number, 1.229, 0.0005);
     expectNear(o?.slopeVPerPH as number, -0.05916, 1e-5);
   });
-  test('water lines at 60 °C: slope −RT ln10/F; O2 line by Gibbs–Helmholtz from NBS ΔfH°, ΔfG° of water', () => {
+  // Gibbs–Helmholtz with constant ΔCp, by hand: ΔG(T) = ΔG° − (T − T0)ΔS° + ΔCp[(T − T0) − T ln(T/T0)]
+  const gh = (dGkJ: number, dSJK: number, dCpJK: number, tC: number): number => {
+    const T = tC + 273.15;
+    return dGkJ - ((T - 298.15) * dSJK) / 1000 + (dCpJK * (T - 298.15 - T * Math.log(T / 298.15))) / 1000;
+  };
+  // NBS (from memory): S° H2O(l) 69.91, H2(g) 130.684, O2(g) 205.138; Cp° 75.291, 28.824, 29.355
+  test('water lines at 60 °C: slope −RT ln10/F; O2 line from ΔrG°(T) of 2H2O -> O2 + 4H+ + 4e-', () => {
     const [h, o] = waterLines(60, defaultEphWindow('Fe'));
     expectNear(h?.slopeVPerPH as number, -s(60), 1e-12);
-    // ΔfG°(333.15 K) = ΔfH° − T(ΔfH° − ΔfG°)/298.15, ΔfH° = −285.83
-    const g60 = -285.83 - (333.15 * (-285.83 - G_H2O)) / 298.15;
-    expectNear(o?.interceptV as number, (-g60 * 1000) / (2 * F), 1e-9);
+    // ΔrS° = S°(O2) + 4·½S°(H2) − 2S°(H2O) (electrons ½S°(H2), H+ 0); ΔrCp° likewise
+    const dS = 205.138 + 2 * 130.684 - 2 * 69.91;
+    const dCp = 29.355 + 2 * 28.824 - 2 * 75.291;
+    const dG = gh(-2 * G_H2O, dS, dCp, 60);
+    expectNear(o?.interceptV as number, (dG * 1000) / (4 * F), 1e-9);
     // published dE°/dT of O2/H2O about −0.846 mV/K (from memory): 1.229 − 0.846e-3·35 ≈ 1.1994
     expectNear(o?.interceptV as number, 1.229 - 0.846e-3 * 35, 0.002);
   });
-  test('Zn/Zn2+ at 60 °C by hand (Gibbs–Helmholtz with ΔfH°(Zn2+) = −153.89)', () => {
-    const T = 333.15;
-    const g = -153.89 - (T * (-153.89 + 147.06)) / 298.15;
+  test('Zn/Zn2+ at 60 °C by hand (NBS S°: Zn2+ −112.1, Zn 41.63; Cp°: Zn2+ 46, Zn 25.40)', () => {
+    // Zn -> Zn2+ + 2e-: ΔrS° = S°(Zn2+) + 2·½S°(H2) − S°(Zn), ΔrCp° likewise
+    const dS = -112.1 + 130.684 - 41.63;
+    const dCp = 46 + 28.824 - 25.4;
     const d = ephDiagram('Zn', A, 60);
-    expectLine(d, 'Zn(s)', 'Zn2+', e0(g, 2) + (s(60) / 2) * LOG_A, 0);
+    expectLine(d, 'Zn(s)', 'Zn2+', e0(gh(G_ZN2, dS, dCp, 60), 2) + (s(60) / 2) * LOG_A, 0);
+    // the temperature coefficient of E°(Zn2+/Zn) is near the published +0.119 mV/K (from memory)
+    const e60 = e0(gh(G_ZN2, dS, dCp, 60), 2);
+    expectNear((e60 - e0(G_ZN2, 2)) / 35, 0.119e-3, 0.02e-3);
   });
   test('the boundaries move with temperature and the planes are recomputed per temperature', () => {
     const a = ephDiagram('Cu', A, 25);
@@ -591,7 +640,7 @@ describe('lines as rows', () => {
     expect(last?.[4]).toBe(12);
     expectNear(last?.[3] as number, 1.229 - 0.05916 * 2, 0.0006);
     const zn = rows.find((r) => r[0] === 'Zn(s)' && r[1] === 'Zn2+');
-    expectNear(zn?.[3] as number, e0(-147.06, 2) + (S25 / 2) * LOG_A, 1e-9);
+    expectNear(zn?.[3] as number, e0(G_ZN2, 2) + (S25 / 2) * LOG_A, 1e-9);
     expect(zn?.[2]).toBe(2);
   });
 });
@@ -669,9 +718,26 @@ describe('exact regions agree with the pointwise minimum everywhere', () => {
     }
   });
   test('a window edge through a boundary (pH_min at Zn2+/ZnO, by hand 8.772) leaves no sliver region', () => {
-    const pH0 = (logK(-147.06 + G_H2O + 318.3) - LOG_A) / 2;
+    const pH0 = (logK(G_ZN2 + G_H2O + 318.3) - LOG_A) / 2;
     const d = ephDiagram('Zn', A, 25, { pHMin: pH0, pHMax: 14, eMinV: -2, eMaxV: 2 });
     expect(d.regions.map((r) => r.species)).not.toContain('Zn2+');
     expect(d.regions.map((r) => r.species)).toEqual(['Zn(s)', 'ZnO(s)', 'HZnO2-', 'ZnO2 2-']);
+  });
+});
+
+describe('an injected data source', () => {
+  test('makeSpeciesGibbs on another lookup moves the lines (Atlas ΔfG°(Fe2+) = −84.94 kJ/mol, from memory)', () => {
+    const records = new Map(EPH_SPECIES.map((r) => [r.species, r]));
+    const atlas = makeSpeciesGibbs((t) => {
+      if (t === 'Fe2+') return { species: 'Fe2+', dfGkJ: -84.94, source: 'Atlas' };
+      const r = records.get(t);
+      if (!r) throw new Error(t);
+      return r;
+    });
+    const d = ephDiagram('Fe', A, 25, defaultEphWindow('Fe'), atlas);
+    // Atlas: Fe2+ + 2e- -> Fe, E = −0.440 + 0.0295 log a (from memory)
+    expectLine(d, 'Fe(s)', 'Fe2+', e0(-84.94, 2) + (S25 / 2) * LOG_A, 0);
+    expectNear(boundary(d, 'Fe(s)', 'Fe2+').interceptV as number, -0.617, 0.002);
+    expect(predominantSpecies('Fe', -0.5, 4, A, 25, atlas).species).toBe('Fe2+');
   });
 });

@@ -4,7 +4,7 @@
  */
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
 import { ephDiagram, renderEphSvg } from '../../../src/engine';
-import { engineErrorOf, expectNear } from '../support';
+import { engineErrorOf, expectNear } from '../../support';
 
 type Node = Record<string, unknown>;
 const parser = new XMLParser({
