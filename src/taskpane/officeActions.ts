@@ -105,3 +105,49 @@ export async function writeNewSheet<P extends SheetPlan>(
     return plan;
   });
 }
+
+/**
+ * A range reference as typed in the pane: `Sheet!A2:D115`, `'My sheet'!A2:D115`, a bare
+ * address (the active sheet) or a defined name.
+ *
+ * @example
+ * splitRangeRef("'Potentials (2)'!A2:D115") // { sheet: 'Potentials (2)', address: 'A2:D115' }
+ */
+export function splitRangeRef(ref: string): { sheet: string | null; address: string } | { name: string } {
+  const t = ref.trim();
+  const quoted = /^'((?:[^']|'')+)'!(.+)$/.exec(t);
+  if (quoted) return { sheet: (quoted[1] as string).replace(/''/g, "'"), address: quoted[2] as string };
+  const bare = /^([^!']+)!(.+)$/.exec(t);
+  if (bare) return { sheet: bare[1] as string, address: bare[2] as string };
+  if (/^\$?[A-Za-z]{1,3}\$?\d+(?::\$?[A-Za-z]{1,3}\$?\d+)?$/.test(t)) return { sheet: null, address: t };
+  return { name: t };
+}
+
+/**
+ * Read the values of a range of the workbook (only reads; nothing is written), for the
+ * preview to use the user's potentials table as the sheet formula will.
+ *
+ * @throws Error naming the reference where the workbook has no such sheet, range or name
+ */
+export async function readRangeValues(ref: string): Promise<(string | number | boolean)[][]> {
+  return Excel.run(async (context) => {
+    const where = splitRangeRef(ref);
+    let range: Excel.Range;
+    if ('name' in where) {
+      const item = context.workbook.names.getItemOrNullObject(where.name);
+      await context.sync();
+      if (item.isNullObject) throw new Error(`the workbook has no range or name "${where.name}".`);
+      range = item.getRange();
+    } else if (where.sheet === null) {
+      range = context.workbook.worksheets.getActiveWorksheet().getRange(where.address);
+    } else {
+      const sheet = context.workbook.worksheets.getItemOrNullObject(where.sheet);
+      await context.sync();
+      if (sheet.isNullObject) throw new Error(`the workbook has no sheet named "${where.sheet}".`);
+      range = sheet.getRange(where.address);
+    }
+    range.load('values');
+    await context.sync();
+    return range.values as (string | number | boolean)[][];
+  });
+}

@@ -30,6 +30,9 @@ export const POTENTIALS_HEADER = [
   'Source',
 ] as const;
 
+/** Empty rows the suggested table range takes in below the written rows, for rows the user adds. */
+export const ROOM_TO_GROW_ROWS = 50;
+
 /** The name the sheet gets where the workbook has none of that name. */
 export const POTENTIALS_BASE_NAME = 'Potentials';
 
@@ -41,7 +44,7 @@ export interface PotentialsSheetPlan extends SheetPlan {
   readonly rowCount: number;
   /** The header and data, e.g. "A1:D65". */
   readonly tableAddress: string;
-  /** What to pass as the `table` argument, e.g. "Potentials!A2:D65". */
+  /** What to pass as the `table` argument: the rows written plus {@link ROOM_TO_GROW_ROWS} empty ones, e.g. "Potentials!A2:D115". */
   readonly tableRef: string;
   /** A formula that uses the sheet as its table. */
   readonly exampleFormula: string;
@@ -104,7 +107,8 @@ export function planPotentialsSheet(
   const n = picked.rows.length;
   const last = n + 1;
   const dataAddress = rangeAddress(1, 2, 4, last);
-  const tableRef = `${sheetRef(sheetName)}!${dataAddress}`;
+  const lastRoom = last + ROOM_TO_GROW_ROWS;
+  const tableRef = `${sheetRef(sheetName)}!${rangeAddress(1, 2, 4, lastRoom)}`;
   const exampleFormula = exampleFormulaFor(picked.rows, tableRef);
   const notesAddress = 'F1:F5';
   const blocks: CellBlock[] = [
@@ -121,8 +125,9 @@ export function planPotentialsSheet(
             'Standard states: solutes at unit activity (1 mol/L), gases at 1 bar, pure solids, liquids and water at activity 1.',
         ],
         [
-          `Pass ${tableRef} as the table argument (the last argument) of the ECHEM functions. Your rows take precedence over built-in rows for the same couple; ` +
-            `edit values or add rows below row ${last} and extend the range. =ECHEM.CHECKTABLE(${tableRef}) lists any problem rows.`,
+          `Pass ${tableRef} as the table argument (the last argument) of the ECHEM functions. Your rows take precedence over built-in rows for the same couple. ` +
+            `The range takes in ${ROOM_TO_GROW_ROWS} empty rows below the data (rows ${last + 1} to ${lastRoom}) for couples you add; empty rows are skipped. ` +
+            `Beyond row ${lastRoom}, extend the range. =ECHEM.CHECKTABLE(${tableRef}) lists any problem rows.`,
         ],
         [`Example: ${exampleFormula.slice(1)}`],
       ],
@@ -132,7 +137,7 @@ export function planPotentialsSheet(
   ];
   const summary =
     `Created sheet "${sheetName}" with ${n} half-reaction${n === 1 ? '' : 's'} (${picked.described}) in ${rangeAddress(1, 1, 4, last)}, ` +
-    `header in row 1, notes in ${notesAddress}. Pass ${tableRef} as the table argument.`;
+    `header in row 1, notes in ${notesAddress}. Pass ${tableRef} as the table argument (it has room for ${ROOM_TO_GROW_ROWS} rows you add).`;
   return {
     sheetName,
     blocks,

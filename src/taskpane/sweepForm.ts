@@ -1,5 +1,5 @@
 /**
- * The sweep builder's form state, without DOM: the species rows (filled from the
+ * The case series' form state, without DOM: the species rows (filled from the
  * reaction, plus rows the user adds), the choices of what to vary, and the defaults for
  * each choice. taskpane.ts renders this state and turns it into a {@link SweepForm}.
  */
@@ -17,6 +17,16 @@ export interface SpeciesRow {
   readonly value: string;
   /** "reaction": filled from the reaction (replaced when it changes); "user": typed or edited. */
   readonly origin: 'reaction' | 'user';
+  /** True for a gas (its value is a partial pressure in bar), where the reaction says so. */
+  readonly gas?: boolean;
+}
+
+const PH_NAME = /^(?:(?:left|right|l|r)\s*:\s*)?ph$/i;
+
+/** The unit of a species row's value: "pH" for a pH row, "bar" for a gas, else "activity". */
+export function unitOf(row: Pick<SpeciesRow, 'name' | 'gas'>): 'pH' | 'bar' | 'activity' {
+  if (PH_NAME.test(row.name.trim())) return 'pH';
+  return row.gas === true || /\(g\)\s*$/.test(row.name.trim()) ? 'bar' : 'activity';
 }
 
 /** The value a new species row starts with: unit activity (1 bar for a gas). */
@@ -43,6 +53,7 @@ export function mergeSpeciesRows(
     name: s.name,
     value: valueOf.get(s.name) ?? DEFAULT_SPECIES_VALUE,
     origin: 'reaction',
+    gas: s.gas,
   }));
   for (const r of rows) if (r.origin === 'user' && !names.has(r.name.trim())) out.push(r);
   return out;
@@ -55,15 +66,21 @@ export interface VaryOption {
   readonly label: string;
 }
 
-/** The "vary" choices for the species rows: each species' activity, then pH and temperature. */
+/**
+ * The "vary" choices for the species rows: each solute's activity or each gas's partial
+ * pressure in bar, then pH and temperature.
+ */
 export function varyOptions(rows: readonly SpeciesRow[]): VaryOption[] {
   const seen = new Set<string>();
   const out: VaryOption[] = [];
   for (const r of rows) {
     const name = r.name.trim();
-    if (name === '' || /^(?:(?:left|right|l|r)\s*:\s*)?ph$/i.test(name) || seen.has(name)) continue;
+    if (name === '' || PH_NAME.test(name) || seen.has(name)) continue;
     seen.add(name);
-    out.push({ value: `activity:${name}`, label: `Activity of ${name}` });
+    out.push({
+      value: `activity:${name}`,
+      label: unitOf(r) === 'bar' ? `Partial pressure of ${name} (bar)` : `Activity of ${name}`,
+    });
   }
   out.push({ value: 'pH', label: 'pH' });
   out.push({ value: 'temperature', label: 'Temperature (°C)' });
@@ -90,12 +107,13 @@ export interface RangeDefaults {
  * Defaults for a variable: activities from 1e-6 to 1 (log, 4 points a decade) or 0.001 to
  * 0.1 (linear), pH 0 to 14 in steps of 0.5, temperature 5 to 65 °C in steps of 5 °C.
  */
-export function rangeDefaults(v: SweepVariable): RangeDefaults {
+export function rangeDefaults(v: SweepVariable, gas = false): RangeDefaults {
   if (v.kind === 'pH') return { from: '0', to: '14', points: '29', unit: 'pH' };
   if (v.kind === 'temperature') return { from: '5', to: '65', points: '13', unit: '°C' };
+  const unit = gas ? 'bar' : 'activity';
   return v.scale === 'log'
-    ? { from: '1e-6', to: '1', points: '25', unit: 'activity; gases: bar' }
-    : { from: '0.001', to: '0.1', points: '21', unit: 'activity; gases: bar' };
+    ? { from: '1e-6', to: '1', points: '25', unit }
+    : { from: '0.001', to: '0.1', points: '21', unit };
 }
 
 /** What a species row's value box shows for the current variable: its own value, or why it is not used. */

@@ -1,6 +1,9 @@
 /**
- * The sweep builder's logic, without DOM or Office: reading the form, checking the
- * reaction with the engine, and laying out the sweep sheet.
+ * The case series' logic (a column of what-if cases of one reaction: one quantity
+ * varied, the others fixed), without DOM or Office: reading the form, checking the
+ * reaction with the engine, and laying out the case-series sheet. The pane's preview of
+ * the values goes through the catalogue (seriesPreview.ts), never through the engine
+ * directly, so that it computes exactly what the sheet formula computes.
  *
  * Sheet layout (row numbers fixed, columns depend on the number of species S):
  *
@@ -17,17 +20,14 @@
  * and an XY scatter chart (lines) of E against the varied quantity beside the table.
  */
 import {
-  bindSpecies,
   compiledReaction,
   isEngineError,
   type NernstForm,
-  nernstSlopeV,
   type Notation,
   parseNotation,
   parseSpeciesHeader,
   phaseOf,
   formatSpecies,
-  potentialV,
 } from '../engine/index';
 import type { CellBlock, ChartSpec, SheetPlan } from './sheetPlan';
 import { asCellText, cellAddress, columnLetters, rangeAddress, uniqueSheetName } from './sheetNames';
@@ -98,11 +98,13 @@ function speciesFromNotation(n: Notation): ReactionSpecies[] {
  * checkReaction('Zn2 + ->') // { ok: false, position: 5, message: 'Cannot read "Zn2 + ->" at character 5: …' }
  */
 export function checkReaction(text: string): ReactionCheck {
+  if (text.trim() === '') return { ok: false, message: EMPTY_REACTION, position: null };
   let notation: Notation;
   try {
     notation = parseNotation(text);
   } catch (e) {
-    if (isEngineError(e)) return { ok: false, message: e.message, position: e.position ?? null };
+    if (isEngineError(e))
+      return { ok: false, message: sentenceCase(e.message), position: e.position ?? null };
     throw e;
   }
   let form: NernstForm;
@@ -116,7 +118,7 @@ export function checkReaction(text: string): ReactionCheck {
       species: speciesFromNotation(notation),
       n: null,
       form: null,
-      warning: `${e.message} (Fine if the potentials table you pass has it.)`,
+      warning: `${sentenceCase(e.message)} (Fine if the potentials table you pass has it.)`,
     };
   }
   const live = form.terms.filter((t) => !t.pure && t.inline === undefined);
@@ -127,6 +129,22 @@ export function checkReaction(text: string): ReactionCheck {
     return { name: both ? `${t.side}:${bare}` : bare, weight: t.weight, gas: t.gas };
   });
   return { ok: true, kind: notation.kind, species, n: form.n, form, warning: null };
+}
+
+/** What the pane says when the reaction box is empty. */
+export const EMPTY_REACTION = 'Type a reaction, for example Cu2+/Cu or Zn | Zn2+ || Cu2+ | Cu.';
+
+/**
+ * A message in sentence case: first letter capitalised, ending with a full stop.
+ *
+ * @example
+ * sentenceCase('reaction is missing: give a reaction') // 'Reaction is missing: give a reaction.'
+ */
+export function sentenceCase(message: string): string {
+  const t = message.trim();
+  if (t === '') return t;
+  const first = t.charAt(0).toUpperCase() + t.slice(1);
+  return /[.!?)]$/.test(first) ? first : `${first}.`;
 }
 
 /** The caret line shown under the reaction text: spaces, then "^" under `position` (1-based). */
@@ -173,15 +191,24 @@ export interface SweepInput {
 /** A problem with one input; `field` names it ("reaction", "from", "species-2", "value-0" …). */
 export interface FieldError {
   readonly field: string;
+  /** The field's name as its label shows it ("From", "Points", "Value of Fe2+"). */
+  readonly label: string;
   readonly message: string;
 }
 
 /**
  * A number as typed: decimals with a point, exponents ("1e-6"), or a power of ten ("10^-6").
- * Null where the text is not a number.
+ * With `decimalComma` (a locale whose decimal separator is a comma, as Excel there shows
+ * numbers), a comma is read as the decimal separator too: "0,01" is 0.01. Thousands
+ * separators are not read. Null where the text is not a number.
+ *
+ * @example
+ * readNumber('0,01', true) // 0.01
+ * readNumber('0,01') // null
  */
-export function readNumber(text: string): number | null {
-  const t = text.trim().replace(/\u2212/g, '-');
+export function readNumber(text: string, decimalComma = false): number | null {
+  let t = text.trim().replace(/\u2212/g, '-');
+  if (decimalComma && /^[^,]*,[^,]*$/.test(t) && !t.includes('.')) t = t.replace(',', '.');
   if (/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) {
     const v = Number(t);
     return Number.isFinite(v) ? v : null;
@@ -194,7 +221,12 @@ export function readNumber(text: string): number | null {
   return null;
 }
 
-const NUMBER_HINT = 'write a number such as 0.01, 1e-6 or 10^-6 (decimal point, not comma)';
+/** How to write a number, for the locale's decimal separator. */
+export function numberHint(decimalComma: boolean): string {
+  return decimalComma
+    ? 'write a number such as 0,01, 1e-6 or 10^-6'
+    : 'write a number such as 0.01, 1e-6 or 10^-6 (with a decimal point)';
+}
 const TABLE_REF =
   /^(?:(?:'(?:[^']|'')+'|[A-Za-z_][A-Za-z0-9_.]*)!)?\$?[A-Za-z]{1,3}\$?[0-9]+:\$?[A-Za-z]{1,3}\$?[0-9]+$|^[A-Za-z_\\][A-Za-z0-9_.]*$/;
 
@@ -239,42 +271,66 @@ export function fixedRows(
     });
 }
 
+/** Options of {@link readSweepForm}. */
+export interface ReadOptions {
+  /** The reaction check already made for this text (the pane checks once per change). */
+  readonly check?: ReactionCheck;
+  /** Read a comma as the decimal separator (the locale's decimal separator is a comma). */
+  readonly decimalComma?: boolean;
+}
+
 /**
- * Check the form: every problem with its field, or the sweep's inputs.
+ * Check the form: one plain sentence per problem, each against its field, or the
+ * series' inputs. Numbers follow the locale's decimal separator (`options.decimalComma`).
  */
 export function readSweepForm(
   form: SweepForm,
+  options: ReadOptions = {},
 ): { ok: true; input: SweepInput } | { ok: false; errors: FieldError[] } {
+  const comma = options.decimalComma === true;
+  const num = (text: string) => readNumber(text, comma);
+  const hint = numberHint(comma);
   const errors: FieldError[] = [];
   const reaction = form.reaction.trim();
-  const check = checkReaction(reaction);
-  if (!check.ok) errors.push({ field: 'reaction', message: check.message });
+  const check = options.check ?? checkReaction(reaction);
+  if (!check.ok) errors.push({ field: 'reaction', label: 'Reaction', message: check.message });
 
   const v = form.variable;
   if (v.kind === 'activity') {
-    if (v.species.trim() === '') errors.push({ field: 'vary', message: 'Choose what to vary.' });
+    if (v.species.trim() === '')
+      errors.push({ field: 'vary', label: 'Quantity to vary', message: 'Choose the quantity to vary.' });
     else if (headerKey(v.species) === null) {
-      errors.push({ field: 'vary', message: `"${v.species}" is not a species name the functions can read.` });
+      errors.push({
+        field: 'vary',
+        label: 'Quantity to vary',
+        message: `"${v.species}" is not a species name the functions can read.`,
+      });
     }
   }
   const unit = v.kind === 'activity' ? 'activity' : v.kind === 'pH' ? 'pH' : 'temperature (°C)';
   const range: Record<'from' | 'to', number | null> = { from: null, to: null };
   for (const field of ['from', 'to'] as const) {
-    const value = readNumber(form[field]);
+    const text = form[field];
+    const value = num(text);
     const label = field === 'from' ? 'From' : 'To';
+    if (text.trim() === '') {
+      errors.push({ field, label, message: `Give a value for ${label}.` });
+      continue;
+    }
     if (value === null) {
-      errors.push({ field, message: `${label}: "${form[field]}" is not a number; ${NUMBER_HINT}.` });
+      errors.push({ field, label, message: `${label} "${text}" is not a number: ${hint}.` });
       continue;
     }
     if (v.kind === 'activity' && !(value > 0)) {
       errors.push({
         field,
-        message: `${label}: an activity (or partial pressure in bar) must be above 0; got ${value}.`,
+        label,
+        message: `${label} must be above 0 (an activity, or a partial pressure in bar); it is ${value}.`,
       });
       continue;
     }
     if (v.kind === 'temperature' && !(value > -273.15)) {
-      errors.push({ field, message: `${label}: a temperature must be above −273.15 °C; got ${value} °C.` });
+      errors.push({ field, label, message: `${label} must be above −273.15 °C; it is ${value} °C.` });
       continue;
     }
     range[field] = value;
@@ -282,23 +338,26 @@ export function readSweepForm(
   if (range.from !== null && range.to !== null && range.from === range.to) {
     errors.push({
       field: 'to',
+      label: 'To',
       message: `From and To are both ${range.from}: give two different ${unit} values.`,
     });
   }
-  const points = readNumber(form.points);
+  const points = num(form.points);
   if (points === null || !Number.isInteger(points) || points < 2 || points > MAX_POINTS) {
     errors.push({
       field: 'points',
-      message: `Points: give a whole number of cases from 2 to ${MAX_POINTS} (both ends included); got "${form.points}".`,
+      label: 'Cases',
+      message: `Give a whole number of cases from 2 to ${MAX_POINTS} (both ends included); "${form.points}" is not one.`,
     });
   }
   let tempC = 25;
   if (v.kind !== 'temperature') {
-    const t = readNumber(form.tempC);
+    const t = num(form.tempC);
     if (t === null || !(t > -273.15)) {
       errors.push({
         field: 'tempC',
-        message: `Temperature: give a temperature in °C above −273.15; got "${form.tempC}".`,
+        label: 'Temperature',
+        message: `Give the temperature in °C, above −273.15; "${form.tempC}" is not one.`,
       });
     } else tempC = t;
   }
@@ -310,10 +369,12 @@ export function readSweepForm(
     if (k) seen.set(k, -1);
   }
   for (const row of fixedRows(form)) {
+    const rowLabel = `Species ${row.index + 1}`;
     if (row.name === '') {
       errors.push({
         field: `species-${row.index}`,
-        message: `Species row ${row.index + 1}: give the species name (e.g. Cu2+).`,
+        label: rowLabel,
+        message: `Give the name of species ${row.index + 1} (for example Cu2+), or remove the row.`,
       });
       continue;
     }
@@ -321,24 +382,29 @@ export function readSweepForm(
     if (key === null) {
       errors.push({
         field: `species-${row.index}`,
-        message: `Species row ${row.index + 1}: "${row.name}" is not a species (write e.g. Cu2+, O2(g), pH, left:Ag+).`,
+        label: rowLabel,
+        message: `"${row.name}" is not a species: write for example Cu2+, O2(g), pH or left:Ag+.`,
       });
       continue;
     }
     if (seen.has(key)) {
       errors.push({
         field: `species-${row.index}`,
-        message: `Species row ${row.index + 1}: "${row.name}" is listed twice.`,
+        label: rowLabel,
+        message: `"${row.name}" is listed twice: remove one of the rows.`,
       });
       continue;
     }
     seen.set(key, row.index);
-    const value = readNumber(row.value);
+    const value = num(row.value);
     const isPH = /^(?:(?:left|right|l|r)\s*:\s*)?ph$/i.test(row.name);
     if (value === null || (!isPH && !(value > 0))) {
       errors.push({
         field: `value-${row.index}`,
-        message: `${row.name}: give ${isPH ? 'the pH' : 'an activity (or partial pressure in bar) above 0'}; got "${row.value}".`,
+        label: `Value of ${row.name}`,
+        message: isPH
+          ? `Give the pH as a number; "${row.value}" is not one.`
+          : `Give ${row.name} a value above 0 (${value === null ? hint : `it is ${value}`}).`,
       });
       continue;
     }
@@ -349,7 +415,8 @@ export function readSweepForm(
   if (tableText !== '' && !TABLE_REF.test(tableText)) {
     errors.push({
       field: 'table',
-      message: `Potentials table: "${tableText}" is not a range; write e.g. Potentials!A2:D65, or leave it empty for the built-in table.`,
+      label: 'Potentials table',
+      message: `"${tableText}" is not a range: write for example Potentials!A2:D115, or leave it empty for the built-in table.`,
     });
   }
 
@@ -367,6 +434,22 @@ export function readSweepForm(
       table: tableText === '' ? null : tableText,
     },
   };
+}
+
+/**
+ * What the disabled write button says is missing: the inputs to fix, by their labels
+ * (each message itself is shown once, beside its input).
+ *
+ * @example
+ * missingSummary([{ field: 'from', label: 'From', message: 'Give a value for From.' }])
+ * // 'Not ready: From needs fixing (see the message beside it).'
+ */
+export function missingSummary(errors: readonly FieldError[]): string {
+  const labels = [...new Set(errors.map((e) => e.label))];
+  if (labels.length === 0) return '';
+  if (labels.length === 1) return `Not ready: ${labels[0]} needs fixing (see the message beside it).`;
+  const list = `${labels.slice(0, -1).join(', ')} and ${labels[labels.length - 1]}`;
+  return `Not ready: ${list} need fixing (see the messages beside them).`;
 }
 
 // ---------------------------------------------------------------------------
@@ -420,10 +503,6 @@ export function formatValue(x: number): string {
 // ---------------------------------------------------------------------------
 // The plan
 
-/** One case's preview value from the engine (built-in table). */
-export type PreviewValue =
-  { readonly ok: true; readonly e: number } | { readonly ok: false; readonly message: string };
-
 /** The sweep sheet's layout, independent of the sheet's name. */
 export interface SweepLayout {
   /** The sheet's name before it is made unique, e.g. "E vs log a(Cu2+)". */
@@ -473,9 +552,14 @@ function activityLabel(name: string): { a: string; gas: boolean } {
 }
 
 /**
- * Lay out the sweep: the input table, the x column, the one spilled formula and the chart.
+ * Lay out the case series: the input table, the x column, the one spilled formula and the
+ * chart. `check` is the reaction check already made for `input.reaction` (checked here
+ * where it is not given).
  */
-export function planSweep(input: SweepInput): SweepLayout {
+export function planSweep(
+  input: SweepInput,
+  check: ReactionCheck = checkReaction(input.reaction),
+): SweepLayout {
   const v = input.variable;
   const steps =
     v.kind === 'activity' && v.scale === 'log'
@@ -499,7 +583,6 @@ export function planSweep(input: SweepInput): SweepLayout {
   });
   const temps = steps.map((s) => (v.kind === 'temperature' ? s : input.tempC));
 
-  const check = checkReaction(input.reaction);
   const isCell = check.ok && (check.kind === 'cell' || check.kind === 'reaction');
   const yTitle = isCell ? 'EMF / V' : 'E / V vs SHE';
   const yShort = isCell ? 'EMF' : 'E';
@@ -516,17 +599,17 @@ export function planSweep(input: SweepInput): SweepLayout {
     xTitle = logX ? (gas ? `log10 (${a} / bar)` : `log10 ${a}`) : `${a}${unit}`;
     x = logX ? steps.map((s) => tidy(Math.log10(s), 12)) : steps;
     label = logX ? `log ${a}` : a;
-    description = `${a}${unit} from ${formatValue(input.from)} to ${formatValue(input.to)}, ${logX ? 'log-spaced' : 'evenly spaced'}, ${n} points`;
+    description = `${a}${unit} from ${formatValue(input.from)} to ${formatValue(input.to)}, ${logX ? 'log-spaced' : 'evenly spaced'}, ${n} cases`;
   } else if (v.kind === 'pH') {
     xTitle = 'pH';
     x = steps;
     label = 'pH';
-    description = `pH from ${formatValue(input.from)} to ${formatValue(input.to)}, evenly spaced, ${n} points (a(H+) = 10^-pH)`;
+    description = `pH from ${formatValue(input.from)} to ${formatValue(input.to)}, evenly spaced, ${n} cases (a(H+) = 10^-pH)`;
   } else {
     xTitle = 'Temperature / °C';
     x = steps;
     label = 'T';
-    description = `temperature from ${formatValue(input.from)} to ${formatValue(input.to)} °C, evenly spaced, ${n} points`;
+    description = `temperature from ${formatValue(input.from)} to ${formatValue(input.to)} °C, evenly spaced, ${n} cases`;
   }
   const baseName = `${yShort} vs ${label}`;
   if (input.fixed.length > 0) {
@@ -567,7 +650,8 @@ export function planSweep(input: SweepInput): SweepLayout {
       values: [
         [description],
         [
-          'Species columns hold activities (solutes, ideal: mol/L), partial pressures in bar (gases) or pH; temp_C in °C; ' +
+          'Species columns hold activities of solutes (dimensionless; for a dilute, ideal solution the concentration in mol/L divided by 1 mol/L), ' +
+            'partial pressures in bar (gases) or pH; temp_C in °C; ' +
             `${yTitle.replace(' / V', ' in V')}. Edit any value: the result column recalculates.`,
         ],
         [CAUTIONS],
@@ -664,66 +748,4 @@ export function sweepSheetPlan(
       `Created sheet "${sheetName}": ${n} cases in ${layout.inputRange}, the formula ${layout.formula} in ${layout.formulaCell} ` +
       `(spilling to ${layout.spillRange}), and a chart of ${layout.yTitle} against ${layout.xTitle}.`,
   };
-}
-
-/**
- * The engine's values of E for the cases (built-in table), for the preview; each case
- * may fail on its own.
- */
-export function previewValues(input: SweepInput, layout: SweepLayout): PreviewValue[] {
-  let form: NernstForm;
-  try {
-    form = compiledReaction(input.reaction, null);
-  } catch (e) {
-    const message = isEngineError(e) ? e.message : String(e);
-    return layout.cases.map(() => ({ ok: false, message }));
-  }
-  let binding: ReturnType<typeof bindSpecies>;
-  try {
-    binding = bindSpecies(form, layout.headers);
-  } catch (e) {
-    const message = isEngineError(e) ? e.message : String(e);
-    return layout.cases.map(() => ({ ok: false, message }));
-  }
-  return layout.cases.map((row, i) => {
-    try {
-      const e = potentialV(binding, row, layout.temps[i] as number);
-      return Number.isFinite(e) ? { ok: true, e } : { ok: false, message: 'not a finite number' };
-    } catch (err) {
-      return { ok: false, message: isEngineError(err) ? err.message : String(err) };
-    }
-  });
-}
-
-/**
- * The slope the Nernst equation predicts along the sweep, where it is a straight line:
- * dE/d(log10 a) for a log activity sweep, dE/dpH for a pH sweep (V per decade or per pH
- * unit), at the sweep's temperature; null otherwise.
- *
- * E = E° − (RT ln10/F)·Σ wₖ log10 aₖ, so dE/d log10 a(X) = −(RT ln10/F)·w(X), and with
- * log10 a(H+) = −pH, dE/dpH = +(RT ln10/F)·w(H+).
- */
-export function expectedSlope(input: SweepInput): { slope: number; per: string } | null {
-  const v = input.variable;
-  if (v.kind === 'temperature' || (v.kind === 'activity' && v.scale !== 'log')) return null;
-  let form: NernstForm;
-  try {
-    form = compiledReaction(input.reaction, null);
-  } catch {
-    return null;
-  }
-  const s = nernstSlopeV(input.tempC);
-  if (v.kind === 'pH') {
-    const w = form.terms
-      .filter((t) => t.key === 'H|1' && t.inline === undefined)
-      .reduce((acc, t) => acc + t.weight, 0);
-    return { slope: s * w, per: 'V per pH unit' };
-  }
-  const k = headerKey(v.species);
-  if (k === null) return null;
-  const [side] = k.split('|');
-  const w = form.terms
-    .filter((t) => k.endsWith(`|species|${t.key}`) && (side === '' || t.side === side))
-    .reduce((acc, t) => acc + t.weight, 0);
-  return { slope: -s * w, per: 'V per decade' };
 }

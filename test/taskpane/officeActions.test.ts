@@ -4,7 +4,7 @@
  * and Office failures reaching the user's status area.
  */
 import { BUILTIN_POTENTIALS } from '../../src/engine/index';
-import { PartialWriteError, writeNewSheet } from '../../src/taskpane/officeActions';
+import { PartialWriteError, splitRangeRef, writeNewSheet } from '../../src/taskpane/officeActions';
 import { planPotentialsSheet, POTENTIALS_HEADER } from '../../src/taskpane/potentialsSheet';
 import { planExampleSheet } from '../../src/taskpane/reference';
 import { runReported, type StatusKind } from '../../src/taskpane/status';
@@ -55,9 +55,11 @@ describe('insert potentials sheet', () => {
     expect(data[noSlope]?.[2]).toBe('');
     // the note gives the actual sheet and range to pass as `table`
     const notes = mock.range('Potentials', 'F1:F3').values as string[][];
-    expect(notes[1]?.[0]).toContain(`Potentials!A2:D${n + 1}`);
+    // the suggested range takes in 50 empty rows for the user's own couples, and the note says so
+    expect(notes[1]?.[0]).toContain(`Potentials!A2:D${n + 51}`);
+    expect(notes[1]?.[0]).toContain(`50 empty rows below the data (rows ${n + 2} to ${n + 51})`);
     expect(mock.range('Potentials', 'F5').formulas).toEqual([
-      [`=ECHEM.POTENTIAL("Fe3+/Fe2+",{"Fe3+","Fe2+"},{0.1,0.01},25,Potentials!A2:D${n + 1})`],
+      [`=ECHEM.POTENTIAL("Fe3+/Fe2+",{"Fe3+","Fe2+"},{0.1,0.01},25,Potentials!A2:D${n + 51})`],
     ]);
     expect(sheet.frozenRows).toBe(1);
     expect(mock.range('Potentials', 'A:D').format.autofitted).toBe(true);
@@ -65,7 +67,7 @@ describe('insert potentials sheet', () => {
     // the workbook's own sheet was not touched
     expect(mock.sheet('Sheet1').ranges).toHaveLength(0);
     expect(plan.summary).toContain('Created sheet "Potentials"');
-    expect(plan.summary).toContain(`Potentials!A2:D${n + 1}`);
+    expect(plan.summary).toContain(`Potentials!A2:D${n + 51}`);
   });
 
   test('never overwrites: with "Potentials" present it creates "Potentials (2)" and says so', async () => {
@@ -86,9 +88,9 @@ describe('insert potentials sheet', () => {
     const data = mock.range('Potentials (2)', 'A2:D3').values as unknown[][];
     expect(data.map((r) => r[0])).toEqual(['Cu2+ + e- -> Cu+', 'Cu2+ + 2 e- -> Cu']);
     // the quoted sheet name is used in the table reference
-    expect(plan?.tableRef).toBe("'Potentials (2)'!A2:D3");
+    expect(plan?.tableRef).toBe("'Potentials (2)'!A2:D53");
     expect(lines.at(-1)).toEqual({ kind: 'success', text: expect.stringContaining('"Potentials (2)"') });
-    expect(lines.at(-1)?.text).toContain("'Potentials (2)'!A2:D3");
+    expect(lines.at(-1)?.text).toContain("'Potentials (2)'!A2:D53");
   });
 
   test('a case-insensitive clash counts too: "potentials" and "Potentials (2)" give "Potentials (3)"', async () => {
@@ -288,5 +290,17 @@ describe('Office failures reach the user', () => {
     expect(error).toBeInstanceOf(PartialWriteError);
     expect((error as PartialWriteError).cause).toBe(cause);
     expect((error as PartialWriteError).sheetName).toBe('E vs log a(Cu2+)');
+  });
+});
+
+describe('splitRangeRef (the table range the preview reads)', () => {
+  test.each([
+    ["'Potentials (2)'!A2:D115", { sheet: 'Potentials (2)', address: 'A2:D115' }],
+    ["'Bob''s data'!A2:D9", { sheet: "Bob's data", address: 'A2:D9' }],
+    ['Potentials!$A$2:$D$115', { sheet: 'Potentials', address: '$A$2:$D$115' }],
+    ['A2:D20', { sheet: null, address: 'A2:D20' }],
+    ['MyTable', { name: 'MyTable' }],
+  ])('%s', (ref, parts) => {
+    expect(splitRangeRef(ref)).toEqual(parts);
   });
 });

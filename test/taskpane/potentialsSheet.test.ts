@@ -55,7 +55,7 @@ describe('planPotentialsSheet', () => {
     const n = plan.rowCount;
     expect(plan.sheetName).toBe('Potentials');
     expect(plan.tableAddress).toBe(`A1:D${n + 1}`);
-    expect(plan.tableRef).toBe(`Potentials!A2:D${n + 1}`);
+    expect(plan.tableRef).toBe(`Potentials!A2:D${n + 51}`); // 50 empty rows of room to grow
     const header = plan.blocks.find((b) => b.address === 'A1:D1');
     expect(header?.values).toEqual([[...POTENTIALS_HEADER]]);
     expect(POTENTIALS_HEADER).toEqual(['Half-reaction', 'E° (V vs SHE, 25 °C)', 'dE°/dT (mV/K)', 'Source']);
@@ -67,11 +67,11 @@ describe('planPotentialsSheet', () => {
       expect(typeof row[3]).toBe('string');
     }
     expect(plan.exampleFormula).toBe(
-      `=ECHEM.POTENTIAL("Fe3+/Fe2+",{"Fe3+","Fe2+"},{0.1,0.01},25,Potentials!A2:D${n + 1})`,
+      `=ECHEM.POTENTIAL("Fe3+/Fe2+",{"Fe3+","Fe2+"},{0.1,0.01},25,Potentials!A2:D${n + 51})`,
     );
     expect(plan.summary).toBe(
       `Created sheet "Potentials" with ${n} half-reactions (the element Fe) in A1:D${n + 1}, header in row 1, ` +
-        `notes in F1:F5. Pass Potentials!A2:D${n + 1} as the table argument.`,
+        `notes in F1:F5. Pass Potentials!A2:D${n + 51} as the table argument (it has room for 50 rows you add).`,
     );
   });
 

@@ -6,6 +6,7 @@ import {
   rangeDefaults,
   rowRole,
   sweepFormOf,
+  unitOf,
   variableOf,
   varyOptions,
   type SpeciesRow,
@@ -21,8 +22,8 @@ function needed(text: string) {
 describe('mergeSpeciesRows', () => {
   test('fills the rows from the reaction at unit activity', () => {
     expect(mergeSpeciesRows([], needed('Fe3+/Fe2+'))).toEqual([
-      { name: 'Fe3+', value: '1', origin: 'reaction' },
-      { name: 'Fe2+', value: '1', origin: 'reaction' },
+      { name: 'Fe3+', value: '1', origin: 'reaction', gas: false },
+      { name: 'Fe2+', value: '1', origin: 'reaction', gas: false },
     ]);
   });
   test('keeps typed values and the user own rows; drops rows the new reaction does not need', () => {
@@ -32,7 +33,7 @@ describe('mergeSpeciesRows', () => {
       { name: 'Cl-', value: '0.5', origin: 'user' },
     ];
     expect(mergeSpeciesRows(rows, needed('Fe2+ + 2 e- -> Fe'))).toEqual([
-      { name: 'Fe2+', value: '0.01', origin: 'reaction' },
+      { name: 'Fe2+', value: '0.01', origin: 'reaction', gas: false },
       { name: 'Cl-', value: '0.5', origin: 'user' },
     ]);
   });
@@ -83,5 +84,25 @@ describe('vary choices and roles', () => {
       }
     }
     expect(rangeDefaults({ kind: 'pH' })).toEqual({ from: '0', to: '14', points: '29', unit: 'pH' });
+  });
+});
+
+describe('units of the species rows and of the varied quantity', () => {
+  test('a gas is varied by its partial pressure in bar; a solute by its activity; pH rows are pH', () => {
+    const rows = mergeSpeciesRows([], needed('O2(g) + 4 H+ + 4 e- -> 2 H2O'));
+    expect(rows.map((r) => [r.name, unitOf(r)])).toEqual([
+      ['O2', 'bar'],
+      ['H+', 'activity'],
+    ]);
+    expect(varyOptions(rows).map((o) => o.label)).toEqual([
+      'Partial pressure of O2 (bar)',
+      'Activity of H+',
+      'pH',
+      'Temperature (°C)',
+    ]);
+    expect(unitOf({ name: 'pH' })).toBe('pH');
+    expect(unitOf({ name: 'Cl2(g)' })).toBe('bar');
+    expect(rangeDefaults({ kind: 'activity', species: 'O2', scale: 'log' }, true).unit).toBe('bar');
+    expect(rangeDefaults({ kind: 'activity', species: 'Cu2+', scale: 'log' }).unit).toBe('activity');
   });
 });

@@ -1,34 +1,28 @@
 /**
- * The sweep builder's pure logic: the reaction check, reading the form, case values
- * (log and linear spacing), the sheet layout and formula text, and the engine preview,
- * with published checks where chemistry appears.
- *
- * Sources: RT ln10/F = 59.15935 mV at 25 °C and 64.1199 mV at 50 °C, derived from the SI
- * 2019 exact constants (F = N_A·e, R = N_A·k). E° values: OpenStax Chemistry 2e, Appendix L
- * (Cu2+/Cu +0.337 V, Zn2+/Zn −0.7618 V, O2/H2O +1.229 V, O2/OH- +0.401 V, MnO4-/Mn2+ +1.507 V).
+ * The case series' pure logic: the reaction check, reading the form (messages in sentence
+ * case, decimal commas where the locale uses them), case values (log and linear spacing),
+ * and the sheet layout and formula text. The preview values are checked against published
+ * figures in seriesPreview.test.ts.
  */
 import {
   caretLine,
   checkReaction,
-  expectedSlope,
   FIRST_CASE_ROW,
   fixedRows,
   formatValue,
   HEADER_ROW,
   linearSteps,
   logSteps,
+  missingSummary,
+  sentenceCase,
   MAX_POINTS,
   planSweep,
-  previewValues,
   readNumber,
   readSweepForm,
   type SweepForm,
   type SweepInput,
   sweepSheetPlan,
 } from '../../src/taskpane/sweepPlan';
-
-const SLOPE_25 = 0.05915935; // V per decade, derived from the SI exact constants
-const SLOPE_50 = 0.0641199; // V per decade at 50 °C, derived likewise
 
 function form(over: Partial<SweepForm> = {}): SweepForm {
   return {
@@ -60,10 +54,12 @@ describe('checkReaction (live validation)', () => {
     expect(caretLine(c.position ?? 1)).toBe('    ^');
   });
 
-  test('empty text is an error at character 1', () => {
-    const c = checkReaction('  ');
-    expect(c.ok).toBe(false);
-    if (!c.ok) expect(c.position).toBe(1);
+  test('empty text asks for a reaction in a sentence, with no caret position', () => {
+    expect(checkReaction('  ')).toEqual({
+      ok: false,
+      message: 'Type a reaction, for example Cu2+/Cu or Zn | Zn2+ || Cu2+ | Cu.',
+      position: null,
+    });
   });
 
   test('a couple lists the species the resolved half-reaction needs, H+ included', () => {
@@ -196,9 +192,9 @@ describe('readSweepForm', () => {
     expect(byField.tempC).toContain('−273.15');
     expect(byField['value-1']).toContain('above 0');
     expect(byField['species-2']).toContain('listed twice');
-    expect(byField['species-3']).toContain('give the species name');
+    expect(byField['species-3']).toContain('Give the name of species 4');
     expect(byField['species-4']).toContain('is not a species');
-    expect(byField.table).toContain('Potentials!A2:D65');
+    expect(byField.table).toContain('Potentials!A2:D115');
   });
 
   test('equal ends are refused; temperatures must be above absolute zero', () => {
@@ -352,95 +348,64 @@ describe('planSweep: layout and formula', () => {
   });
 });
 
-describe('engine preview and Nernst slopes (published checks)', () => {
-  test('Cu2+/Cu: E° = +0.337 V at unit activity; 0.05916/2 V per decade at 25 °C', () => {
-    const i = input({ points: '7' });
-    const values = previewValues(i, planSweep(i));
-    expect(values).toHaveLength(7);
-    const e = values.map((v) => (v.ok ? v.e : NaN));
-    expect(e[6]).toBeCloseTo(0.337, 12); // OpenStax Appendix L
-    expect(e[4]).toBeCloseTo(0.337 - SLOPE_25, 6); // a = 0.01: 0.27784 V
-    for (let k = 1; k < 7; k++) expect((e[k] as number) - (e[k - 1] as number)).toBeCloseTo(SLOPE_25 / 2, 7);
-    expect(expectedSlope(i)?.slope).toBeCloseTo(SLOPE_25 / 2, 7);
-    expect(expectedSlope(i)?.per).toBe('V per decade');
+describe('messages: sentence case, and what the write button says', () => {
+  test('sentenceCase capitalises and ends with a full stop', () => {
+    expect(sentenceCase('reaction is missing: give a reaction')).toBe(
+      'Reaction is missing: give a reaction.',
+    );
+    expect(sentenceCase('Already fine.')).toBe('Already fine.');
+    expect(sentenceCase('')).toBe('');
   });
 
-  test('O2/H2O against pH: −0.05916 V/pH, reaching E°(O2/OH-) = +0.401 V at pH 14', () => {
-    const i = input({
-      reaction: 'O2(g) + 4 H+ + 4 e- -> 2 H2O',
-      variable: { kind: 'pH' },
-      from: '0',
-      to: '14',
-      points: '15',
-      species: [{ name: 'O2(g)', value: '1' }],
-    });
-    const e = previewValues(i, planSweep(i)).map((v) => (v.ok ? v.e : NaN));
-    expect(e[0]).toBeCloseTo(1.229, 12); // OpenStax Appendix L
-    expect(e[14]).toBeCloseTo(0.401, 2); // OpenStax: O2 + 2 H2O + 4 e- -> 4 OH-, +0.401 V (within 1 mV)
-    expect(Math.abs((e[14] as number) - 0.401)).toBeLessThan(0.001);
-    expect(expectedSlope(i)?.slope).toBeCloseTo(-SLOPE_25, 7);
+  test('missingSummary names the inputs to fix, without repeating their messages', () => {
+    const e = (label: string) => ({ field: label.toLowerCase(), label, message: `Message about ${label}.` });
+    expect(missingSummary([])).toBe('');
+    expect(missingSummary([e('From')])).toBe('Not ready: From needs fixing (see the message beside it).');
+    expect(missingSummary([e('From'), e('To'), e('Cases')])).toBe(
+      'Not ready: From, To and Cases need fixing (see the messages beside them).',
+    );
   });
 
-  test('MnO4-/Mn2+ against pH: −(8/5)·0.05916 V/pH', () => {
-    const i = input({
-      reaction: 'MnO4-/Mn2+',
-      variable: { kind: 'pH' },
-      from: '0',
-      to: '7',
-      points: '8',
-      species: [
-        { name: 'MnO4-', value: '1' },
-        { name: 'H+', value: '1' },
-        { name: 'Mn2+', value: '1' },
+  test('a comma locale reads "0,01" in every number box; a point locale says to use a point', () => {
+    const r = readSweepForm(
+      form({
+        from: '0,001',
+        to: '0,1',
+        species: [{ name: 'Cu2+', value: '0,5' }],
+        variable: { kind: 'activity', species: 'Cu2+', scale: 'linear' },
+      }),
+      { decimalComma: true },
+    );
+    expect(r.ok && [r.input.from, r.input.to]).toEqual([0.001, 0.1]);
+    const refused = readSweepForm(form({ from: '0,001' }));
+    expect(refused).toEqual({
+      ok: false,
+      errors: [
+        {
+          field: 'from',
+          label: 'From',
+          message:
+            'From "0,001" is not a number: write a number such as 0.01, 1e-6 or 10^-6 (with a decimal point).',
+        },
       ],
     });
-    expect(i.fixed.map((f) => f.name)).toEqual(['MnO4-', 'Mn2+']);
-    const e = previewValues(i, planSweep(i)).map((v) => (v.ok ? v.e : NaN));
-    expect(e[0]).toBeCloseTo(1.507, 12); // OpenStax Appendix L
-    expect((e[7] as number) - (e[0] as number)).toBeCloseTo(-7 * 1.6 * SLOPE_25, 6);
-    expect(expectedSlope(i)?.slope).toBeCloseTo(-1.6 * SLOPE_25, 7);
   });
 
-  test('the slope follows the temperature: H+/H2 at 50 °C falls 64.12 mV per pH', () => {
-    const i = input({
-      reaction: '2 H+ + 2 e- -> H2(g)',
-      variable: { kind: 'pH' },
-      from: '0',
-      to: '10',
-      points: '11',
-      tempC: '50',
-      species: [{ name: 'H2(g)', value: '1' }],
+  test('the reaction check given is used as it is (checked once per change)', () => {
+    const check = checkReaction('Fe3+/Fe2+');
+    const r = readSweepForm(
+      form({
+        reaction: 'Fe3+/Fe2+',
+        species: [{ name: 'Fe2+', value: '1' }],
+        variable: { kind: 'activity', species: 'Fe3+', scale: 'log' },
+      }),
+      { check },
+    );
+    expect(r.ok).toBe(true);
+    const bad = readSweepForm(form(), { check: { ok: false, message: 'Given check.', position: null } });
+    expect(bad).toEqual({
+      ok: false,
+      errors: [{ field: 'reaction', label: 'Reaction', message: 'Given check.' }],
     });
-    expect(expectedSlope(i)?.slope).toBeCloseTo(-SLOPE_50, 6);
-    const e = previewValues(i, planSweep(i)).map((v) => (v.ok ? v.e : NaN));
-    expect(e[0]).toBeCloseTo(0, 12); // SHE: zero at every temperature (IUPAC)
-    expect(e[10]).toBeCloseTo(-10 * SLOPE_50, 5);
-  });
-
-  test('Daniell-type cell: 1.0988 V at unit activities, +0.05916/2 V per decade of Cu2+', () => {
-    const i = input({
-      reaction: 'Zn | Zn2+ || Cu2+ | Cu',
-      from: '0.01',
-      to: '1',
-      points: '3',
-      species: [
-        { name: 'Cu2+', value: '1' },
-        { name: 'Zn2+', value: '1' },
-      ],
-    });
-    const e = previewValues(i, planSweep(i)).map((v) => (v.ok ? v.e : NaN));
-    expect(e[2]).toBeCloseTo(0.337 + 0.7618, 10); // OpenStax E° values; "about 1.10 V"
-    expect((e[2] as number) - (e[0] as number)).toBeCloseTo(SLOPE_25, 7);
-    expect(expectedSlope(i)?.slope).toBeCloseTo(SLOPE_25 / 2, 7);
-  });
-
-  test('a missing species makes every preview case report the engine message', () => {
-    const i = input({
-      reaction: 'Fe3+/Fe2+',
-      species: [{ name: 'Fe3+', value: '1' }],
-      variable: { kind: 'pH' },
-    });
-    const values = previewValues(i, planSweep(i));
-    expect(values.every((v) => !v.ok && v.message.includes('Fe2+'))).toBe(true);
   });
 });
