@@ -233,6 +233,27 @@ export function handSweepTyped(rows: number[][]): Float64Array {
   return out;
 }
 
+/**
+ * The engine's sweep kernel alone, called through the engine index as the function layer
+ * calls it (reaction compiled and bound once, rows in, a column of one-cell rows out): the
+ * spill's cost without the function layer's argument and result passes. Null where the
+ * engine no longer exports these.
+ */
+function kernelSweep(): ((rows: number[][]) => unknown[][]) | null {
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const e = require('../src/engine') as Record<string, unknown>;
+  const compile = e.compiledReaction as ((t: string, c: unknown) => unknown) | undefined;
+  const bind = e.bindSpecies as ((f: unknown, h: string[]) => unknown) | undefined;
+  const sweep = e.sweepToColumn as
+    | ((b: unknown, rows: number[][], t: number, q: string, onError: (x: unknown) => unknown) => unknown[][])
+    | undefined;
+  if (typeof compile !== 'function' || typeof bind !== 'function' || typeof sweep !== 'function') return null;
+  return (rows) => {
+    const b = bind(compile(DANIELL_DIAGRAM, daniellTableRange()), ['Zn2+', 'Cu2+']);
+    return sweep(b, rows, 25, 'potential', (x) => x);
+  };
+}
+
 export interface SweepFigures {
   cases: number;
   spillMs: Stat;
@@ -242,6 +263,9 @@ export interface SweepFigures {
   /** Against the Float64Array loop (the floor). */
   ratioFloor: Stat;
   floorMs: Stat;
+  /** The engine kernel alone against the same floor (null where it cannot be reached). */
+  kernelRatioFloor: Stat | null;
+  kernelMs: Stat | null;
 }
 
 /** One spilled POTENTIAL over `cases` rows × 2 species (user table, 25 °C) against the hand loops. */
@@ -272,7 +296,21 @@ export function benchSweep(cases: number, runs: number): SweepFigures {
   };
   const a = timePair(spill, rowsLoop, runs);
   const b = timePair(spill, floor, runs);
+  const kern = kernelSweep();
+  const c = kern
+    ? timePair<number[][], unknown[][], number[][], Float64Array>(
+        {
+          prepare: () => sweepRows(cases, 7_000_001 * ++k),
+          run: kern,
+          check: (rows, out) => checkColumn('sweep_kernel', rows, (i) => (out[i] as unknown[])[0]),
+        },
+        floor,
+        runs,
+      )
+    : null;
   return {
+    kernelRatioFloor: c ? c.ratio : null,
+    kernelMs: c ? c.fMs : null,
     cases,
     spillMs: a.fMs,
     ratioRows: a.ratio,

@@ -59,7 +59,7 @@ interface Sizes {
 }
 
 const NORMAL: Sizes = {
-  calls: 20_000,
+  calls: 100_000,
   callRuns: 7,
   sweepCases: 100_000,
   sweepRuns: 9,
@@ -173,6 +173,13 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
     out.sweep_ratio = r3(s.ratioRows);
     out.sweep_ns_per_case = rounded(ns(s.spillMs), 1);
     out.sweep_floor_ns_per_case = rounded(ns(s.floorMs), 1);
+    if (s.kernelMs && s.kernelRatioFloor) {
+      log(
+        `      the engine kernel alone (no function layer): ${mm(ns(s.kernelMs), 1)} ns per case; ÷ floor ${mm(s.kernelRatioFloor)}`,
+      );
+      out.sweep_kernel_ns_per_case = rounded(ns(s.kernelMs), 1);
+      out.sweep_kernel_ratio_floor = r3(s.kernelRatioFloor);
+    }
   }
 
   if (wants('diagram')) {

@@ -72,14 +72,19 @@ export function timeRuns<I, O>(c: Contender<I, O>, runs: number, warmup = 2): St
   return stat(ms);
 }
 
-/** A timed pair: each side's milliseconds per run and the ratio f/g per run, as stats. */
+/**
+ * A timed pair: each side's milliseconds per run, and the ratio f/g as min(f)/min(g) and
+ * median(f)/median(g). (Per-run ratios would be noisier: on a shared machine one descheduled
+ * run of the short baseline swings its ratio several-fold; the minimum is each side's cost
+ * with the least interference.)
+ */
 export interface PairStat {
   fMs: Stat;
   gMs: Stat;
   ratio: Stat;
 }
 
-/** Times two contenders alternately; the ratio's stats are over the per-run ratios. */
+/** Times two contenders alternately, run by run, so drifts in machine load fall on both. */
 export function timePair<I, O, J, P>(
   f: Contender<I, O>,
   g: Contender<J, P>,
@@ -92,15 +97,13 @@ export function timePair<I, O, J, P>(
   }
   const fs: number[] = [];
   const gs: number[] = [];
-  const rs: number[] = [];
   for (let r = 0; r < runs; r++) {
-    const a = timeOnce(f);
-    const b = timeOnce(g);
-    fs.push(a);
-    gs.push(b);
-    rs.push(a / b);
+    fs.push(timeOnce(f));
+    gs.push(timeOnce(g));
   }
-  return { fMs: stat(fs), gMs: stat(gs), ratio: stat(rs) };
+  const fMs = stat(fs);
+  const gMs = stat(gs);
+  return { fMs, gMs, ratio: { min: fMs.min / gMs.min, median: fMs.median / gMs.median, runs } };
 }
 
 /** A check that failed: which benchmark, which output, expected and got. */
