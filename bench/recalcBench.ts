@@ -43,6 +43,14 @@ const GNU_TIME = '/usr/bin/time';
 
 export type Side = 'echem' | 'plain';
 
+/** A peer that could not run to the end (as opposed to a wrong output, a CheckFailure). */
+export class RunFailure extends Error {
+  constructor(what: string, detail: string) {
+    super(`${what}: ${detail}`);
+    this.name = 'RunFailure';
+  }
+}
+
 /** Column of the result (0-based) on the Cases sheet; row 0 is the header. */
 const RESULT_COL = 3;
 
@@ -66,14 +74,33 @@ export function caseFormula(side: Side, r: number): string {
   );
 }
 
-/** The sheets of one side: Cases (a(Zn2+) | a(Cu2+) | temp_C | E) and Potentials. */
-export function workbookSheets(side: Side, rows: number): Record<string, RawCellContent[][]> {
-  const cases: RawCellContent[][] = [['Zn2+', 'Cu2+', 'temp_C', 'E (V)']];
-  for (let i = 0; i < rows; i++) {
-    const c = caseInputs(i);
-    cases.push([c.aZn, c.aCu, c.tempC, caseFormula(side, i + 2)]);
-  }
-  return { Cases: cases, Potentials: potentialsSheet() };
+/** The case sheets of a layout: "Cases", or "Cases1"…"CasesK" where the cases are split over K sheets. */
+export function caseSheetNames(sheets: number): string[] {
+  return sheets === 1 ? ['Cases'] : Array.from({ length: sheets }, (_, k) => `Cases${k + 1}`);
+}
+
+/** Cases per case sheet (the last may hold fewer). */
+function perSheet(rows: number, sheets: number): number {
+  return Math.ceil(rows / sheets);
+}
+
+/**
+ * The sheets of one side: the case sheets (a(Zn2+) | a(Cu2+) | temp_C | E, case i on sheet
+ * ⌊i/perSheet⌋) and Potentials.
+ */
+export function workbookSheets(side: Side, rows: number, sheets = 1): Record<string, RawCellContent[][]> {
+  const out: Record<string, RawCellContent[][]> = {};
+  const per = perSheet(rows, sheets);
+  caseSheetNames(sheets).forEach((name, k) => {
+    const cases: RawCellContent[][] = [['Zn2+', 'Cu2+', 'temp_C', 'E (V)']];
+    for (let i = k * per; i < Math.min(rows, (k + 1) * per); i++) {
+      const c = caseInputs(i);
+      cases.push([c.aZn, c.aCu, c.tempC, caseFormula(side, i - k * per + 2)]);
+    }
+    out[name] = cases;
+  });
+  out.Potentials = potentialsSheet();
+  return out;
 }
 
 /** The expected E of every case row, by hand. */
@@ -87,9 +114,9 @@ function expectedColumn(rows: number): Float64Array {
 }
 
 /** Writes one side's workbook as .xlsx, formulas without cached values (so every peer must compute). */
-export async function writeWorkbookFile(side: Side, rows: number, file: string): Promise<void> {
+export async function writeWorkbookFile(side: Side, rows: number, file: string, sheets = 1): Promise<void> {
   const wb = new ExcelJS.Workbook();
-  for (const [name, grid] of Object.entries(workbookSheets(side, rows))) {
+  for (const [name, grid] of Object.entries(workbookSheets(side, rows, sheets))) {
     const ws = wb.addWorksheet(name);
     grid.forEach((row, r) =>
       row.forEach((v, c) => {
@@ -137,16 +164,19 @@ function compareSides(what: string, a: readonly unknown[], b: readonly unknown[]
 }
 
 /** The cached results of column D of a written .xlsx (rows 2…). */
-async function readResultColumn(file: string, rows: number): Promise<unknown[]> {
+async function readResultColumn(file: string, rows: number, sheets = 1): Promise<unknown[]> {
   const wb = new ExcelJS.Workbook();
   await wb.xlsx.readFile(file);
-  const ws = wb.getWorksheet('Cases');
-  if (!ws) throw new CheckFailure('recalc', `${file} has no Cases sheet`);
   const out = new Array<unknown>(rows);
-  for (let i = 0; i < rows; i++) {
-    const v = ws.getCell(i + 2, RESULT_COL + 1).value as unknown;
-    out[i] = typeof v === 'object' && v !== null && 'result' in v ? (v as { result: unknown }).result : v;
-  }
+  const per = perSheet(rows, sheets);
+  caseSheetNames(sheets).forEach((name, k) => {
+    const ws = wb.getWorksheet(name);
+    if (!ws) throw new CheckFailure('recalc', `${file} has no ${name} sheet`);
+    for (let i = k * per; i < Math.min(rows, (k + 1) * per); i++) {
+      const v = ws.getCell(i - k * per + 2, RESULT_COL + 1).value as unknown;
+      out[i] = typeof v === 'object' && v !== null && 'result' in v ? (v as { result: unknown }).result : v;
+    }
+  });
   return out;
 }
 
@@ -418,9 +448,9 @@ function measuredRun(cmd: string, args: string[], what: string, env?: NodeJS.Pro
     : spawnSync(cmd, args, { cwd: ROOT, encoding: 'utf8', timeout: 600_000, env: env ?? process.env });
   const wallS = Number(process.hrtime.bigint() - t0) / 1e9;
   if (res.status !== 0)
-    throw new CheckFailure(
+    throw new RunFailure(
       what,
-      `${cmd} ${args.join(' ')} exited with ${res.status}: ${(res.stderr ?? '').slice(-2000)}`,
+      `${cmd} ${args.join(' ')} exited with ${res.status}: ${(res.stderr ?? '').split(/\n\s*Command (being timed|exited)/)[0]?.slice(-2000)}`,
     );
   let peakRssMiB: number | null = null;
   const m = useTime ? /Maximum resident set size \(kbytes\):\s*(\d+)/.exec(res.stderr ?? '') : null;
@@ -451,10 +481,11 @@ export async function benchEndToEnd(
   rows: number,
   runs: number,
   dir: string,
+  sheets = 1,
 ): Promise<{ figures: EndToEndFigures; values: unknown[] }> {
-  const input = path.join(dir, `${side}-${rows}.xlsx`);
-  if (!fs.existsSync(input)) await writeWorkbookFile(side, rows, input);
-  const output = path.join(dir, `${side}-${rows}.potentia.xlsx`);
+  const input = path.join(dir, `${side}-${rows}x${sheets}.xlsx`);
+  if (!fs.existsSync(input)) await writeWorkbookFile(side, rows, input, sheets);
+  const output = path.join(dir, `${side}-${rows}x${sheets}.potentia.xlsx`);
   const expected = expectedColumn(rows);
   const results: ProcessRun[] = [];
   let values: unknown[] = [];
@@ -468,7 +499,7 @@ export async function benchEndToEnd(
       ),
     );
     if (r === 0) {
-      values = await readResultColumn(output, rows);
+      values = await readResultColumn(output, rows, sheets);
       checkValues(`potentia recalc (${side})`, values, expected);
     }
   }
@@ -506,9 +537,10 @@ export async function benchLibreOffice(
   rows: number,
   runs: number,
   dir: string,
+  sheets = 1,
 ): Promise<{ figures: EndToEndFigures; values: unknown[] }> {
-  const input = path.join(dir, `plain-${rows}.xlsx`);
-  if (!fs.existsSync(input)) await writeWorkbookFile('plain', rows, input);
+  const input = path.join(dir, `plain-${rows}x${sheets}.xlsx`);
+  if (!fs.existsSync(input)) await writeWorkbookFile('plain', rows, input, sheets);
   const outDir = path.join(dir, 'lo-out');
   fs.mkdirSync(outDir, { recursive: true });
   const profile = libreOfficeProfile(dir);
@@ -531,7 +563,7 @@ export async function benchLibreOffice(
     const run = measuredRun(SOFFICE, args, 'LibreOffice');
     if (!fs.existsSync(output)) throw new CheckFailure('LibreOffice', `no output written to ${output}`);
     if (r === 0) {
-      values = await readResultColumn(output, rows);
+      values = await readResultColumn(output, rows, sheets);
       checkValues('LibreOffice recalc (plain)', values, expected);
     }
     if (r >= 0) results.push(run);

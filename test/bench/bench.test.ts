@@ -92,6 +92,9 @@ describe('npm run bench -- --tiny --full', () => {
     expectFigure(figures.first_call_ms, 1);
     expectFigure(figures.recalc_100k_s, 1);
     expect(figures.recalc_100k_rows).toBe(100);
+    expectFigure(figures.recalc_100k_split_s, 1);
+    expect(figures.recalc_100k_split_sheets).toBe(4);
+    expect('recalc_100k_error' in figures).toBe(false);
     for (const key of ['call_ratio_excel_table', 'sweep_ratio', 'recalc_ratio', 'recalc_eval_ratio'])
       expectFigure(figures[key], 2);
     expectFigure(figures.cli_eval_ms, 1);
@@ -108,6 +111,7 @@ describe('npm run bench -- --tiny --full', () => {
   it('compares with LibreOffice exactly when it is installed', () => {
     expect('recalc_vs_libreoffice' in figures).toBe(hasLibreOffice());
     expect('recalc_100k_libreoffice_s' in figures).toBe(hasLibreOffice());
+    expect(figures.recalc_vs_libreoffice_layout).toBe(hasLibreOffice() ? 'one sheet of 100 rows' : undefined);
   });
 
   it('checked every timed output against the hand-written computation', () => {
@@ -130,10 +134,11 @@ describe('npm run bench -- --tiny --full', () => {
     expect(counts['recalc in process']).toBe(600);
     expect(counts['recalc engine split']).toBe(600);
     expect(counts['recalc ECHEM vs plain']).toBe(100);
-    // the first end-to-end output of each workbook, then ECHEM against plain
-    expect(counts['potentia recalc']).toBe(200);
-    expect(counts['potentia recalc ECHEM vs plain']).toBe(100);
-    expect(counts['LibreOffice recalc']).toBe(hasLibreOffice() ? 100 : undefined);
+    // the first end-to-end output of each workbook, then ECHEM against plain, in two layouts
+    // (one sheet, and the same cases over 4 sheets)
+    expect(counts['potentia recalc']).toBe(400);
+    expect(counts['potentia recalc ECHEM vs plain']).toBe(200);
+    expect(counts['LibreOffice recalc']).toBe(hasLibreOffice() ? 200 : undefined);
     expect(lines[lines.length - 1]).toMatch(/outputs checked .* all passed/);
   });
 
