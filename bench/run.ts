@@ -174,6 +174,7 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
     out.sweep_ratio = r3(s.ratioRows);
     out.sweep_ns_per_case = rounded(ns(s.spillMs), 1);
     out.sweep_floor_ns_per_case = rounded(ns(s.floorMs), 1);
+    out.sweep_rows_loop_ns_per_case = rounded(ns(s.rowsLoopMs), 1);
     if (s.kernelMs && s.kernelRatioFloor) {
       log(
         `      the engine kernel alone (no function layer): ${mm(ns(s.kernelMs), 1)} ns per case; ÷ floor ${mm(s.kernelRatioFloor)}`,
