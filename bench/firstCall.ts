@@ -25,6 +25,8 @@ function childScript(source: 'dist' | 'ts-node', aZn: number, aCu: number, tempC
          require(${JSON.stringify(path.join(ROOT, 'src', 'functions', 'functions.ts'))});`;
   return `
     'use strict';
+    // a worker-like global, as the custom-functions runtime gives the bundle
+    if (typeof globalThis.self === 'undefined') globalThis.self = globalThis;
     const associations = new Map();
     class StubError { constructor(code, message) { this.code = code; this.message = message; } }
     globalThis.CustomFunctions = {
