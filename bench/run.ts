@@ -1,231 +1,378 @@
 /**
- * Benchmarks (figures, never timed tests). Each figure is a ratio to a baseline
- * measured in the same process and run: the median of several repetitions after
- * warm-up. `npm run bench -- --json` prints one JSON object on its last line.
+ * Benchmarks (figures, never timed tests). What each figure times is in bench/README.md.
  *
- * 1. sweep_ratio: one POTENTIAL call over 100,000 cases × 2 species through the
- *    function layer (matrix in, column out) vs a hand-written Nernst loop over the
- *    same arrays producing the same column.
- * 2. call_ratio: 100,000 single-case POTENTIAL calls with the same reaction text,
- *    per call, vs the hand loop's per-case cost.
- * 3. parse_cell_us / parse_reaction_us: cold parse + table resolution of a cell
- *    diagram and of a full reaction (caches cleared before each).
- * 4. recalc_ratio: headless recalculation of a 10,000-row workbook of ECHEM
- *    formulas vs the same workbook in plain spreadsheet arithmetic.
- * 5. bundle_kb / bundle_gzip_kb: size of the built dist/functions.js.
+ *   npm run bench                 figures as text
+ *   npm run bench -- --json       the same, and one JSON object on the last line of stdout
+ *   npm run bench -- --full       adds the 100,000-row end-to-end recalculations and
+ *                                 LibreOffice at that size (slow: minutes)
+ *   npm run bench -- --tiny       every benchmark at a tiny size, 2 runs (a smoke test of the
+ *                                 harness and its checks; the figures mean nothing)
+ *   npm run bench -- --only=call,sweep,diagram,first,cli,parse,recalc,e2e
+ *                                 only those benchmarks (for profiling one path)
+ *
+ * Every figure is {min, median, runs} over its timed runs. Every output of every timed run is
+ * checked against an independent computation (bench/reference.ts); a wrong output stops the
+ * benchmark with an error instead of printing a figure.
  */
 import * as fs from 'fs';
 import * as os from 'os';
 import * as path from 'path';
 import * as zlib from 'zlib';
-import * as v8 from 'v8';
-import * as vm from 'vm';
-import { potential } from '../src/functions/catalogue';
-import { clearCaches, compiledReaction, FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K } from '../src/engine';
+import * as engine from '../src/engine';
+import { benchExcelCalls, benchInlineDiagram, benchSweep } from './excelBench';
+import { benchCliEval, benchFirstCall } from './firstCall';
+import {
+  benchEndToEnd,
+  benchInProcess,
+  benchLibreOffice,
+  compareOutputs,
+  hasLibreOffice,
+  RunFailure,
+  scratchDir,
+  type EndToEndFigures,
+} from './recalcBench';
+import { checkedCounts, rounded, stat, type Stat } from './stats';
 
-const CASES = 100_000;
-
-v8.setFlagsFromString('--expose-gc');
-const gc = vm.runInNewContext('gc') as (() => void) | undefined;
-
-/** A full collection before each timed run, so one run's garbage is not charged to the next. */
-function collectGarbage(): void {
-  if (typeof gc === 'function') gc();
+export interface BenchOptions {
+  json?: boolean;
+  full?: boolean;
+  tiny?: boolean;
+  only?: readonly string[];
+  /** Where progress lines go (stderr with --json, stdout otherwise). */
+  log?: (line: string) => void;
 }
 
-function median(xs: number[]): number {
-  const s = xs.slice().sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
+/** Sizes and run counts of one mode. */
+interface Sizes {
+  calls: number;
+  callRuns: number;
+  sweepCases: number;
+  sweepRuns: number;
+  diagramCalls: number;
+  diagramRuns: number;
+  spawnRuns: number;
+  recalcRows: number;
+  recalcRuns: number;
+  e2eRows: number;
+  e2eRuns: number;
+  bigRows: number;
+  bigRuns: number;
 }
 
-/**
- * Time two functions alternately (so drift and garbage collection fall on both alike) and
- * return the median of each and the median of the per-repetition ratios f/g.
- */
-function pairedMs(
-  f: () => unknown,
-  g: () => unknown,
-  reps: number,
-  warmup = 3,
-): { fMs: number; gMs: number; ratio: number } {
-  for (let i = 0; i < warmup; i++) {
-    f();
-    g();
-  }
-  const fs: number[] = [];
-  const gs: number[] = [];
-  const rs: number[] = [];
-  const clock = (h: () => unknown) => {
-    collectGarbage();
-    const t0 = process.hrtime.bigint();
-    h();
-    return Number(process.hrtime.bigint() - t0) / 1e6;
-  };
-  for (let i = 0; i < reps; i++) {
-    const a = clock(f);
-    const b = clock(g);
-    fs.push(a);
-    gs.push(b);
-    rs.push(a / b);
-  }
-  return { fMs: median(fs), gMs: median(gs), ratio: median(rs) };
-}
+const NORMAL: Sizes = {
+  calls: 100_000,
+  callRuns: 7,
+  sweepCases: 100_000,
+  sweepRuns: 9,
+  diagramCalls: 1_000,
+  diagramRuns: 5,
+  spawnRuns: 5,
+  recalcRows: 10_000,
+  recalcRuns: 5,
+  e2eRows: 10_000,
+  e2eRuns: 5,
+  bigRows: 100_000,
+  bigRuns: 3,
+};
 
-function makeCases(): number[][] {
-  const rows: number[][] = new Array(CASES);
-  for (let i = 0; i < CASES; i++) rows[i] = [Math.pow(10, -1 - (i % 50) / 10), Math.pow(10, -(i % 37) / 10)];
-  return rows;
-}
+const TINY: Sizes = {
+  calls: 100,
+  callRuns: 2,
+  sweepCases: 100,
+  sweepRuns: 2,
+  diagramCalls: 20,
+  diagramRuns: 2,
+  spawnRuns: 1,
+  recalcRows: 100,
+  recalcRuns: 2,
+  e2eRows: 100,
+  e2eRuns: 1,
+  bigRows: 100,
+  bigRuns: 1,
+};
 
-/** The floor: the Nernst equation written by hand for the Daniell cell, same arrays, same column out. */
-function handLoop(rows: number[][], e0V: number): number[][] {
-  const s = (GAS_CONSTANT_J_PER_MOL_K * 298.15 * Math.LN10) / (2 * FARADAY_C_PER_MOL);
-  const out: number[][] = new Array(rows.length);
-  for (let i = 0; i < rows.length; i++) {
-    const r = rows[i]!;
-    out[i] = [e0V - s * Math.log10(r[0]! / r[1]!)];
-  }
-  return out;
-}
+type Json = Record<string, unknown>;
 
-/** A stricter floor: the same loop writing into a Float64Array (no per-case allocation). */
-function handLoopTyped(rows: number[][], e0V: number): Float64Array {
-  const s = (GAS_CONSTANT_J_PER_MOL_K * 298.15 * Math.LN10) / (2 * FARADAY_C_PER_MOL);
-  const out = new Float64Array(rows.length);
-  for (let i = 0; i < rows.length; i++) {
-    const r = rows[i]!;
-    out[i] = e0V - s * Math.log10(r[0]! / r[1]!);
-  }
-  return out;
-}
+const r3 = (s: Stat) => rounded(s, 3);
+const mm = (s: Stat, d = 2) => `min ${s.min.toFixed(d)} / median ${s.median.toFixed(d)}`;
 
-function coldParseUs(text: string, reps: number): number {
+/** Cold parse + table resolution of one text, caches cleared before each, µs (built-in table kept parsed). */
+function coldParseUs(text: string, reps: number, runs: number): Stat | null {
+  const e = engine as unknown as Record<string, unknown>;
+  const clear = e.clearCaches;
+  const compile = e.compiledReaction;
+  if (typeof clear !== 'function' || typeof compile !== 'function') return null;
+  (compile as (t: string, c: null) => unknown)(text, null);
   const per: number[] = [];
-  compiledReaction(text, null); // built-in table parsed once per process
-  for (let k = 0; k < 7; k++) {
+  for (let k = 0; k < runs; k++) {
     const t0 = process.hrtime.bigint();
     for (let i = 0; i < reps; i++) {
-      clearCaches();
-      compiledReaction(text, null);
+      (clear as () => void)();
+      (compile as (t: string, c: null) => unknown)(text, null);
     }
     per.push(Number(process.hrtime.bigint() - t0) / 1e3 / reps);
   }
-  return median(per);
-}
-
-async function recalcRatio(): Promise<{
-  ratio: number | null;
-  echemMs: number | null;
-  plainMs: number | null;
-  note: string;
-}> {
-  const file = path.join(__dirname, 'recalcBench.ts');
-  if (!fs.existsSync(file))
-    return { ratio: null, echemMs: null, plainMs: null, note: 'bench/recalcBench.ts not present' };
-  // eslint-disable-next-line @typescript-eslint/no-require-imports
-  const mod = require(file) as {
-    runRecalcBench?: (rows?: number) => Promise<{ echemMs: number; plainMs: number }>;
-  };
-  if (!mod.runRecalcBench)
-    return { ratio: null, echemMs: null, plainMs: null, note: 'runRecalcBench not exported' };
-  const r = await mod.runRecalcBench(10_000);
-  return { ratio: r.echemMs / r.plainMs, echemMs: r.echemMs, plainMs: r.plainMs, note: '' };
+  return stat(per);
 }
 
 function bundleSize(): { kb: number | null; gzipKb: number | null } {
   const f = path.join(__dirname, '..', 'dist', 'functions.js');
   if (!fs.existsSync(f)) return { kb: null, gzipKb: null };
   const buf = fs.readFileSync(f);
-  return { kb: buf.length / 1024, gzipKb: zlib.gzipSync(buf, { level: 9 }).length / 1024 };
+  return {
+    kb: Number((buf.length / 1024).toFixed(1)),
+    gzipKb: Number((zlib.gzipSync(buf, { level: 9 }).length / 1024).toFixed(1)),
+  };
 }
 
-const round = (x: number | null, d = 3) => (x === null ? null : Number(x.toFixed(d)));
+function rss(f: EndToEndFigures | null): Stat | null {
+  return f?.peakRssMiB ? rounded(f.peakRssMiB, 1) : null;
+}
 
-export async function main(argv: string[]): Promise<void> {
-  const json = argv.includes('--json');
-  const log = (s: string) => {
-    if (!json) console.log(s);
-    else console.error(s);
-  };
+/** Runs the benchmarks and returns the JSON figures (also printed with --json). */
+export async function runBench(opts: BenchOptions = {}): Promise<Json> {
+  const sz = opts.tiny ? TINY : NORMAL;
+  const wants = (k: string) => !opts.only || opts.only.includes(k);
+  const log = opts.log ?? ((s: string) => (opts.json ? console.error(s) : console.log(s)));
+  const out: Json = {};
+  const loadStart = os.loadavg();
   log(
-    `Potentia benchmarks — ${os.cpus()[0]?.model ?? 'unknown CPU'} × ${os.cpus().length}, Node ${process.version}`,
-  );
-  const rows = makeCases();
-  const species = [['Zn2+', 'Cu2+']];
-  const cell = 'Zn | Zn2+ || Cu2+ | Cu';
-  const e0 = 0.337 - -0.7618;
-
-  // correctness guard: the function layer and the hand loop agree
-  const check = potential(cell, species, rows.slice(0, 100), 25, null);
-  const hand = handLoop(rows.slice(0, 100), e0);
-  check.forEach((r, i) => {
-    if (typeof r[0] !== 'number' || Math.abs(r[0] - hand[i]![0]!) > 1e-12)
-      throw new Error(`mismatch at case ${i}`);
-  });
-
-  const sweep = pairedMs(
-    () => potential(cell, species, rows, 25, null),
-    () => handLoop(rows, e0),
-    21,
-  );
-  const typed = pairedMs(
-    () => potential(cell, species, rows, 25, null),
-    () => handLoopTyped(rows, e0),
-    21,
-  );
-  const sweepMs = sweep.fMs;
-  const handMs = sweep.gMs;
-  log(
-    `1. sweep of ${CASES} cases × 2 species: ${sweepMs.toFixed(2)} ms; hand loop ${handMs.toFixed(2)} ms (typed-array floor ${typed.gMs.toFixed(2)} ms)`,
-  );
-  log(
-    `   sweep_ratio ${sweep.ratio.toFixed(2)}× (target ≤ 3×, goal 1.5×); vs typed-array floor ${typed.ratio.toFixed(2)}×`,
+    `Potentia benchmarks — ${os.cpus()[0]?.model ?? 'unknown CPU'} × ${os.cpus().length}, Node ${process.version}, ` +
+      `load average ${loadStart.map((x) => x.toFixed(2)).join(' ')}${opts.tiny ? ' (tiny mode: figures mean nothing)' : ''}`,
   );
 
-  const one = [[0.1, 0.01]];
-  const calls = pairedMs(
-    () => {
-      for (let i = 0; i < CASES; i++) potential(cell, species, one, 25, null);
-    },
-    () => handLoop(rows, e0),
-    11,
-  );
-  const perCallUs = (calls.fMs * 1000) / CASES;
-  const perCaseUs = (calls.gMs * 1000) / CASES;
-  log(
-    `2. ${CASES} single-case calls: ${perCallUs.toFixed(3)} µs per call; hand loop ${perCaseUs.toFixed(3)} µs per case`,
-  );
-  log(`   call_ratio ${calls.ratio.toFixed(2)}× (target ≤ 10×)`);
-
-  const parseCellUs = coldParseUs('Zn(s) | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu(s)', 200);
-  const parseReactionUs = coldParseUs('2 MnO4- + 10 Fe2+ + 16 H+ -> 2 Mn2+ + 10 Fe3+ + 8 H2O', 50);
-  log(
-    `3. cold parse + resolution: cell diagram ${parseCellUs.toFixed(1)} µs, full reaction ${parseReactionUs.toFixed(1)} µs`,
-  );
-
-  const recalc = await recalcRatio();
-  if (recalc.ratio === null) log(`4. recalc: skipped (${recalc.note})`);
-  else
+  if (wants('call')) {
+    const c = benchExcelCalls(sz.calls, sz.callRuns, false);
+    const t = benchExcelCalls(sz.calls, sz.callRuns, true);
     log(
-      `4. recalc of 10,000 rows: ECHEM ${recalc.echemMs!.toFixed(0)} ms vs plain arithmetic ${recalc.plainMs!.toFixed(0)} ms — recalc_ratio ${recalc.ratio.toFixed(2)}× (target ≤ 1.5×)`,
+      `call: one Excel-shaped POTENTIAL of the Daniell cell, distinct activities, built-in table: ${mm(c.potentiaUs, 3)} µs per call; ` +
+        `hand-written custom function ${mm(c.handUs, 3)} µs; call_ratio_excel ${mm(c.ratio)} (target ≤ 3)`,
     );
+    log(
+      `      with the user's table and a distinct temperature each call: ${mm(t.potentiaUs, 3)} µs; hand ${mm(t.handUs, 3)} µs; ratio ${mm(t.ratio)}`,
+    );
+    out.call_ratio_excel = r3(c.ratio);
+    out.call_excel_us = r3(c.potentiaUs);
+    out.call_hand_us = r3(c.handUs);
+    out.call_ratio_excel_table = r3(t.ratio);
+    out.call_excel_table_us = r3(t.potentiaUs);
+  }
+
+  if (wants('sweep')) {
+    const s = benchSweep(sz.sweepCases, sz.sweepRuns);
+    const ns = (x: Stat) => ({
+      min: (x.min * 1e6) / s.cases,
+      median: (x.median * 1e6) / s.cases,
+      runs: x.runs,
+    });
+    log(
+      `sweep: one spilled POTENTIAL over ${s.cases.toLocaleString('en-US')} cases × 2 species: ${mm(ns(s.spillMs), 1)} ns per case; ` +
+        `Float64Array loop ${mm(ns(s.floorMs), 1)} ns; sweep_ratio_floor ${mm(s.ratioFloor)} (target ≤ 2.5); ` +
+        `vs the hand loop writing one-cell rows: sweep_ratio ${mm(s.ratioRows)} (contract ≤ 3)`,
+    );
+    out.sweep_ratio_floor = r3(s.ratioFloor);
+    out.sweep_ratio = r3(s.ratioRows);
+    out.sweep_ns_per_case = rounded(ns(s.spillMs), 1);
+    out.sweep_floor_ns_per_case = rounded(ns(s.floorMs), 1);
+    out.sweep_rows_loop_ns_per_case = rounded(ns(s.rowsLoopMs), 1);
+    if (s.kernelMs && s.kernelRatioFloor) {
+      log(
+        `      the engine kernel alone (no function layer): ${mm(ns(s.kernelMs), 1)} ns per case; ÷ floor ${mm(s.kernelRatioFloor)}`,
+      );
+      out.sweep_kernel_ns_per_case = rounded(ns(s.kernelMs), 1);
+      out.sweep_kernel_ratio_floor = r3(s.kernelRatioFloor);
+    }
+  }
+
+  if (wants('diagram')) {
+    const d = benchInlineDiagram(sz.diagramCalls, sz.diagramRuns);
+    log(
+      `diagram: POTENTIAL("Zn | Zn2+(aq, a1 M) || Cu2+(aq, a2 M) | Cu"), activities changing every call: ${mm(d.us, 1)} µs per call (target ≤ 5); ` +
+        `with the user's table and a temperature ${mm(d.tableUs, 1)} µs`,
+    );
+    out.diagram_inline_us = rounded(d.us, 2);
+    out.diagram_inline_table_us = rounded(d.tableUs, 2);
+  }
+
+  if (wants('first')) {
+    const f = benchFirstCall(sz.spawnRuns);
+    log(
+      `first call after load (${f.source === 'dist' ? 'dist/functions.js' : 'sources through ts-node: includes compiling; run npm run build'}): ` +
+        `${mm(f.totalMs)} ms (load ${mm(f.loadMs)} ms + first POTENTIAL ${mm(f.callMs)} ms) (target ≤ 15)`,
+    );
+    out.first_call_ms = rounded(f.totalMs, 2);
+    out.first_call_load_ms = rounded(f.loadMs, 2);
+    out.first_call_source = f.source;
+  }
+
+  if (wants('cli')) {
+    const e = benchCliEval(sz.spawnRuns);
+    log(`cli: node bin/potentia.js eval of one ECHEM formula, start-up included: ${mm(e, 0)} ms wall`);
+    out.cli_eval_ms = rounded(e, 1);
+  }
+
+  if (wants('parse')) {
+    const reps = opts.tiny ? 5 : 200;
+    const cell = coldParseUs('Zn(s) | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu(s)', reps, opts.tiny ? 2 : 7);
+    const reaction = coldParseUs(
+      '2 MnO4- + 10 Fe2+ + 16 H+ -> 2 Mn2+ + 10 Fe3+ + 8 H2O',
+      Math.ceil(reps / 4),
+      opts.tiny ? 2 : 7,
+    );
+    if (cell && reaction)
+      log(
+        `parse: cold parse + resolution (built-in table kept parsed): cell diagram ${mm(cell, 1)} µs, full reaction ${mm(reaction, 1)} µs`,
+      );
+    out.parse_cell_us = cell ? rounded(cell, 1) : null;
+    out.parse_reaction_us = reaction ? rounded(reaction, 1) : null;
+  }
+
+  const dir = scratchDir();
+  try {
+    if (wants('recalc')) {
+      const r = await benchInProcess(sz.recalcRows, sz.recalcRuns, dir);
+      const ph = (p: typeof r.echem) =>
+        `read ${p.readFile.median.toFixed(0)} + to engine ${p.toEngine.median.toFixed(0)} + engine ${p.engine.median.toFixed(0)} ` +
+        `(parse ${p.engineParse.median.toFixed(0)}, evaluate ${p.engineEval.median.toFixed(0)}) + write cells ${p.writeCells.median.toFixed(0)} ` +
+        `+ write file ${p.writeFile.median.toFixed(0)} = ${p.total.median.toFixed(0)} ms`;
+      log(`recalc in process, ${r.rows.toLocaleString('en-US')} rows (medians): ECHEM ${ph(r.echem)}`);
+      log(`                                      plain ${ph(r.plain)}`);
+      log(
+        `      ECHEM ÷ plain: whole path ${mm(r.ratioTotal)}, evaluation only ${mm(r.ratioEval)} (contract ≤ 1.5); ` +
+          `largest |ECHEM − plain| ${r.maxDifferenceV.toExponential(2)} V${r.phases ? '' : ' (runner phases not exposed: engine includes writing cells)'}`,
+      );
+      const phases = (p: typeof r.echem) => ({
+        read_file_ms: rounded(p.readFile, 1),
+        to_engine_ms: rounded(p.toEngine, 1),
+        engine_ms: rounded(p.engine, 1),
+        engine_parse_ms: rounded(p.engineParse, 1),
+        engine_eval_ms: rounded(p.engineEval, 1),
+        write_cells_ms: rounded(p.writeCells, 1),
+        write_file_ms: rounded(p.writeFile, 1),
+        total_ms: rounded(p.total, 1),
+      });
+      out.recalc_rows = r.rows;
+      out.recalc_ratio = r3(r.ratioTotal);
+      out.recalc_eval_ratio = r3(r.ratioEval);
+      out.recalc_phases_echem = phases(r.echem);
+      out.recalc_phases_plain = phases(r.plain);
+      out.recalc_max_difference_v = r.maxDifferenceV;
+    }
+
+    if (wants('e2e')) {
+      const lo = hasLibreOffice();
+      // Tiers: 10,000 rows (always); with --full 100,000 rows on one sheet and the same
+      // 100,000 cases split over 4 sheets of 25,000 rows (a layout every peer can load).
+      // --tiny --full runs the two big tiers only, at the tiny size.
+      const tiers: { rows: number; runs: number; sheets: number; prefix: string }[] =
+        opts.tiny && opts.full
+          ? []
+          : [{ rows: sz.e2eRows, runs: sz.e2eRuns, sheets: 1, prefix: 'recalc_e2e' }];
+      if (opts.full) {
+        tiers.push({ rows: sz.bigRows, runs: sz.bigRuns, sheets: 1, prefix: 'recalc_100k' });
+        tiers.push({ rows: sz.bigRows, runs: sz.bigRuns, sheets: 4, prefix: 'recalc_100k_split' });
+      }
+      const m = (f: EndToEndFigures) =>
+        `${mm(f.wallS)} s, peak RSS ${f.peakRssMiB ? `${f.peakRssMiB.median.toFixed(0)} MiB` : 'not measured'}`;
+      // min ÷ min and median ÷ median (the peers run one after the other, not interleaved)
+      const over = (a: EndToEndFigures, b: EndToEndFigures) => ({
+        min: Number((a.wallS.min / b.wallS.min).toFixed(3)),
+        median: Number((a.wallS.median / b.wallS.median).toFixed(3)),
+        runs: Math.min(a.runs, b.runs),
+      });
+      /** A peer's run, or the reason it could not run (recorded, not thrown: the others still run). */
+      const attempt = async <T>(key: string, f: () => Promise<T>): Promise<T | null> => {
+        try {
+          return await f();
+        } catch (e) {
+          if (!(e instanceof RunFailure)) throw e;
+          out[key] =
+            e.message
+              .split('\n')
+              .find((l) => /potentia:|Error/.test(l))
+              ?.trim() ?? e.message.slice(0, 300);
+          log(`  ${key}: ${String(out[key])}`);
+          return null;
+        }
+      };
+      for (const { rows, runs, sheets, prefix } of tiers) {
+        const layout = sheets === 1 ? 'one sheet' : `${sheets} sheets`;
+        out[`${prefix}_rows`] = rows;
+        out[`${prefix}_sheets`] = sheets;
+        const echem = await attempt(`${prefix}_error`, () => benchEndToEnd('echem', rows, runs, dir, sheets));
+        const plain = await attempt(`${prefix}_plain_error`, () =>
+          benchEndToEnd('plain', rows, runs, dir, sheets),
+        );
+        const office = lo
+          ? await attempt(`${prefix}_libreoffice_error`, () => benchLibreOffice(rows, runs, dir, sheets))
+          : null;
+        if (echem && plain) compareOutputs('potentia recalc ECHEM vs plain', echem.values, plain.values);
+        if (echem && office)
+          compareOutputs('potentia recalc ECHEM vs LibreOffice plain', echem.values, office.values);
+        log(
+          `recalc end to end, ${rows.toLocaleString('en-US')} rows on ${layout}, ${runs} run${runs === 1 ? '' : 's'}: ` +
+            `potentia ECHEM ${echem ? m(echem.figures) : 'failed'}; potentia plain ${plain ? m(plain.figures) : 'failed'}; ` +
+            `${lo ? `LibreOffice plain ${office ? m(office.figures) : 'failed'}` : 'LibreOffice not installed'}`,
+        );
+        out[`${prefix}_s`] = echem ? rounded(echem.figures.wallS, 2) : null;
+        out[`${prefix}_plain_s`] = plain ? rounded(plain.figures.wallS, 2) : null;
+        out[`${prefix}_peak_rss_mib`] = echem ? rss(echem.figures) : null;
+        out[`${prefix}_plain_peak_rss_mib`] = plain ? rss(plain.figures) : null;
+        if (lo) {
+          out[`${prefix}_libreoffice_s`] = office ? rounded(office.figures.wallS, 2) : null;
+          out[`${prefix}_libreoffice_peak_rss_mib`] = office ? rss(office.figures) : null;
+          out[`${prefix}_vs_libreoffice`] = echem && office ? over(echem.figures, office.figures) : null;
+        }
+      }
+      if (opts.full && lo) {
+        // the headline: one sheet of 100,000 rows where the runner loads it, else the split layout
+        const one = out.recalc_100k_vs_libreoffice;
+        out.recalc_vs_libreoffice = one ?? out.recalc_100k_split_vs_libreoffice ?? null;
+        const n = sz.bigRows.toLocaleString('en-US');
+        out.recalc_vs_libreoffice_layout = one ? `one sheet of ${n} rows` : `${n} rows over 4 sheets`;
+      }
+    }
+  } finally {
+    fs.rmSync(dir, { recursive: true, force: true });
+  }
 
   const size = bundleSize();
-  if (size.kb === null) log('5. bundle: dist/functions.js missing (run npm run build first)');
-  else
+  if (wants('bundle')) {
     log(
-      `5. bundle dist/functions.js: ${size.kb.toFixed(1)} KB minified, ${size.gzipKb!.toFixed(1)} KB gzipped (target ≤ 150 KB)`,
+      size.kb === null
+        ? 'bundle: dist/functions.js missing (run npm run build first)'
+        : `bundle: dist/functions.js ${size.kb} KB minified, ${size.gzipKb} KB gzipped (target ≤ 150 KB)`,
     );
+    out.bundle_kb = size.kb;
+    out.bundle_gzip_kb = size.gzipKb;
+  }
 
-  const figures = {
-    sweep_ratio: round(sweep.ratio),
-    call_ratio: round(calls.ratio),
-    parse_cell_us: round(parseCellUs, 1),
-    parse_reaction_us: round(parseReactionUs, 1),
-    recalc_ratio: round(recalc.ratio),
-    bundle_kb: round(size.kb, 1),
-    bundle_gzip_kb: round(size.gzipKb, 1),
-    sweep_ratio_typed_floor: round(typed.ratio),
+  const counts = checkedCounts();
+  out.outputs_checked = counts;
+  out.checks_passed = true;
+  out.mode = opts.tiny ? 'tiny' : opts.full ? 'full' : 'normal';
+  out.bench_peak_rss_mib = Number((process.resourceUsage().maxRSS / 1024).toFixed(1));
+  out.machine = {
+    cpus: os.cpus().length,
+    node: process.version,
+    load_average_start: loadStart.map((x) => Number(x.toFixed(2))),
+    load_average_end: os.loadavg().map((x) => Number(x.toFixed(2))),
   };
-  if (json) console.log(JSON.stringify(figures));
+  const total = Object.values(counts).reduce((a, b) => a + b, 0);
+  log(
+    `checks: ${total.toLocaleString('en-US')} outputs checked against the hand-written computation, all passed`,
+  );
+  return out;
+}
+
+/** Command-line entry (bench/run.js). */
+export async function main(argv: string[]): Promise<void> {
+  const only = argv.find((a) => a.startsWith('--only='));
+  const figures = await runBench({
+    json: argv.includes('--json'),
+    full: argv.includes('--full'),
+    tiny: argv.includes('--tiny'),
+    ...(only ? { only: only.slice('--only='.length).split(',') } : {}),
+  });
+  if (argv.includes('--json')) console.log(JSON.stringify(figures));
 }
