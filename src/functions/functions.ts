@@ -202,28 +202,30 @@ export function CONCCELL(reaction: any[][], value_left: any[][], value_right: an
  * @helpurl https://localhost:3000/taskpane.html#ref-actcoef
  * @param species The ion, e.g. "Cu2+" or "SO4 2-"; one cell or a column of cases
  * @param ionic_strength Ionic strength in mol/kg; one cell or a column of cases; ≥ 0 mol/kg
- * @param [model] Activity model: "limiting" (Debye–Hückel limiting law), "extended" (with ion size) or "davies"; one of "limiting", "extended", "davies" (default: "davies")
+ * @param [model] Activity model: "limiting" (Debye–Hückel limiting law, I ≤ 0.005 mol/kg), "extended" (with ion size, I ≤ 0.1 mol/kg), "davies" (I ≤ 0.5 mol/kg) or "pitzer" (ACTIVITY only: the whole composition, concentrated and mixed electrolytes); one of "limiting", "extended", "davies", "pitzer" (default: "davies")
  * @param [ion_size] Ion-size parameter å in Å, for the extended model; > 0 Å (default: Kielland's value for the ion)
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @param [extrapolate] TRUE to accept a result outside the model’s range of validity; by default such a case is #VALUE! naming the range and a better model (default: false)
  * @returns γ (dimensionless), one row per case
  */
-export function ACTCOEF(species: any[][], ionic_strength: any[][], model?: any[][], ion_size?: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('ACTCOEF'), species, ionic_strength, model, ion_size, temp_C);
+export function ACTCOEF(species: any[][], ionic_strength: any[][], model?: any[][], ion_size?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
+  return toExcel(implementation('ACTCOEF'), species, ionic_strength, model, ion_size, temp_C, extrapolate);
 }
 
 /**
- * Activities of the species of a composition (same shape as values), with the ionic strength of each row unless one is given. Example: =ECHEM.ACTIVITY({"Na+","Cl-"}, {0.01,0.01}, , "limiting") gives {0.00889508, 0.00889508}.
+ * Activities of the species of a composition (same shape as values), with the ionic strength of each row unless one is given. Example: =ECHEM.ACTIVITY({"Na+","Cl-"}, {0.004,0.004}, , "limiting") gives {0.00371449, 0.00371449}.
  * @customfunction ACTIVITY
  * @helpurl https://localhost:3000/taskpane.html#ref-activity
  * @param species Names of the species whose values follow, one per column of values, e.g. "Cu2+", "O2", "pH" or "left:Ag+"
  * @param values Molalities in mol/kg, one per species column (a "pH" column passes through); one row per case
  * @param [ionic_strength] Ionic strength in mol/kg; one cell or a column of cases; ≥ 0 mol/kg (default: from the row)
- * @param [model] Activity model: "limiting" (Debye–Hückel limiting law), "extended" (with ion size) or "davies"; one of "limiting", "extended", "davies" (default: "davies")
+ * @param [model] Activity model: "limiting" (Debye–Hückel limiting law, I ≤ 0.005 mol/kg), "extended" (with ion size, I ≤ 0.1 mol/kg), "davies" (I ≤ 0.5 mol/kg) or "pitzer" (ACTIVITY only: the whole composition, concentrated and mixed electrolytes); one of "limiting", "extended", "davies", "pitzer" (default: "davies")
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @param [extrapolate] TRUE to accept a result outside the model’s range of validity; by default such a case is #VALUE! naming the range and a better model (default: false)
  * @returns Activities, one row per case and one column per species
  */
-export function ACTIVITY(species: any[][], values: any[][], ionic_strength?: any[][], model?: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('ACTIVITY'), species, values, ionic_strength, model, temp_C);
+export function ACTIVITY(species: any[][], values: any[][], ionic_strength?: any[][], model?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
+  return toExcel(implementation('ACTIVITY'), species, values, ionic_strength, model, temp_C, extrapolate);
 }
 
 /**
@@ -327,6 +329,51 @@ export function MASSLOSS(metal_or_alloy: any[][], current_density_uA_cm2: any[][
  */
 export function ANODELIFE(mass_kg: any[][], capacity_Ah_kg: any[][], current_A: any[][], utilisation?: any[][]): any[][] {
   return toExcel(implementation('ANODELIFE'), mass_kg, capacity_Ah_kg, current_A, utilisation);
+}
+
+/**
+ * The thermodynamically stable species of an element at a potential and pH (E–pH / Pourbaix diagram). Example: =ECHEM.PREDOMINANT("Fe", -1, 7) gives Fe(s).
+ * @customfunction PREDOMINANT
+ * @helpurl https://localhost:3000/taskpane.html#ref-predominant
+ * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
+ * @param E_V Electrode potential in V vs SHE; one cell or a column of cases
+ * @param pH pH of the solution; one cell or a column of cases; −2–16
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default 0.000001)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @returns Species text, e.g. "Fe2O3(s)", one row per case
+ */
+export function PREDOMINANT(element: any[][], E_V: any[][], pH: any[][], activity?: any[][], temp_C?: any[][]): any[][] {
+  return toExcel(implementation('PREDOMINANT'), element, E_V, pH, activity, temp_C);
+}
+
+/**
+ * Immunity, corrosion or passivation: the class of the stable species of an element at a potential and pH. Example: =ECHEM.EPHCLASS("Zn", -0.5, 4) gives corrosion.
+ * @customfunction EPHCLASS
+ * @helpurl https://localhost:3000/taskpane.html#ref-ephclass
+ * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
+ * @param E_V Electrode potential in V vs SHE; one cell or a column of cases
+ * @param pH pH of the solution; one cell or a column of cases; −2–16
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (1e-6 as usual in corrosion work); one cell or a column of cases; > 0, ≤ 1 (default 0.000001)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @returns "immunity" (the metal), "corrosion" (a dissolved species) or "passivation" (a solid oxide or hydroxide), one row per case
+ */
+export function EPHCLASS(element: any[][], E_V: any[][], pH: any[][], activity?: any[][], temp_C?: any[][]): any[][] {
+  return toExcel(implementation('EPHCLASS'), element, E_V, pH, activity, temp_C);
+}
+
+/**
+ * An element's E–pH diagram as line segments (species A, species B, pH1, E1, pH2, E2) plus the two water lines, for an XY chart. Example: =ECHEM.EPHLINES("Zn") gives {species A, species B, pH1, E1 (V vs SHE), pH2, E2 (V vs SHE); Zn(s), ZnO2 2-, 13.9804, -1.36492, 14, -1.36725; Zn(s), HZnO2-, 10.0177, -1.01328, 13.9804, -1.36492; Zn(s), ZnO(s), 8.76681, -0.939278, 10.0177, -1.01328; … (10 rows)}.
+ * @customfunction EPHLINES
+ * @helpurl https://localhost:3000/taskpane.html#ref-ephlines
+ * @param element The element: Fe, Cu, Zn, Al, Ni, Cr, Pb, Sn, Mg, Ag
+ * @param [activity] Activity of the dissolved species, 0 < a ≤ 1 (default 1e-6); > 0, ≤ 1 (default 0.000001)
+ * @param [temp_C] Temperature in °C, 0–100; 0–100 °C (default 25)
+ * @param [pH_min] Lowest pH of the lines; −2–16 (default 0)
+ * @param [pH_max] Highest pH of the lines; −2–16 (default 14)
+ * @returns Rows under a header: species A | species B | pH1 | E1 (V vs SHE) | pH2 | E2 (V vs SHE)
+ */
+export function EPHLINES(element: any[][], activity?: any[][], temp_C?: any[][], pH_min?: any[][], pH_max?: any[][]): any[][] {
+  return toExcel(implementation('EPHLINES'), element, activity, temp_C, pH_min, pH_max);
 }
 
 /**
@@ -503,6 +550,49 @@ export function ISERESPONSE(E0_V: any[][], slope_V: any[][], primary: any[][], a
   return toExcel(implementation('ISERESPONSE'), E0_V, slope_V, primary, activities, selectivities);
 }
 
+/**
+ * Mean activity coefficient γ± of a salt at a molality, by the Pitzer model (default) or a Debye–Hückel-family model. Example: =ECHEM.MEANACTCOEF("NaCl", 1) gives 0.655537.
+ * @customfunction MEANACTCOEF
+ * @helpurl https://localhost:3000/taskpane.html#ref-meanactcoef
+ * @param salt The salt, e.g. "NaCl", "CuSO4", "K2SO4"; one cell or a column of cases
+ * @param molality Molality of the salt in mol/kg; one cell or a column of cases; ≥ 0 mol/kg
+ * @param [model] Activity model: "pitzer" (concentrated salts, to each salt’s published limit), "davies" (I ≤ 0.5 mol/kg), "extended" (I ≤ 0.1 mol/kg) or "limiting" (I ≤ 0.005 mol/kg); one of "pitzer", "davies", "extended", "limiting" (default: "pitzer")
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @param [extrapolate] TRUE to accept a result outside the model’s range of validity (molality, ionic strength or temperature); by default such a case is #VALUE! naming the range (default: false)
+ * @returns γ± (dimensionless, molal scale), one row per case
+ */
+export function MEANACTCOEF(salt: any[][], molality: any[][], model?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
+  return toExcel(implementation('MEANACTCOEF'), salt, molality, model, temp_C, extrapolate);
+}
+
+/**
+ * Activity of water a(H2O) in a salt solution or a mixture, from the Pitzer osmotic coefficient: ln a_w = −φ·M_w·Σm. Example: =ECHEM.WATERACTIVITY("NaCl", 1) gives 0.966842.
+ * @customfunction WATERACTIVITY
+ * @helpurl https://localhost:3000/taskpane.html#ref-wateractivity
+ * @param salt_or_species A salt such as "NaCl" (then values are its molality), or the ions of a mixture such as "Na+", "Mg2+", "Cl-"
+ * @param molality_or_values Molality of the salt in mol/kg (one cell or a column of cases), or one molality per ion column, one row per case
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @param [extrapolate] TRUE to accept a result outside the model’s range of validity (molality, ionic strength or temperature); by default such a case is #VALUE! naming the range (default: false)
+ * @returns a(H2O) (dimensionless, pure water 1), one row per case
+ */
+export function WATERACTIVITY(salt_or_species: any[][], molality_or_values: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
+  return toExcel(implementation('WATERACTIVITY'), salt_or_species, molality_or_values, temp_C, extrapolate);
+}
+
+/**
+ * Molality (mol/kg of water) of a salt solution from its molarity (mol/L of solution): m = c / (ρ − c·M/1000). Example: =ECHEM.MOLALITY("NaCl", 1.832, , 20) gives 1.90114.
+ * @customfunction MOLALITY
+ * @helpurl https://localhost:3000/taskpane.html#ref-molality
+ * @param salt The salt, e.g. "NaCl"; one cell or a column of cases
+ * @param molarity Concentration of the salt in mol/L of solution; one cell or a column of cases; ≥ 0 mol/L
+ * @param [density_g_cm3] Density of the solution in g/cm³; one cell or a column of cases; 0.5–3 g/cm³ (default: the held table (NaCl, KCl at 20 °C))
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @returns m in mol/kg, one row per case
+ */
+export function MOLALITY(salt: any[][], molarity: any[][], density_g_cm3?: any[][], temp_C?: any[][]): any[][] {
+  return toExcel(implementation('MOLALITY'), salt, molarity, density_g_cm3, temp_C);
+}
+
 // Excel finds each function by its id. Guarded so that the page also loads outside Excel.
 if (typeof CustomFunctions !== 'undefined') {
   CustomFunctions.associate('POTENTIAL', POTENTIAL);
@@ -528,6 +618,9 @@ if (typeof CustomFunctions !== 'undefined') {
   CustomFunctions.associate('CORRATE', CORRATE);
   CustomFunctions.associate('MASSLOSS', MASSLOSS);
   CustomFunctions.associate('ANODELIFE', ANODELIFE);
+  CustomFunctions.associate('PREDOMINANT', PREDOMINANT);
+  CustomFunctions.associate('EPHCLASS', EPHCLASS);
+  CustomFunctions.associate('EPHLINES', EPHLINES);
   CustomFunctions.associate('DEPOSIT', DEPOSIT);
   CustomFunctions.associate('PLATETIME', PLATETIME);
   CustomFunctions.associate('THICKNESS', THICKNESS);
@@ -540,4 +633,7 @@ if (typeof CustomFunctions !== 'undefined') {
   CustomFunctions.associate('SOLVEFOR', SOLVEFOR);
   CustomFunctions.associate('JUNCTION', JUNCTION);
   CustomFunctions.associate('ISERESPONSE', ISERESPONSE);
+  CustomFunctions.associate('MEANACTCOEF', MEANACTCOEF);
+  CustomFunctions.associate('WATERACTIVITY', WATERACTIVITY);
+  CustomFunctions.associate('MOLALITY', MOLALITY);
 }
