@@ -7,6 +7,7 @@ import { describeOrigin } from '../table/potentialTable';
 import { formatReaction, withActivity } from '../notation/reaction';
 import { type Species, formatSpecies, phaseOf, elementsOf } from '../notation/species';
 import { type Binding } from './nernstForm';
+import { pKw } from './water';
 
 function fmtV(x: number): string {
   return `${Number(x.toFixed(6))} V`;
@@ -110,7 +111,12 @@ export function describeDiagram(
         const c = binding.column[i]!;
         if (c >= 0) {
           const v = row[c];
-          if (typeof v === 'number') return binding.isPH[i] === 1 ? Math.pow(10, -v) : v;
+          if (typeof v === 'number')
+            return binding.isPH[i] === 1
+              ? Math.pow(10, -v)
+              : binding.isPH[i] === 2
+                ? Math.pow(10, v - pKw(25))
+                : v;
         }
         if (t.inline !== undefined) return t.inline;
       }
