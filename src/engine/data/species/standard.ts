@@ -25,10 +25,11 @@
  * Values are as the source prints them (kJ/mol to 0.01–0.1, J/(mol·K) to 0.01–1).
  */
 import type { SpeciesThermoRecord } from './types';
+import { FARADAY_C_PER_MOL } from '../../constants';
 
 const NBS = 'NBS tables (Wagman et al., J. Phys. Chem. Ref. Data 11, Suppl. 2, 1982), from memory';
 const OSX_G = 'OpenStax Chemistry 2e, Appendix G';
-const FARADAY_KJ_PER_V = 96.48533212; // F in kJ/(mol·V), SI 2019 exact
+const FARADAY_KJ_PER_V = FARADAY_C_PER_MOL / 1000; // F in kJ/(mol·V), SI 2019 exact
 
 /** ΔfG° (kJ/mol) of one species from a half-reaction's E°: ΔrG° = −nFE°. */
 function fromPotential(
