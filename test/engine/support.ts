@@ -2,7 +2,7 @@
  * Shared test support: the SI 2019 exact constants written out independently of the
  * engine (so expectations do not come from the code under test), and small helpers.
  */
-import { EngineError } from '../../src/engine';
+import { EngineError, BUILTIN_POTENTIALS } from '../../src/engine';
 
 /** Avogadro constant, mol⁻¹ (SI 2019, exact). */
 export const NA = 6.02214076e23;
@@ -31,3 +31,17 @@ export function expectNear(actual: number, expected: number, tol: number): void 
   expect(Number.isFinite(actual)).toBe(true);
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tol);
 }
+
+/**
+ * The E° (V) the built-in table shows for a half-reaction, as its row prints it (from the
+ * species data, rounded to 0.1 mV). Tests of resolution and of the Nernst equation compare
+ * with it, so that they test the engine's arithmetic on the table, not the data.
+ */
+export function tabulatedE0V(halfReaction: string): number {
+  const row = BUILTIN_POTENTIALS.find((r) => r.halfReaction === halfReaction);
+  if (!row) throw new Error(`no built-in row ${halfReaction}`);
+  return row.e0V;
+}
+
+/** Half the last printed digit of a built-in row's E° (V): the rounding of {@link tabulatedE0V}. */
+export const TABLE_ROUNDING_V = 0.5e-4 + 1e-12;

@@ -208,7 +208,7 @@ function derivedCandidates(rows: readonly TableRow[], accept: (m: StoichMap) => 
         const factor = toNumber(b) < 0 ? -toNumber(b) : toNumber(b);
         const derivation =
           `derived by Gibbs-energy additivity: (${r1.text}) ${verb} ${factor === 1 ? '' : `${fmtFactor(b)} × `}(${r2.text}); ` +
-          `n·E° adds: E° = (${r1.n}·${r1.e0V} ${sign(b) > 0 ? '+' : '−'} ${fmtNum(factor * r2.n)}·${r2.e0V}) / ${fmtNum(n)}`;
+          `n·E° adds: E° = (${r1.n}·${fmtE0(r1.e0V)} ${sign(b) > 0 ? '+' : '−'} ${fmtNum(factor * r2.n)}·${fmtE0(r2.e0V)}) / ${fmtNum(n)}`;
         out.push({ map: m, n, shares, derivation, perElectron: scaleMap(m, div(ONE, e)) });
       }
     }
@@ -225,6 +225,9 @@ function derivedCandidates(rows: readonly TableRow[], accept: (m: StoichMap) => 
 function fmtFactor(b: Rational): string {
   const a = sign(b) < 0 ? neg(b) : b;
   return a.den === 1n ? a.num.toString() : `${a.num.toString()}/${a.den.toString()}`;
+}
+function fmtE0(x: number): string {
+  return String(Number(x.toFixed(5)));
 }
 function fmtNum(x: number): string {
   return Number.isInteger(x) ? String(x) : String(Number(x.toPrecision(12)));
