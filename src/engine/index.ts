@@ -105,3 +105,32 @@ export {
 // activity and reference electrodes
 export * from './activity';
 export * from './references';
+
+// species data layer and reaction thermodynamics (issue 12)
+export {
+  type SpeciesThermoRecord,
+  type RegisteredSpecies,
+  type DuplicateSpecies,
+  STANDARD_SPECIES,
+  speciesRecord,
+  findSpeciesRecord,
+  listSpecies,
+  duplicateSpecies,
+  electronThermo,
+} from './data/species/index';
+export {
+  type ReactionThermo,
+  type ThermoEntry,
+  SPECIES_DATA_RANGE_C,
+  reactionThermo,
+  isComplete,
+  checkSpeciesTemperature,
+  cpFactorK,
+  gibbsAtJ,
+  entropyAtJK,
+  enthalpyAtJ,
+} from './thermo/reactionThermo';
+export { pKw } from './thermo/water';
+export { standardPotentialAt } from './thermo/sweep';
+export { type RowTemperature, rowE0V } from './table/potentialTable';
+export { halfCpModel } from './table/resolve';

@@ -2,7 +2,7 @@
  * Shared test support: the SI 2019 exact constants written out independently of the
  * engine (so expectations do not come from the code under test), and small helpers.
  */
-import { EngineError, BUILTIN_POTENTIALS } from '../../src/engine';
+import { EngineError, BUILTIN_POTENTIALS, builtinTable } from '../../src/engine';
 
 /** Avogadro constant, mol⁻¹ (SI 2019, exact). */
 export const NA = 6.02214076e23;
@@ -45,3 +45,13 @@ export function tabulatedE0V(halfReaction: string): number {
 
 /** Half the last printed digit of a built-in row's E° (V): the rounding of {@link tabulatedE0V}. */
 export const TABLE_ROUNDING_V = 0.5e-4 + 1e-12;
+
+/**
+ * The exact E° (V) at 25 °C the engine holds for a built-in row (from the species data,
+ * unrounded): the data under test elsewhere, used here as the input of Nernst arithmetic.
+ */
+export function rowE0V(halfReaction: string): number {
+  const row = builtinTable().find((r) => r.text === halfReaction);
+  if (!row) throw new Error(`no built-in row ${halfReaction}`);
+  return row.e0V;
+}
