@@ -276,6 +276,7 @@ const TABULATED: readonly SpeciesThermoRecord[] = [
 const OSX_L = 'OpenStax Chemistry 2e, Appendix L';
 const CRC92 = 'CRC Handbook of Chemistry and Physics, 92nd ed. (from memory)';
 const BB = 'Bates & Bower, J. Res. NBS 53, 283 (1954)';
+const CRC92_SEEN = 'CRC Handbook of Chemistry and Physics, 92nd ed., Electrochemical Series';
 
 /**
  * Species whose ΔfG° is set from a measured standard potential that is better than (or
@@ -316,6 +317,7 @@ const MEASURED: readonly (readonly [string, readonly (readonly [string, number])
   ['PbSO4(s)', [['PbSO4(s)', -1], ['Pb(s)', 1], ['SO4^2-(aq)', 1]], 2, -0.3505, OSX_L],
   ['PbO2(s)', [['PbO2(s)', -1], ['SO4^2-(aq)', -1], ['H+(aq)', -4], ['PbSO4(s)', 1], ['H2O(l)', 2]], 2, 1.69, OSX_L],
   ['AgCl(s)', [['AgCl(s)', -1], ['Ag(s)', 1], ['Cl-(aq)', 1]], 1, 0.22234, BB],
+  ['AgBr(s)', [['AgBr(s)', -1], ['Ag(s)', 1], ['Br-(aq)', 1]], 1, 0.07133, CRC92_SEEN],
 ];
 
 function applyMeasured(records: readonly SpeciesThermoRecord[]): SpeciesThermoRecord[] {
