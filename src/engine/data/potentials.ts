@@ -200,7 +200,7 @@ export const BUILTIN_POTENTIALS: readonly BuiltinPotentialRow[] = [
   // Silver
   { halfReaction: 'Ag2S(s) + 2 e- -> 2 Ag + S2-', e0V: -0.6554, dE0dTmVperK: -1.058, published: { e0V: -0.691, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.691 V` },
   { halfReaction: 'AgI(s) + e- -> Ag + I-', e0V: -0.1515, dE0dTmVperK: -0.28, published: { e0V: -0.15224, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.15224 V` },
-  { halfReaction: 'AgBr(s) + e- -> Ag + Br-', e0V: 0.0614, dE0dTmVperK: -0.51, published: { e0V: 0.07133, source: CRC92 }, source: `${LAYER}; ΔfG° of Br-(aq) from a published E°); ${CRC92} prints 0.07133 V` },
+  { halfReaction: 'AgBr(s) + e- -> Ag + Br-', e0V: 0.0713, dE0dTmVperK: -0.51, published: { e0V: 0.07133, source: CRC92 }, source: `${LAYER}; ΔfG° of AgBr(s) and Br-(aq) from published values); ${CRC92} prints 0.07133 V` },
   { halfReaction: 'AgCl(s) + e- -> Ag + Cl-', e0V: 0.2223, dE0dTmVperK: -0.648, published: { e0V: 0.22233, source: OSX }, source: `${LAYER}; ΔfG° of AgCl(s) from a published E°); ${OSX} prints 0.22233 V` },
   { halfReaction: 'Ag2O(s) + H2O + 2 e- -> 2 Ag + 2 OH-', e0V: 0.3428, dE0dTmVperK: -1.339, published: { e0V: 0.342, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.342 V` },
   { halfReaction: '[Ag(NH3)2]+ + e- -> Ag + 2 NH3(aq)', e0V: 0.3719, dE0dTmVperK: -0.47, published: { e0V: 0.373, source: OSX }, source: `${LAYER}); ${OSX} prints 0.373 V` },
