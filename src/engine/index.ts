@@ -134,3 +134,15 @@ export { pKw } from './thermo/water';
 export { standardPotentialAt } from './thermo/sweep';
 export { type RowTemperature, rowE0V } from './table/potentialTable';
 export { halfCpModel } from './table/resolve';
+export {
+  type ReactionEnergy,
+  type FormationQuantity,
+  reactionEnergy,
+  reactionGibbsKJ,
+  hasInlineActivities,
+  parseFormationQuantity,
+  formationValue,
+  reactionEnthalpyKJ,
+  reactionEntropyJK,
+  thermoneutralV,
+} from './thermo/reactionEnergy';
