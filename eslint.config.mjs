@@ -14,6 +14,44 @@ export default tseslint.config(
     },
   },
   {
+    // functions/, taskpane/ and cli/ reach the engine only through its index (docs/design.md, "Layers")
+    files: ['src/functions/**/*.ts', 'src/taskpane/**/*.ts', 'src/cli/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['**/engine/*', '!**/engine/index'],
+              message: 'Import the engine only through src/engine/index.ts.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // the engine is pure: it imports nothing outside itself but decimal.js (docs/design.md, "Layers")
+    files: ['src/engine/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['**/functions/**', '**/taskpane/**', '**/cli/**'],
+              message: 'The engine imports nothing outside src/engine.',
+            },
+            {
+              regex: '^(?!\\.|decimal\\.js$)',
+              message: 'The engine is pure: no packages besides decimal.js, no Node or Office modules.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['**/*.js', '**/*.mjs', '**/*.cjs'],
     languageOptions: {
       globals: { require: 'readonly', module: 'writable', __dirname: 'readonly', process: 'readonly', console: 'readonly' },

@@ -168,7 +168,7 @@ function cathodicProtection(): ExcelJS.Workbook {
     input(ws.getCell(`${c.temp}${r}`), soil);
     formula(
       ws.getCell(`${c.vsCse}${r}`),
-      `ECHEM.VSREF(${c.reading}${r}/1000,${c.electrode}${r},$${t.scaleCell[0]}$${t.scaleCell.slice(1)},${c.temp}${r})`,
+      `ECHEM.VSREF(${c.reading}${r}/1000,${c.electrode}${r},$${t.scaleCell[0]}$${t.scaleCell.slice(1)},,${c.temp}${r})`,
     );
     ws.getCell(`${c.vsCse}${r}`).numFmt = VOLTS;
     formula(ws.getCell(`${c.margin}${r}`), `($B$3-${c.vsCse}${r})*1000`);
@@ -227,7 +227,7 @@ function cathodicProtection(): ExcelJS.Workbook {
     'Cathodic-protection check sheet',
     'Scenario: the Harrowgate Water Board (a fictional utility) surveys the Fellside trunk main, a buried, coated steel main protected by zinc anodes. All names and readings are invented.',
     'How to use: enter each test station\'s reading in mV, the reference electrode it was taken with (any name ECHEM.VSREF knows, e.g. "Ag/AgCl sat. KCl", "CSE", "SCE") and the soil temperature. Yellow cells are inputs.',
-    "Column F converts each reading to the saturated Cu/CuSO4 scale with ECHEM.VSREF(E, from, to, temp_C), including the reference electrodes' temperature coefficients where known.",
+    "Column F converts each reading to the saturated Cu/CuSO4 scale with ECHEM.VSREF(E, from, to, , temp_C) (the empty place is pH, needed for RHE only), including the reference electrodes' temperature coefficients where known.",
     'Column H compares it with the criterion in B3 (-0.850 V vs CSE): PASS when at least as negative, otherwise CHECK. The 100 mV polarization criterion needs instant-off and depolarized readings, which this sheet does not hold.',
     'Rows 20-27: the EMF of a zinc anode against the steel, from the Potentials sheet, at the mean soil temperature, with ECHEM.POTENTIAL and the source of E° from ECHEM.SOURCE.',
     'Recalculate without a spreadsheet program: potentia recalc cathodic-protection-check.xlsx -o survey.xlsx',

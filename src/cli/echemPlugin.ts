@@ -7,14 +7,19 @@
  * (ranges to rows of cells, empty cells to null, catalogue errors to spreadsheet errors),
  * so results agree with the add-in, which calls the same catalogue, to the last digit.
  *
+ * Errors in input cells: an error cell (in a range or as a single argument) reaches the
+ * catalogue as its code text ("#N/A"), exactly as the Excel wrapper passes it, so both hosts
+ * give the same code and message (docs/design.md, "Errors").
+ *
  * Spills: HyperFormula reserves a formula's spill area when it parses the formula, before
  * any value is known. The size is predicted here:
  * - when every argument is a literal (numbers, text, inline arrays), the function is run
  *   once on those literals and its result gives the exact size;
- * - otherwise from the shapes of the arguments: one row per case, where the number of
- *   cases is the largest height among the arguments other than `species` and `table`
- *   (ACTIVITY keeps the width of `values`; POTENTIALS reserves the whole built-in table;
- *   CHECKTABLE one row per table row).
+ * - otherwise from the function spec's result shape (src/functions/spec/types.ts): for
+ *   `perCase`, one row per case, where the number of cases is the largest height among the
+ *   per-case arguments and the rows of `values` (the width from the spec, or the number of
+ *   species headers); `single` one cell; `list` as many rows as its source argument; `fixed`
+ *   the size of the function called with no arguments (a listing).
  * A result that would not fit the reserved area becomes a #VALUE! error that says so,
  * never a crash; a smaller one leaves the rest of the area empty.
  */
@@ -35,7 +40,7 @@ import type {
   InterpreterValue,
   InternalScalarValue,
 } from 'hyperformula/typings/interpreter/InterpreterValue';
-import { CATALOGUE, isCellError } from '../functions/catalogue';
+import { CATALOGUE, isCellError, isPerCase, kindOf } from '../functions/catalogue';
 import type { Arg, ErrorCode, FunctionSpec, Grid, Result, ResultCell, Scalar } from '../functions/catalogue';
 
 /** The namespace of our functions in formulas. */
@@ -52,9 +57,6 @@ const SPECS = new Map<string, FunctionSpec>(CATALOGUE.map((s) => [formulaName(s)
 export function echemFunctionNames(): string[] {
   return CATALOGUE.map(formulaName);
 }
-
-/** Parameters that never count cases: a header row of species names and the potentials table. */
-const NON_CASE_PARAMS = new Set(['species', 'table']);
 
 const HF_ERROR_OF: Record<ErrorCode, ErrorType> = {
   '#VALUE!': ErrorType.VALUE,
@@ -152,10 +154,22 @@ function literalArgs(asts: readonly Ast[]): Arg[] | undefined {
 // ---------------------------------------------------------------------------------------
 // Values from HyperFormula to the catalogue and back
 
-/** A scalar as the catalogue expects it, or the spreadsheet error it holds. */
-function toScalar(v: InternalScalarValue): Scalar | HfCellError {
+/** The code text of a HyperFormula error, as a spreadsheet shows it (and Excel passes it). */
+const ERROR_TEXT: Partial<Record<ErrorType, string>> = {
+  [ErrorType.NA]: '#N/A',
+  [ErrorType.VALUE]: '#VALUE!',
+  [ErrorType.NUM]: '#NUM!',
+  [ErrorType.DIV_BY_ZERO]: '#DIV/0!',
+  [ErrorType.REF]: '#REF!',
+  [ErrorType.NAME]: '#NAME?',
+  [ErrorType.CYCLE]: '#CYCLE!',
+  [ErrorType.SPILL]: '#SPILL!',
+};
+
+/** A scalar as the catalogue expects it; an error cell becomes its code text. */
+function toScalar(v: InternalScalarValue): Scalar {
   if (v === EmptyValue) return null;
-  if (v instanceof HfCellError) return v;
+  if (v instanceof HfCellError) return ERROR_TEXT[v.type] ?? '#ERROR!';
   if (typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean') return v;
   // Rich numbers (dates, percentages, currency) carry the plain number in `val`.
   const val = (v as { val?: unknown }).val;
@@ -164,41 +178,22 @@ function toScalar(v: InternalScalarValue): Scalar | HfCellError {
 
 interface ConvertedArg {
   value: Arg;
-  /** Errors found inside a range, by row of the range. */
-  rowErrors?: Map<number, HfCellError>;
-  height: number;
 }
 
-function convertArg(v: unknown, paramName: string | undefined): ConvertedArg | HfCellError {
-  if (v === undefined) return { value: undefined, height: 1 };
+function convertArg(v: unknown): ConvertedArg {
+  if (v === undefined) return { value: undefined };
   if (v instanceof SimpleRangeValue) {
     const data = v.data;
     const grid: Grid = new Array<Scalar[]>(data.length);
-    let rowErrors: Map<number, HfCellError> | undefined;
     for (let r = 0; r < data.length; r++) {
       const src = data[r] ?? [];
       const row = new Array<Scalar>(src.length);
-      for (let c = 0; c < src.length; c++) {
-        const s = toScalar(src[c] as InternalScalarValue);
-        if (s instanceof HfCellError) {
-          // In the potentials table an error cell reads as its code, so that the row is
-          // reported as broken while the other rows still serve lookups.
-          row[c] = paramName === 'table' ? `#${s.type}` : null;
-          if (paramName !== 'table') {
-            rowErrors ??= new Map();
-            if (!rowErrors.has(r)) rowErrors.set(r, s);
-          }
-        } else {
-          row[c] = s;
-        }
-      }
+      for (let c = 0; c < src.length; c++) row[c] = toScalar(src[c] as InternalScalarValue);
       grid[r] = row;
     }
-    return { value: grid, rowErrors, height: data.length };
+    return { value: grid };
   }
-  const s = toScalar(v as InternalScalarValue);
-  if (s instanceof HfCellError) return s;
-  return { value: s, height: 1 };
+  return { value: toScalar(v as InternalScalarValue) };
 }
 
 function toHfCell(cell: ResultCell | undefined): InternalScalarValue {
@@ -230,9 +225,18 @@ export class EchemPlugin extends FunctionPlugin {
     if (spec === undefined) {
       return new HfCellError(ErrorType.NAME, `${ast.procedureName} is not an ECHEM function`);
     }
-    return this.runFunction(ast.args, state, this.metadata(ast.procedureName), (...raw: unknown[]) =>
-      this.evaluate(spec, ast, state, raw),
-    ) as InterpreterValue;
+    // The arguments are evaluated here rather than through runFunction, which would answer
+    // for the function when one argument is an error: the catalogue decides what an error in
+    // an input means, as it does for the Excel wrapper (docs/design.md, "Errors").
+    const metadata = this.metadata(ast.procedureName);
+    const raw = this.evaluateArguments(ast.args, state, metadata).map(([value]) => value);
+    if (!this.isNumberOfArgumentValuesValid(metadata.parameters ?? [], raw.length)) {
+      return new HfCellError(
+        ErrorType.NA,
+        `${formulaName(spec)} takes ${spec.params.length} arguments (${spec.params.map((p) => p.name).join(', ')})`,
+      );
+    }
+    return this.evaluate(spec, ast, state, raw);
   }
 
   echemSize(ast: ProcedureAst, state: InterpreterState): ArraySize {
@@ -251,34 +255,15 @@ export class EchemPlugin extends FunctionPlugin {
     raw: unknown[],
   ): InterpreterValue {
     const args: Arg[] = [];
-    const caseErrors: { rowErrors: Map<number, HfCellError>; height: number }[] = [];
     for (let i = 0; i < raw.length; i++) {
-      const param = spec.params[i];
-      const conv = this.convertCached(raw[i], param?.name);
-      if (conv instanceof HfCellError) return conv;
-      args.push(conv.value);
-      if (conv.rowErrors !== undefined) caseErrors.push({ rowErrors: conv.rowErrors, height: conv.height });
+      args.push(this.convertCached(raw[i], spec.params[i]?.kind === 'table').value);
     }
     const result = callSafely(spec, args);
     const height = resultHeight(result);
     const width = resultWidth(result);
-
-    // An error inside a range argument: where the argument has one row per case, only the
-    // cases on the erring rows show it; otherwise the whole result does.
-    const errorRows = new Map<number, HfCellError>();
-    for (const { rowErrors, height: h } of caseErrors) {
-      if (h !== height || height === 1) {
-        const first = rowErrors.values().next().value as HfCellError;
-        return first;
-      }
-      for (const [r, e] of rowErrors) if (!errorRows.has(r)) errorRows.set(r, e);
-    }
-
-    if (height === 1 && width === 1 && errorRows.size === 0) {
-      return toHfCell(result[0]?.[0]);
-    }
+    if (height === 1 && width === 1) return toHfCell(result[0]?.[0]);
     const reserved = this.predictSize(spec, ast, state);
-    if (spec.id === 'CHECKTABLE' && width <= reserved.width && height > reserved.height) {
+    if (spec.result.kind === 'list' && width <= reserved.width && height > reserved.height) {
       // More problems than table rows: list what fits and count the rest.
       const shown = result.slice(0, Math.max(0, reserved.height - 1));
       const rest = height - shown.length;
@@ -296,9 +281,8 @@ export class EchemPlugin extends FunctionPlugin {
     const rows: InternalScalarValue[][] = [];
     for (let r = 0; r < height; r++) {
       const src = result[r] ?? [];
-      const e = errorRows.get(r);
       const row: InternalScalarValue[] = new Array<InternalScalarValue>(width);
-      for (let c = 0; c < width; c++) row[c] = e ?? toHfCell(src[c]);
+      for (let c = 0; c < width; c++) row[c] = toHfCell(src[c]);
       rows.push(row);
     }
     return SimpleRangeValue.onlyValues(rows);
@@ -310,19 +294,19 @@ export class EchemPlugin extends FunctionPlugin {
    * Every call that reads the same unchanged range (a Potentials table read by thousands of
    * formulas) then gets the same object, which also lets the engine skip re-reading the table.
    */
-  private convertCached(v: unknown, paramName: string | undefined): ConvertedArg | HfCellError {
+  private convertCached(v: unknown, isTable: boolean): ConvertedArg {
     if (v instanceof SimpleRangeValue && v.range !== undefined) {
       const vertex = this.dependencyGraph.getRange(v.range.start, v.range.end);
       if (vertex !== undefined) {
-        const key = paramName === 'table' ? 'ECHEM:table' : 'ECHEM:range';
+        const key = isTable ? 'ECHEM:table' : 'ECHEM:range';
         const hit = vertex.getFunctionValue(key) as ConvertedArg | undefined;
         if (hit !== undefined) return hit;
-        const conv = convertArg(v, paramName);
-        if (!(conv instanceof HfCellError)) vertex.setFunctionValue(key, conv);
+        const conv = convertArg(v);
+        vertex.setFunctionValue(key, conv);
         return conv;
       }
     }
-    return convertArg(v, paramName);
+    return convertArg(v);
   }
 
   private predictSize(spec: FunctionSpec, ast: ProcedureAst, state: InterpreterState): Sized {
@@ -338,29 +322,39 @@ export class EchemPlugin extends FunctionPlugin {
     };
     // Species names are a list (a row or a column); values have one column per species and
     // one row per case, or are a single column holding one case when it matches the list.
-    const species = sizeOf('species');
-    const values = sizeOf('values');
-    const k = species === undefined ? 0 : Math.max(species.width, species.height);
-    const valueCases =
-      values === undefined ? 1 : k > 1 && values.width === 1 && values.height === k ? 1 : values.height;
-    switch (spec.id) {
-      case 'POTENTIALS': {
+    const shape = spec.result;
+    switch (shape.kind) {
+      case 'fixed': {
         const all = callSafely(spec, []);
         return { width: resultWidth(all), height: resultHeight(all) };
       }
-      case 'CHECKTABLE':
-        return { width: 1, height: Math.max(1, sizeOf('table')?.height ?? 1) };
-      case 'COMBINE':
+      case 'list':
+        return {
+          width: shape.width ?? 1,
+          height: Math.max(1, shape.rows ?? (shape.heightFrom ? (sizeOf(shape.heightFrom)?.height ?? 1) : 1)),
+        };
+      case 'single':
         return { width: 1, height: 1 };
-      default: {
-        let height = valueCases;
+      case 'perCase': {
+        // Species names are a list (a row or a column); values have one column per species and
+        // one row per case, or are a single column holding one case when it matches the list.
+        let height = 1;
+        const headerCount = (name: string) => {
+          const h = sizeOf(name);
+          return h === undefined ? 0 : Math.max(h.width, h.height);
+        };
         spec.params.forEach((p, i) => {
           const s = sizes[i];
-          if (s !== undefined && !NON_CASE_PARAMS.has(p.name) && p.name !== 'values') {
+          if (s === undefined) return;
+          if (kindOf(p).shape === 'values') {
+            const k = headerCount(p.headerParam ?? 'species');
+            height = Math.max(height, k > 1 && s.width === 1 && s.height === k ? 1 : s.height);
+          } else if (kindOf(p).shape === 'cell' && isPerCase(p)) {
             height = Math.max(height, s.height);
           }
         });
-        return { width: spec.id === 'ACTIVITY' ? Math.max(1, k) : 1, height };
+        const width = shape.widthFrom ? Math.max(1, headerCount(shape.widthFrom)) : (shape.width ?? 1);
+        return { width, height };
       }
     }
   }

@@ -24,7 +24,7 @@ Evaluates each formula and prints its result; a spill prints as rows (tab-separa
 The leading "=" is optional. Text arguments need double quotes, so quote the whole
 formula for the shell, e.g.
   potentia eval '=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01}, 25)'
-  potentia eval "=ECHEM.NERNSTSLOPE(37)" "=ECHEM.POTENTIALS(\\"Cu\\")"
+  potentia eval "=ECHEM.NERNSTSLOPE(37)" "=ECHEM.LISTTABLE(\\"Cu\\")"
 
 Options:
   --json          one JSON value per formula per line: a number, a string, an array of

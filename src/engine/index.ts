@@ -146,3 +146,9 @@ export {
   reactionEntropyJK,
   thermoneutralV,
 } from './thermo/reactionEnergy';
+// species-header grammar (i11): one reading of `left:Ag+`, `l:Ag+`, `pH`, `left:pH`
+export {
+  type SpeciesHeaderParts,
+  splitSpeciesHeader,
+  canonicalSpeciesHeader,
+} from './notation/speciesHeader';

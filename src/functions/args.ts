@@ -5,7 +5,7 @@
  * the argument when it cannot.
  */
 import { EngineError } from '../engine';
-import type { Arg, Grid, Scalar } from './catalogue';
+import type { Arg, Grid, Scalar } from './cellTypes';
 
 /** True for null, undefined and "" (after trimming). */
 export function isBlank(v: unknown): boolean {
@@ -62,6 +62,20 @@ function describe(v: unknown): string {
 }
 
 /**
+ * The one rule for reading number text: trimmed, the Unicode minus read as "-", anything
+ * `Number` reads as a finite number; null otherwise.
+ *
+ * @example
+ * parseNumberText(' −0.5 ') // -0.5
+ */
+export function parseNumberText(text: string): number | null {
+  const t = text.trim().replace(/\u2212/g, '-');
+  if (t === '') return null;
+  const x = Number(t);
+  return Number.isFinite(x) ? x : null;
+}
+
+/**
  * Read a number. Numeric text is accepted ("25", "−0.5"); blank gives the default,
  * or an error where there is none.
  *
@@ -79,9 +93,8 @@ export function readNumber(v: unknown, name: string, dflt?: number, unit = ''): 
     return v;
   }
   if (typeof v === 'string') {
-    const t = v.trim().replace(/\u2212/g, '-');
-    const x = Number(t);
-    if (t !== '' && Number.isFinite(x)) return x;
+    const x = parseNumberText(v);
+    if (x !== null) return x;
   }
   throw new EngineError(
     'argument',

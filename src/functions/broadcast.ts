@@ -5,7 +5,7 @@
  * both shapes.
  */
 import { EngineError } from '../engine';
-import type { Grid, Scalar } from './catalogue';
+import type { Grid, Scalar } from './cellTypes';
 import { shapeOf } from './args';
 
 /** A per-case argument: one value for every case, or one per case. */

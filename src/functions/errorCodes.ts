@@ -4,7 +4,7 @@
  * shows); #NUM! is for numeric range; #N/A for "not in the table".
  */
 import { isEngineError, type EngineErrorKind } from '../engine';
-import type { CellError, ErrorCode } from './catalogue';
+import type { CellError, ErrorCode } from './cellTypes';
 
 const CODE_BY_KIND: Record<EngineErrorKind, ErrorCode> = {
   parse: '#VALUE!',
@@ -34,7 +34,7 @@ export function toCellError(e: unknown): CellError {
   return cellError('#VALUE!', `Internal error: ${msg}. Please report this with the formula that caused it.`);
 }
 
-/** The code for an engine error kind (used by the error catalogue test and README). */
+/** The code for an engine error kind (used by the error catalogue and docs/errors.md). */
 export function codeForKind(kind: EngineErrorKind): ErrorCode {
   return CODE_BY_KIND[kind];
 }

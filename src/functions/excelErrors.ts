@@ -11,7 +11,7 @@
  * on the way (a bug, never a user's mistake) and returns it as `#VALUE!` with a message asking
  * for a report, so that no input makes a function throw into Excel.
  */
-import { isCellError, type Arg, type CellError, type ErrorCode, type Result, type Scalar } from './catalogue';
+import { isCellError, type Arg, type CellError, type ErrorCode, type Result, type Scalar } from './cellTypes';
 
 /** A cell as Excel receives it from a custom function. */
 export type ExcelCell = number | string | CustomFunctions.Error;

@@ -174,7 +174,7 @@ describe('eval', () => {
     expect(r.code).toBe(1);
     expect(r.stdout).toContain('#NAME? unknown function ECHEM.POTENTAIL');
     expect(r.stdout).toContain('Did you mean ECHEM.POTENTIAL?');
-    expect(r.stdout).toContain('potentia eval "=ECHEM.POTENTIALS()"');
+    expect(r.stdout).toContain('potentia eval "=ECHEM.LISTTABLE()"');
   });
 
   test('--allow-errors prints the error and exits 0', () => {

@@ -70,8 +70,10 @@ test('species in a column with one value each is one case: no spill', () => {
 test('an error in one row of values errs only that case', () => {
   const hf = build([['Cu2+', '=ECHEM.POTENTIAL("Cu2+/Cu", A1, A2:A4)'], [0.01], ['=1/0'], [1]]);
   expect(hf.getCellValue(at(0, 1))).toBeCloseTo(nernst(0.337, 2, 100, 25), 12);
+  // docs/design.md, "Errors": an error cell propagates to its case, as #VALUE! naming it
   const bad = hf.getCellValue(at(1, 1));
-  expect(isHfError(bad) && bad.value).toBe('#DIV/0!');
+  expect(isHfError(bad) && bad.value).toBe('#VALUE!');
+  expect(isHfError(bad) && bad.message).toContain('values (Cu2+) holds the error #DIV/0! from its cell');
   // a = 1: E = E° = 0.337 V (OpenStax Chemistry 2e, Appendix L (seen)).
   expect(hf.getCellValue(at(2, 1))).toBe(0.337);
   hf.destroy();
@@ -97,7 +99,7 @@ test("a broken row of the user's table does not break lookups of other rows", ()
 
 test('ACTIVITY spills the shape of values', () => {
   const hf = build([
-    ['Na+', 'Cl-', '=ECHEM.ACTIVITY(A1:B1, A2:B3, "davies")'],
+    ['Na+', 'Cl-', '=ECHEM.ACTIVITY(A1:B1, A2:B3, , "davies")'],
     [0.01, 0.01],
     [0.05, 0.05],
   ]);
@@ -109,8 +111,8 @@ test('ACTIVITY spills the shape of values', () => {
       [0.01, 0.01],
       [0.05, 0.05],
     ],
-    'davies',
     undefined,
+    'davies',
     undefined,
   );
   expect(hf.getCellValue(at(1, 3))).toBe(direct[1]?.[1]);

@@ -93,8 +93,8 @@ describe('potentia eval: spills and errors', () => {
     expect(cells[1]?.[0]).toEqual(expect.objectContaining({ error: '#VALUE!' }));
   });
 
-  test('POTENTIALS() spills the whole built-in table with a header row', () => {
-    const [rows] = evaluateFormulas(['=ECHEM.POTENTIALS()']);
+  test('LISTTABLE() spills the whole built-in table with a header row', () => {
+    const [rows] = evaluateFormulas(['=ECHEM.LISTTABLE()']);
     const cells = rows as unknown[][];
     expect(cells).toHaveLength(BUILTIN_POTENTIALS.length + 1);
     expect(cells[0]).toHaveLength(4);
@@ -148,7 +148,7 @@ describe('potentia eval: spills and errors', () => {
     expect(typo).toEqual({ error: '#NAME?', message: expect.stringContaining('ECHEM.POTENTAIL') });
     const message = (typo as { message: string }).message;
     expect(message).toContain('Did you mean ECHEM.POTENTIAL?');
-    expect(message).toContain('potentia eval "=ECHEM.POTENTIALS()"');
+    expect(message).toContain('potentia eval "=ECHEM.LISTTABLE()"');
     expect((bare as { message: string }).message).toContain('Did you mean ECHEM.POTENTIAL?');
   });
 

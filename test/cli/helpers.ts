@@ -13,8 +13,9 @@ export const ROOT = path.resolve(__dirname, '..', '..');
 export const LAUNCHER = path.join(ROOT, 'bin', 'potentia.js');
 
 // SI 2019 exact values (derived from the SI exact constants: F = N_A·e, R = N_A·k).
-export const F = 6.02214076e23 * 1.602176634e-19;
-export const R = 6.02214076e23 * 1.380649e-23;
+import { F, R } from '../support';
+
+export { F, R };
 
 /** RT/F in V at t °C (derived from the SI exact constants). */
 export function thermalVoltage(tC: number): number {

@@ -109,7 +109,7 @@ describe('cathodic-protection check template', () => {
       expect(val(ws, `${c.result}${r}`)).toBe(expected <= -0.85 ? 'PASS' : 'CHECK');
       expect(num(ws, `${c.margin}${r}`)).toBeCloseTo((-0.85 - expected) * 1000, 9);
       // The add-in's path: the same catalogue call gives the identical number.
-      const direct = catalogue('VSREF', reading, electrode, 'CSE', t, undefined);
+      const direct = catalogue('VSREF', reading, electrode, 'CSE', undefined, t);
       expect(got).toBe(direct[0]?.[0]);
       if (val(ws, `${c.result}${r}`) === 'CHECK') checks++;
     }
@@ -297,7 +297,7 @@ describe("potentia eval on the templates' formulas", () => {
     const q = SWEEP_TEMPLATE.firstRow + 1;
     const k = CAL_TEMPLATE.summaryFirstRow + 2;
     const [vsCse, emf, ideal] = evaluateFormulas([
-      `=ECHEM.VSREF(${num(cp, `${c.reading}${r}`)}/1000, "${String(val(cp, `${c.electrode}${r}`))}", "CSE", ${num(cp, `${c.temp}${r}`)})`,
+      `=ECHEM.VSREF(${num(cp, `${c.reading}${r}`)}/1000, "${String(val(cp, `${c.electrode}${r}`))}", "CSE", , ${num(cp, `${c.temp}${r}`)})`,
       `=ECHEM.POTENTIAL("${String(val(sweep, SWEEP_TEMPLATE.cellText))}", {"Zn2+","Cu2+"}, {${num(sweep, `${w.zinc}${q}`)},${num(sweep, `${w.copper}${q}`)}}, ${num(sweep, `${w.temp}${q}`)})`,
       `=-1000*ECHEM.NERNSTSLOPE(${num(cal, `${CAL_TEMPLATE.summaryCol.temp}${k}`)})`,
     ]);

@@ -16,19 +16,11 @@ import {
   type ActivityModel,
 } from '../../src/engine/activity';
 import { DEBYE_HUCKEL_TABLE, KIELLAND_ION_SIZES } from '../../src/engine/data/activityData';
-import { EngineError, type EngineErrorKind } from '../../src/engine/errors';
+import { type EngineErrorKind } from '../../src/engine/errors';
 import { formatSpecies, parseSpecies } from '../../src/engine/notation/species';
+import { engineErrorOf } from '../support';
 
 /** Runs `f` and returns the EngineError it throws (fails the test otherwise). */
-function engineErrorOf(f: () => unknown): EngineError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error('expected an EngineError');
-}
 
 const MODELS: ActivityModel[] = ['limiting', 'extended', 'davies'];
 

@@ -18,6 +18,7 @@ import {
   parseReaction,
   type Medium,
 } from '../../src/engine';
+import { engineErrorOf } from '../support';
 
 // ---------------------------------------------------------------------------------------
 // An independent reader of canonical reaction text: "2 MnO4- + 16 H+ -> 2 Mn2+ + 8 H2O".
@@ -161,15 +162,6 @@ function imbalance(text: string): Record<string, string> {
   return out;
 }
 
-function engineErrorOf(f: () => unknown): EngineError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error('expected an EngineError, but nothing was thrown');
-}
 
 describe('the test-local counter itself', () => {
   test.each([

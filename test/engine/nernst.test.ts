@@ -20,6 +20,7 @@ import {
   sweepCases,
 } from '../../src/engine';
 import { engineErrorOf, expectNear } from './support';
+import { F, R } from '../support';
 import { rowE0V } from './support';
 
 // E° of the built-in rows (from the species data; OSX App. L prints 0.34, 0.7996, 1.232,
@@ -36,9 +37,6 @@ const E_CO_FE = rowE0V('Fe2+ + 2 e- -> Fe') - E_CO;
 const E_DANIELL = E_CU - E_ZN;
 
 // SI 2019 exact constants, written out here so that expectations are independent of the engine.
-const NA = 6.02214076e23; // mol⁻¹
-const R = NA * 1.380649e-23; // J/(mol·K) = N_A·k
-const F = NA * 1.602176634e-19; // C/mol = N_A·e
 /** RT ln10 / F in V at a Celsius temperature (derived from the SI exact constants). */
 const s = (tC: number) => (R * (tC + 273.15) * Math.LN10) / F;
 const S25 = s(25);

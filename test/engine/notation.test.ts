@@ -8,7 +8,6 @@
  * (CGPM 1954 definition of the standard atmosphere, common practice).
  */
 import {
-  EngineError,
   formatNotation,
   formatRational,
   formatSpecies,
@@ -23,17 +22,9 @@ import {
   type Phase,
   type Species,
 } from '../../src/engine';
+import { engineErrorOf } from '../support';
 
 /** The EngineError `f` throws; fails the test where it throws nothing or something else. */
-function engineErrorOf(f: () => unknown): EngineError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error('expected an EngineError, but nothing was thrown');
-}
 
 /** Element counts as a plain object, for toEqual. */
 function atoms(s: Species): Record<string, number> {

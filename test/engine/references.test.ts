@@ -12,20 +12,11 @@ import {
   batesBowerE0V,
   silverChlorideSeawaterV,
 } from '../../src/engine/references';
-import { EngineError } from '../../src/engine/errors';
 import { nernstSlopeV } from '../../src/engine/constants';
+import { EngineError } from '../../src/engine/errors';
+import { engineErrorOf } from '../support';
 
 /** Runs `f` and returns the EngineError it throws (fails the test otherwise). */
-function engineErrorOf(f: () => unknown): EngineError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error('expected an EngineError');
-}
-
 describe('built-in reference potentials at 25 °C', () => {
   // prettier-ignore
   const published: [string, number, string][] = [

@@ -10,7 +10,6 @@
  * allows for the printed rounding.
  */
 import {
-  EngineError,
   compiledReaction,
   defaultTable,
   describeSource,
@@ -22,17 +21,9 @@ import {
   type PotentialTable,
   type Resolved,
 } from '../../src/engine';
+import { engineErrorOf } from '../support';
 import { tabulatedE0V, TABLE_ROUNDING_V, R, S25 } from './support';
 
-function engineErrorOf(f: () => unknown): EngineError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error('expected an EngineError, but nothing was thrown');
-}
 
 const T = defaultTable();
 const resolve = (text: string, table: PotentialTable = T): Resolved => resolveReaction(text, table);

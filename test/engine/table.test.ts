@@ -9,7 +9,6 @@
  */
 import {
   BUILTIN_POTENTIALS,
-  EngineError,
   builtinTable,
   checkBalance,
   defaultTable,
@@ -20,16 +19,8 @@ import {
   standardPotentialV,
   type PotentialTable,
 } from '../../src/engine';
+import { engineErrorOf } from '../support';
 
-function engineErrorOf(f: () => unknown): EngineError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error('expected an EngineError, but nothing was thrown');
-}
 
 const e0 = (text: string, table: PotentialTable): number =>
   standardPotentialV(resolveReaction(text, table), 25);

@@ -19,11 +19,9 @@ import {
   standardPotentialV,
   sweepCases,
 } from '../../src/engine';
+import { F, R } from '../support';
 
 // SI 2019 exact constants, written out here so that expectations are independent of the engine.
-const NA = 6.02214076e23; // mol⁻¹
-const R = NA * 1.380649e-23; // J/(mol·K)
-const F = NA * 1.602176634e-19; // C/mol
 /** RT ln10 / F in V (derived from the SI exact constants). */
 const s = (tC: number) => (R * (tC + 273.15) * Math.LN10) / F;
 

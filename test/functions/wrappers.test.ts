@@ -11,6 +11,7 @@ import { StubError } from './customFunctionsStub';
 import * as F from '../../src/functions/functions';
 import { CATALOGUE, type Result } from '../../src/functions/catalogue';
 import { argFromExcel, resultToExcel, toExcel } from '../../src/functions/excelErrors';
+import { F as F_SI, s } from '../support';
 
 type Cell = number | string | StubError;
 const call = (fn: (...a: any[]) => any[][], ...args: unknown[]): Cell[][] => fn(...args) as Cell[][]; // eslint-disable-line @typescript-eslint/no-explicit-any
@@ -33,11 +34,9 @@ function err(result: Cell[][]): StubError {
   return v as StubError;
 }
 
-// SI 2019 exact constants: F = N_A·e, R = N_A·k.
-const N_A = 6.02214076e23;
-const F_C = N_A * 1.602176634e-19;
-const R_J = N_A * 1.380649e-23;
-const slopeAt = (tC: number) => (R_J * (tC + 273.15) * Math.LN10) / F_C;
+// SI 2019 exact constants (F = N_A·e, R = N_A·k) and RT ln10/F, from the shared test support
+const F_C = F_SI;
+const slopeAt = s;
 
 describe('association', () => {
   it('associates every catalogue id once, with the exported function of that name', () => {
@@ -133,20 +132,20 @@ describe('published values', () => {
     expect(num(call(F.COMBINE, [[0.771, -0.447]], [[1, 2]]))).toBeCloseTo((0.771 - 2 * 0.447) / 3, 12);
   });
 
-  it('SOURCE names the publication; DIAGRAM writes the activities in', () => {
+  it('SOURCE names the publication; CELLNOTATION writes the activities in', () => {
     const s = call(F.SOURCE, c('Cu2+/Cu'));
     expect(String(s[0]![0])).toContain('OpenStax Chemistry 2e, Appendix L');
-    expect(call(F.DIAGRAM, c('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]])).toEqual([
+    expect(call(F.CELLNOTATION, c('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]])).toEqual([
       ['Zn(s) | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu(s)'],
     ]);
   });
 
-  it('POTENTIALS spills the table with a header row; CHECKTABLE says OK or lists the problems', () => {
-    const t = call(F.POTENTIALS, c('Cu'));
+  it('LISTTABLE spills the table with a header row; CHECKTABLE says OK or lists the problems', () => {
+    const t = call(F.LISTTABLE, c('Cu'));
     expect(t.length).toBeGreaterThan(2);
     expect(t[0]!).toHaveLength(4);
     expect(t.find((r) => r[0] === 'Cu2+ + 2 e- -> Cu')?.[1]).toBe(0.337);
-    expect(call(F.POTENTIALS).length).toBeGreaterThan(60);
+    expect(call(F.LISTTABLE).length).toBeGreaterThan(60);
     expect(call(F.CHECKTABLE, [['Cu2+ + 2 e- -> Cu', 0.34, '', 'my lab']])).toEqual([['OK']]);
     const problems = call(F.CHECKTABLE, [
       ['Cu2+ + e- -> Cu', 0.34, '', 'typo'],
@@ -258,10 +257,13 @@ describe('errors', () => {
     expect(huge.message).toBeUndefined(); // Excel shows no message on #NUM!
   });
 
-  it('an error value in an input cell reaches the catalogue as its code and is named in the message', () => {
+  it('an error value in an input cell propagates: #N/A stays #N/A, with a message naming the argument', () => {
     const e = err(call(F.POTENTIAL, c('Cu2+/Cu'), c('Cu2+'), c(0.01), [[new StubError('#N/A')]]));
-    expect(e.code).toBe('#VALUE!');
-    expect(e.message).toContain('#N/A');
+    expect(e.code).toBe('#N/A');
+    expect(e.message).toBe('temp_C holds the error #N/A from its cell: fix that cell (or the formula that gives it) first.');
+    const d = err(call(F.POTENTIAL, c('Cu2+/Cu'), c('Cu2+'), [[new StubError('#DIV/0!')]]));
+    expect(d.code).toBe('#VALUE!');
+    expect(d.message).toContain('values (Cu2+) holds the error #DIV/0!');
   });
 });
 

@@ -3,15 +3,22 @@
  * to it, with the result the contract asks for (PRODUCT.md, "Errors"): the error code, and a
  * fragment of the message (a regular expression) that names the argument or the fix.
  *
- * badInputs.test.ts runs each case through its catalogue function; scripts/error-catalogue.ts
- * prints the README's "Error catalogue" section from this table, and a test checks that the
- * README lists every case, so the two cannot drift apart.
+ * The cases are of two sorts: derived from the function specs (every parameter gets the input
+ * classes its kind implies: bad type, empty, NaN, out of domain, wrong shape, an error in an
+ * input cell), with the message its kind gives; and written by hand, for the chemistry
+ * (unknown couples, unbalanced rows, ambiguous names …) and for exact wordings. A hand case
+ * replaces the derived case of the same function, argument and input class.
+ *
+ * badInputs.test.ts runs each case through its catalogue function; `npm run docs` writes
+ * docs/errors.md and each function page's "Errors" from this table.
  *
  * A case with `bug` set describes behaviour the engine does not have yet: its test is marked
  * failing and the text says what it does instead. When the lead fixes it, the failing test
  * passes, jest reports that, and the `bug` field is removed.
  */
 import { CATALOGUE, type Arg, type ErrorCode } from '../../src/functions/catalogue';
+import { domainOf, isPerCase, kindOf, unitOf, type KindName } from '../../src/functions/spec/kinds';
+import type { ParamSpec } from '../../src/functions/spec/types';
 
 /** The kinds of bad input a user can give. */
 export const INPUT_CLASSES = [
@@ -52,6 +59,11 @@ export const INPUT_CLASSES = [
   'filter that matches nothing',
   'K beyond the number range',
   'Q beyond the number range',
+  'error in an input cell',
+  'below the domain',
+  'above the domain',
+  'temperature that looks like kelvin',
+  'millivolts typed as volts',
 ] as const;
 
 export type InputClass = (typeof INPUT_CLASSES)[number];
@@ -70,13 +82,13 @@ export type Expectation =
 export interface BadInputCase {
   /** Catalogue id, e.g. "POTENTIAL". */
   readonly fn: string;
-  /** The parameter that gets the bad input (as PRODUCT.md names it). */
+  /** The parameter that gets the bad input (as the spec names it). */
   readonly argument: string;
   readonly input: InputClass;
   /** The call's arguments, in parameter order. */
   readonly args: readonly Arg[];
   readonly expect: Expectation;
-  /** What the message tells the user (for the README). */
+  /** What the message tells the user (for docs/errors.md). */
   readonly says: string;
   /** Set where the engine does not behave so yet: what it does instead (the test is marked failing). */
   readonly bug?: string;
@@ -113,8 +125,9 @@ const ABS_ZERO = /temp_C must be above absolute zero \(−273\.15 °C\)/;
 const TEMP_TEXT = /temp_C must be a number in °C; got "hot"/;
 const TEMP_NAN = /temp_C must be a finite/;
 const TEMP_SHAPE = /temp_C must be one cell or one column with an entry per case; got a 2×2 range/;
+const MV_AS_V = /of 1e\+308 V is beyond ±10 V: were millivolts typed as volts\?/;
 const OVERFLOW = /not a finite number|(outside|beyond) the (spreadsheet's )?number range/;
-const TEMP_HUGE = /temp_C of 1e\+308 °C is beyond the 10000 °C this engine accepts/;
+const TEMP_HUGE = /temp_C must be between 0 and 100 °C; got 1e\+308 °C, outside the aqueous range of the data/;
 
 /** The reaction-argument cases that every function taking a reaction shares. */
 function reactionCases(
@@ -152,7 +165,7 @@ function reactionCases(
       argument: 'reaction',
       input: 'number for text',
       args: build(5),
-      expect: V(/reaction must be a reaction; got 5/),
+      expect: V(/reaction must be a half-reaction, couple, cell diagram or reaction; got 5/),
       says: 'reaction must be a reaction, not a number',
     },
     {
@@ -212,7 +225,7 @@ function reactionCases(
 }
 
 /** Temperature cases for a function whose temp_C is at `index` of `base`. */
-function tempCases(fn: string, base: readonly Arg[], index: number): BadInputCase[] {
+function tempCases(fn: string, base: readonly Arg[], index: number, huge = TEMP_HUGE): BadInputCase[] {
   const at = (t: Arg) => base.map((a, i) => (i === index ? t : a));
   return [
     {
@@ -244,8 +257,8 @@ function tempCases(fn: string, base: readonly Arg[], index: number): BadInputCas
       argument: 'temp_C',
       input: 'huge (1e308)',
       args: at(1e308),
-      expect: V(TEMP_HUGE),
-      says: 'temp_C is beyond the 10000 °C the engine accepts; give it in °C',
+      expect: V(huge),
+      says: 'temp_C must be between 0 and 100 °C (the aqueous range of the data)',
     },
     {
       fn,
@@ -260,7 +273,16 @@ function tempCases(fn: string, base: readonly Arg[], index: number): BadInputCas
 
 const CU = 'Cu2+/Cu';
 
-export const BAD_INPUT_CASES: readonly BadInputCase[] = [
+/** Cases written by hand: the chemistry-specific errors and the exact wording of the common ones. */
+const HAND_CASES: readonly BadInputCase[] = [
+  {
+    fn: 'CONCCELL',
+    argument: 'table',
+    input: 'unbalanced user row in a table',
+    args: ['Cu2+/Cu', 0.01, 0.1, null, null, UNBALANCED_CU_ROW],
+    expect: V(ROW_UNBALANCED),
+    says: 'the row of your table that the couple needs does not balance (row number, elements)',
+  },
   // -------------------------------------------------------------------- POTENTIAL
   ...reactionCases('POTENTIAL', (r) => [r, null, null, null, null]),
   ...tempCases('POTENTIAL', [CU, 'Cu2+', 0.01, 25, null], 3),
@@ -449,23 +471,23 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   ...(['LOGK', 'EQCONST'] as const).flatMap((fn): BadInputCase[] => [
     {
       fn,
-      argument: 'reaction_or_E0',
+      argument: 'reaction_or_E',
       input: 'empty ("")',
       args: ['', 2, null, null],
-      expect: V(/reaction_or_E0 is missing: give a reaction or a (standard )?potential in volts/),
-      says: 'reaction_or_E0 is missing',
+      expect: V(/reaction_or_E is missing: give a reaction or a (standard )?potential in volts/),
+      says: 'reaction_or_E is missing',
     },
     {
       fn,
-      argument: 'reaction_or_E0',
+      argument: 'reaction_or_E',
       input: 'NaN',
       args: [NaN, 2, null, null],
-      expect: V(/reaction_or_E0 must be a finite number/),
-      says: 'reaction_or_E0 must be a finite number',
+      expect: V(/reaction_or_E must be a finite number/),
+      says: 'reaction_or_E must be a finite number',
     },
     {
       fn,
-      argument: 'reaction_or_E0',
+      argument: 'reaction_or_E',
       input: 'unknown species',
       args: [UNKNOWN, null, null, null],
       expect: NA(NOT_IN_TABLE),
@@ -473,7 +495,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     },
     {
       fn,
-      argument: 'reaction_or_E0',
+      argument: 'reaction_or_E',
       input: 'ambiguous couple',
       args: [AMBIGUOUS, null, null, null],
       expect: V(MATCHES_TWO),
@@ -481,10 +503,10 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     },
     {
       fn,
-      argument: 'reaction_or_E0',
+      argument: 'reaction_or_E',
       input: 'range of the wrong shape',
       args: [GRID_2X2, 2, null, null],
-      expect: V(/reaction_or_E0 must be one cell or one column/),
+      expect: V(/reaction_or_E must be one cell or one column/),
       says: 'one cell or one column of cases',
     },
     {
@@ -493,7 +515,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
       input: 'null (omitted)',
       args: [0.5, null, null, null],
       expect: V(
-        /n is missing: when reaction_or_E0 is a potential \(0\.5 V\), give the electrons transferred, n/,
+        /n is missing: when reaction_or_E is a potential \(0\.5 V\), give the electrons transferred, n/,
       ),
       says: 'n is needed when a potential is given',
     },
@@ -502,7 +524,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
       argument: 'n',
       input: 'zero',
       args: [0.5, 0, null, null],
-      expect: V(/n is missing: when reaction_or_E0 is a potential/),
+      expect: V(/n is missing: when reaction_or_E is a potential/),
       says: 'n is needed (0, an empty cell, counts as omitted)',
     },
     {
@@ -541,15 +563,15 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   ]),
   {
     fn: 'LOGK',
-    argument: 'reaction_or_E0',
+    argument: 'reaction_or_E',
     input: 'huge (1e308)',
     args: [1e308, 2, null, null],
-    expect: NUM(OVERFLOW),
-    says: 'log10 K is not a finite number (overflow)',
+    expect: V(MV_AS_V),
+    says: 'beyond ±10 V: were millivolts typed as volts?',
   },
   {
     fn: 'EQCONST',
-    argument: 'reaction_or_E0',
+    argument: 'reaction_or_E',
     input: 'K beyond the number range',
     args: [10, 2, null, null],
     expect: NUM(
@@ -559,11 +581,11 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'EQCONST',
-    argument: 'reaction_or_E0',
+    argument: 'reaction_or_E',
     input: 'huge (1e308)',
     args: [1e308, 2, null, null],
-    expect: NUM(OVERFLOW),
-    says: 'log10 K itself is beyond the number range: check the inputs',
+    expect: V(MV_AS_V),
+    says: 'beyond ±10 V: were millivolts typed as volts?',
   },
   {
     fn: 'GIBBS',
@@ -586,8 +608,8 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     argument: 'reaction_or_E',
     input: 'huge (1e308)',
     args: [1e308, 2, null, null],
-    expect: NUM(OVERFLOW),
-    says: 'ΔG is not a finite number (overflow)',
+    expect: V(MV_AS_V),
+    says: 'beyond ±10 V: were millivolts typed as volts?',
   },
   {
     fn: 'GIBBS',
@@ -705,22 +727,23 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
 
   // -------------------------------------------------------------------- NERNSTSLOPE
-  ...tempCases('NERNSTSLOPE', [25, 1], 0),
+  ...tempCases('NERNSTSLOPE', [25, 1], 0, /temp_C must be > −273\.15 °C and ≤ 10000 °C; got 1e\+308 °C/),
   {
     fn: 'NERNSTSLOPE',
     argument: 'n',
     input: 'zero',
     args: [25, 0],
-    expect: V(/n \(electrons\) must be a positive number; got 0/),
-    says: 'n must be a positive number',
+    expect: V(/n must not be 0/),
+    says: 'n must not be 0 (it may be negative for an anion-responsive electrode)',
   },
   {
     fn: 'NERNSTSLOPE',
     argument: 'n',
     input: 'negative',
     args: [25, -1],
-    expect: V(/n \(electrons\) must be a positive number; got -1/),
-    says: 'n must be a positive number',
+    // an anion-responsive electrode: −RT ln10/F (SI 2019 exact constants, by hand)
+    expect: { value: -((8.31446261815324 * 298.15 * Math.LN10) / 96485.33212331001) },
+    says: 'the negative slope of an anion-responsive electrode',
   },
   {
     fn: 'NERNSTSLOPE',
@@ -753,15 +776,15 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   // -------------------------------------------------------------------- CONCCELL
   {
     fn: 'CONCCELL',
-    argument: 'couple',
+    argument: 'reaction',
     input: 'empty ("")',
     args: ['', 0.1, 0.2, null, null, null],
-    expect: V(/couple is missing: give a couple such as "Ag\+\/Ag"/),
-    says: 'couple is missing',
+    expect: V(/reaction is missing: give a couple such as "Ag\+\/Ag"/),
+    says: 'reaction is missing: give a couple',
   },
   {
     fn: 'CONCCELL',
-    argument: 'couple',
+    argument: 'reaction',
     input: 'unknown species',
     args: [UNKNOWN, 0.1, 0.2, null, null, null],
     expect: NA(NOT_IN_TABLE),
@@ -769,7 +792,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'CONCCELL',
-    argument: 'couple',
+    argument: 'reaction',
     input: 'ambiguous couple',
     args: [AMBIGUOUS, 0.1, 0.2, null, null, null],
     expect: V(MATCHES_TWO),
@@ -777,7 +800,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'CONCCELL',
-    argument: 'couple',
+    argument: 'reaction',
     input: 'a cell where one electrode is due',
     args: ['Zn | Zn2+ || Cu2+ | Cu', 0.1, 0.2, null, null, null],
     expect: V(/couple must be one electrode \(a couple or half-reaction such as "Ag\+\/Ag"\), not a cell/),
@@ -806,7 +829,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
         argument: arg,
         input: 'negative',
         args: at(-1),
-        expect: V(new RegExp(`${arg} must be a positive activity of Ag\\+; got -1`)),
+        expect: V(new RegExp(`${arg} must be ≥ 0; got -1`)),
         says: `${arg} must be a positive activity`,
       },
       {
@@ -814,7 +837,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
         argument: arg,
         input: 'empty ("")',
         args: at(''),
-        expect: V(new RegExp(`${arg} is missing: give a number`)),
+        expect: V(new RegExp(`${arg} is missing: give an activity`)),
         says: `${arg} is missing`,
       },
       {
@@ -869,7 +892,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     argument: 'potential',
     input: 'empty ("")',
     args: ['', 'SCE', 'SHE', null, null],
-    expect: V(/potential is missing: give a number in V/),
+    expect: V(/potential is missing: give a potential in volts/),
     says: 'potential is missing',
   },
   {
@@ -940,40 +963,40 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     fn: 'VSREF',
     argument: 'pH',
     input: 'text for a number',
-    args: [0.5, 'RHE', 'SHE', null, 'abc'],
+    args: [0.5, 'RHE', 'SHE', 'abc', null],
     expect: V(/pH must be a number; got "abc"/),
     says: 'pH must be a number',
   },
-  ...tempCases('VSREF', [0.5, 'SCE', 'SHE', 25, null], 3),
+  ...tempCases('VSREF', [0.5, 'SCE', 'SHE', null, 25], 4),
 
   // -------------------------------------------------------------------- ACTCOEF
   {
     fn: 'ACTCOEF',
-    argument: 'ion',
+    argument: 'species',
     input: 'empty ("")',
     args: ['', 0.1, null, null, null],
-    expect: V(/ion is missing: give an ion such as "Cu2\+"/),
-    says: 'ion is missing',
+    expect: V(/species is missing: give an ion such as "Cu2\+"/),
+    says: 'species is missing: give an ion',
   },
   {
     fn: 'ACTCOEF',
-    argument: 'ion',
+    argument: 'species',
     input: 'null (omitted)',
     args: [null, 0.1, null, null, null],
-    expect: V(/ion is missing: give an ion such as "Cu2\+"/),
-    says: 'ion is missing',
+    expect: V(/species is missing: give an ion such as "Cu2\+"/),
+    says: 'species is missing: give an ion',
   },
   {
     fn: 'ACTCOEF',
-    argument: 'ion',
+    argument: 'species',
     input: 'number for text',
     args: [5, 0.1, null, null, null],
-    expect: V(/ion must be an ion such as "Cu2\+"; got 5/),
-    says: 'ion must be an ion such as "Cu2+"',
+    expect: V(/species must be an ion such as "Cu2\+"; got 5/),
+    says: 'species must be an ion such as "Cu2+"',
   },
   {
     fn: 'ACTCOEF',
-    argument: 'ion',
+    argument: 'species',
     input: 'unknown element symbol',
     args: ['Xx2+', 0.1, null, null, null],
     expect: V(/"Xx" is not an element symbol/),
@@ -984,7 +1007,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     argument: 'ionic_strength',
     input: 'empty ("")',
     args: ['Cu2+', '', null, null, null],
-    expect: V(/ionic_strength is missing: give a number in mol\/kg/),
+    expect: V(/ionic_strength is missing: give an ionic strength in mol\/kg/),
     says: 'ionic_strength is missing',
   },
   {
@@ -992,7 +1015,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     argument: 'ionic_strength',
     input: 'negative',
     args: ['Cu2+', -0.1, null, null, null],
-    expect: V(/ionic_strength must be ≥ 0 mol\/kg; got -0\.1/),
+    expect: V(/ionic_strength must be ≥ 0 mol\/kg; got -0\.1 mol\/kg/),
     says: 'ionic_strength must be ≥ 0 mol/kg',
   },
   {
@@ -1047,15 +1070,15 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     fn: 'ACTCOEF',
     argument: 'temp_C',
     input: 'absurd temperature (−300 °C)',
-    args: ['Cu2+', 0.1, null, -300, null],
-    expect: V(/temp_C must be between 0 and 60 °C, the range of the Debye–Hückel constants/),
-    says: 'temp_C must be between 0 and 60 °C (the Debye–Hückel constants)',
+    args: ['Cu2+', 0.1, null, null, -300],
+    expect: V(ABS_ZERO),
+    says: 'temp_C must be above absolute zero (−273.15 °C); give it in °C',
   },
   {
     fn: 'ACTCOEF',
     argument: 'temp_C',
     input: 'temperature outside the model range',
-    args: ['Cu2+', 0.1, null, 80, null],
+    args: ['Cu2+', 0.1, null, null, 80],
     expect: V(/temp_C must be between 0 and 60 °C/),
     says: 'temp_C must be between 0 and 60 °C',
   },
@@ -1063,15 +1086,15 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     fn: 'ACTCOEF',
     argument: 'ion_size',
     input: 'negative',
-    args: ['Cu2+', 0.1, 'extended', null, -3],
-    expect: V(/ion_size must be a positive ion size in Å/),
+    args: ['Cu2+', 0.1, 'extended', -3, null],
+    expect: V(/ion_size must be > 0 Å; got -3 Å/),
     says: 'ion_size must be a positive size in Å',
   },
   {
     fn: 'ACTCOEF',
     argument: 'ion_size',
     input: 'text for a number',
-    args: ['Cu2+', 0.1, 'extended', null, 'x'],
+    args: ['Cu2+', 0.1, 'extended', 'x', null],
     expect: V(/ion_size must be a number in Å; got "x"/),
     says: 'ion_size must be a number in Å',
   },
@@ -1159,7 +1182,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     fn: 'ACTIVITY',
     argument: 'values',
     input: 'huge (1e308)',
-    args: ['ZnO2^2-', 1e308, 'davies', 7, 0],
+    args: ['ZnO2^2-', 1e308, 7, 'davies', 0],
     expect: NUM(OVERFLOW),
     says: 'the activity is beyond the number range',
   },
@@ -1167,7 +1190,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     fn: 'ACTIVITY',
     argument: 'model',
     input: 'bad model name',
-    args: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], 'foo', null, null],
+    args: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], null, 'foo', null],
     expect: V(/model "foo" is not an activity model/),
     says: 'not an activity model: lists the models',
   },
@@ -1175,7 +1198,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     fn: 'ACTIVITY',
     argument: 'model',
     input: '0 from an empty cell',
-    args: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], 0, null, null],
+    args: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], null, 0, null],
     expect: { same: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], null, null, null] },
     says: 'as if omitted: davies',
   },
@@ -1183,7 +1206,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     fn: 'ACTIVITY',
     argument: 'ionic_strength',
     input: 'negative',
-    args: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], null, -1, null],
+    args: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], -1, null, null],
     expect: V(/ionic_strength must be ≥ 0 mol\/kg; got -1/),
     says: 'ionic_strength must be ≥ 0 mol/kg',
   },
@@ -1192,8 +1215,8 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     argument: 'temp_C',
     input: 'absurd temperature (−300 °C)',
     args: [[['Cu2+', 'SO4^2-']], [[0.01, 0.01]], null, null, -300],
-    expect: V(/temp_C must be between 0 and 60 °C/),
-    says: 'temp_C must be between 0 and 60 °C',
+    expect: V(ABS_ZERO),
+    says: 'temp_C must be above absolute zero (−273.15 °C); give it in °C',
   },
   {
     fn: 'IONICSTR',
@@ -1255,7 +1278,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'COMBINE',
-    argument: 'electrons',
+    argument: 'n',
     input: 'cases of different lengths',
     args: [[[0.771, -0.447]], [[1]]],
     expect: V(/potentials has 2 values but electrons has 1; give one electron count per step/),
@@ -1263,7 +1286,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'COMBINE',
-    argument: 'electrons',
+    argument: 'n',
     input: 'zero',
     args: [[[0.771, -0.447]], [[1, 0]]],
     expect: V(/electrons \(electrons transferred\) must be a positive whole number; got 0/),
@@ -1271,7 +1294,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'COMBINE',
-    argument: 'electrons',
+    argument: 'n',
     input: 'negative',
     args: [[[0.771, -0.447]], [[1, -2]]],
     expect: V(/electrons \(electrons transferred\) must be a positive whole number; got -2/),
@@ -1279,7 +1302,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'COMBINE',
-    argument: 'electrons',
+    argument: 'n',
     input: 'fraction for a whole number',
     args: [[[0.771, -0.447]], [[1, 1.5]]],
     expect: V(/electrons \(electrons transferred\) must be a whole number; got 1\.5/),
@@ -1287,14 +1310,14 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
   {
     fn: 'COMBINE',
-    argument: 'electrons',
+    argument: 'n',
     input: 'text for a number',
     args: [[[0.771, -0.447]], [[1, 'x']]],
-    expect: V(/electrons \(entry 2\) must be a number; got "x"/),
+    expect: V(/n \(entry 2\) must be a number; got "x"/),
     says: 'names the entry that is not a number',
   },
 
-  // -------------------------------------------------------------------- SOURCE, DIAGRAM
+  // -------------------------------------------------------------------- SOURCE, CELLNOTATION
   ...reactionCases('SOURCE', (r) => [r, null]),
   {
     fn: 'SOURCE',
@@ -1304,9 +1327,9 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     expect: V(/does not balance \(charge: 1 on the left, 0 on the right\)/),
     says: 'what does not balance',
   },
-  ...reactionCases('DIAGRAM', (r) => [r, null, null, null]),
+  ...reactionCases('CELLNOTATION', (r) => [r, null, null, null]),
   {
-    fn: 'DIAGRAM',
+    fn: 'CELLNOTATION',
     argument: 'values',
     input: 'negative',
     args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, -1]], null],
@@ -1314,7 +1337,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     says: 'the activity of the species must be a positive number',
   },
   {
-    fn: 'DIAGRAM',
+    fn: 'CELLNOTATION',
     argument: 'values',
     input: 'zero',
     args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0]], null],
@@ -1322,7 +1345,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     says: 'the activity must be positive; an empty cell reads as 0',
   },
   {
-    fn: 'DIAGRAM',
+    fn: 'CELLNOTATION',
     argument: 'values',
     input: 'text for a number',
     args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 'x']], null],
@@ -1330,7 +1353,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     says: 'the activity of the species must be a positive number',
   },
   {
-    fn: 'DIAGRAM',
+    fn: 'CELLNOTATION',
     argument: 'values',
     input: 'range of the wrong shape',
     args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1]], null],
@@ -1338,7 +1361,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     says: 'names both shapes',
   },
   {
-    fn: 'DIAGRAM',
+    fn: 'CELLNOTATION',
     argument: 'species',
     input: 'species the reaction needs is missing',
     args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+']], [[0.1]], null],
@@ -1346,9 +1369,9 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     says: 'names the species to add',
   },
 
-  // -------------------------------------------------------------------- POTENTIALS
+  // -------------------------------------------------------------------- LISTTABLE
   {
-    fn: 'POTENTIALS',
+    fn: 'LISTTABLE',
     argument: 'filter',
     input: 'filter that matches nothing',
     args: ['Zz'],
@@ -1356,7 +1379,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     says: 'no built-in half-reaction matches the filter',
   },
   {
-    fn: 'POTENTIALS',
+    fn: 'LISTTABLE',
     argument: 'filter',
     input: 'number for text',
     args: [5],
@@ -1364,7 +1387,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     says: 'filter must be text such as "Fe"',
   },
   {
-    fn: 'POTENTIALS',
+    fn: 'LISTTABLE',
     argument: 'filter',
     input: 'NaN',
     args: [NaN],
@@ -1372,7 +1395,7 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
     says: 'filter must be text',
   },
   {
-    fn: 'POTENTIALS',
+    fn: 'LISTTABLE',
     argument: 'filter',
     input: '0 from an empty cell',
     args: [0],
@@ -1483,33 +1506,6 @@ export const BAD_INPUT_CASES: readonly BadInputCase[] = [
   },
 ];
 
-// ---------------------------------------------------------------------------------------
-// The README section
-
-/** Every function of the catalogue in the order of PRODUCT.md. */
-const ORDER = [
-  'POTENTIAL',
-  'STDPOTENTIAL',
-  'QUOTIENT',
-  'LOGQ',
-  'LOGK',
-  'EQCONST',
-  'GIBBS',
-  'ELECTRONS',
-  'BALANCE',
-  'NERNSTSLOPE',
-  'CONCCELL',
-  'VSREF',
-  'ACTCOEF',
-  'ACTIVITY',
-  'IONICSTR',
-  'COMBINE',
-  'SOURCE',
-  'DIAGRAM',
-  'POTENTIALS',
-  'CHECKTABLE',
-];
-
 /** The result column of a case: the error code, or what it returns instead. */
 export function resultLabel(c: BadInputCase): string {
   const x = c.expect;
@@ -1519,72 +1515,68 @@ export function resultLabel(c: BadInputCase): string {
   return 'a number';
 }
 
-/** The heading of the README section. */
-export const CATALOGUE_HEADING = '## Error catalogue';
 
-const cell = (s: string) => s.replace(/\|/g, '\\|');
+// ---------------------------------------------------------------------------------------
+// Cases derived from the specs, by parameter kind
 
-/**
- * The README's "Error catalogue" section, in Markdown, from {@link BAD_INPUT_CASES}:
- * one table per function, one row per argument × input class.
- */
-export function errorCatalogueMarkdown(): string {
-  const out: string[] = [
-    CATALOGUE_HEADING,
-    '',
-    'What each function gives for bad input, argument by argument. Messages travel on #VALUE!',
-    "and #N/A (the spreadsheet shows them in the cell's error tooltip; the headless runner prints",
-    'them); #NUM! means a result outside the number range, #N/A "not in the table". An error in',
-    'one case of a sweep stays in its own cell. This list is generated from the test table',
-    '(`npx ts-node --transpile-only scripts/error-catalogue.ts`), and a test checks that it',
-    'lists every case.',
-    '',
-  ];
-  const fns = [...ORDER, ...new Set(BAD_INPUT_CASES.map((c) => c.fn).filter((f) => !ORDER.includes(f)))];
-  for (const fn of fns) {
-    // in parameter order, then in the order of the table
-    const params = CATALOGUE.find((f) => f.id === fn)?.params.map((p) => p.name) ?? [];
-    const cases = BAD_INPUT_CASES.filter((c) => c.fn === fn)
-      .map((c, i) => ({ c, i }))
-      .sort((a, b) => params.indexOf(a.c.argument) - params.indexOf(b.c.argument) || a.i - b.i)
-      .map((x) => x.c);
-    if (cases.length === 0) continue;
-    out.push(`### ECHEM.${fn}`, '', '| argument | input | result | the message says |', '|---|---|---|---|');
-    const seen = new Set<string>();
-    for (const c of cases) {
-      const row = `| ${cell(c.argument)} | ${cell(c.input)} | ${cell(resultLabel(c))} | ${cell(c.says)} |`;
-      if (seen.has(row)) continue;
-      seen.add(row);
-      out.push(row);
+const esc = (t: string) => t.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+const TEXT_KINDS: readonly KindName[] = ['reaction', 'species', 'choice', 'text', 'reference', 'salt', 'element'];
+
+/** The derived cases of one parameter of one function, from `base` (a valid call). */
+function paramCases(fn: string, params: readonly ParamSpec[], base: readonly Arg[], index: number): BadInputCase[] {
+  const p = params[index]!;
+  const k = kindOf(p);
+  const name = esc(p.name);
+  const at = (v: Arg) => base.map((a, i) => (i === index ? v : a));
+  const out: BadInputCase[] = [];
+  const add = (input: InputClass, args: readonly Arg[], expect: Expectation, says: string) =>
+    out.push({ fn, argument: p.name, input, args, expect, says });
+  if (k.shape === 'cell') {
+    add('error in an input cell', at('#N/A'), NA(new RegExp(`${name} holds the error #N/A from its cell`)), `${p.name} holds #N/A from its cell: fix that cell first`);
+    if (isPerCase(p)) add('range of the wrong shape', at(GRID_2X2), V(new RegExp(`${name} must be one cell or one column with an entry per case; got a 2×2 range`)), 'one cell or one column of cases, not a block');
+    if (!p.optional) add('empty ("")', at(''), V(new RegExp(`${name} is missing: give`)), `${p.name} is missing`);
+    if (TEXT_KINDS.includes(p.kind)) add('number for text', at(5), V(new RegExp(`${name} must be .*; got 5`)), `${p.name} must be text`);
+    if (k.value === 'number') {
+      const unit = unitOf(p);
+      add('text for a number', at('abc'), V(new RegExp(`${name} must be a number${unit ? ` in ${esc(unit)}` : ''}; got "abc"`)), `${p.name} must be a number${unit ? ` in ${unit}` : ''}`);
+      add('NaN', at(NaN), V(new RegExp(`${name} must be a finite`)), `${p.name} must be a finite number`);
+      const d = domainOf(p);
+      if (p.kind === 'temperature') {
+        if (d && d.max === 100) add('temperature that looks like kelvin', at(298.15), V(/temp_C must be between 0 and 100 °C; got 298\.15 °C: it looks like a temperature in kelvin; give it in °C \(298\.15 K is 25 °C\)/), 'looks like kelvin: give it in °C');
+      } else if (d && p.kind !== 'electrons') {
+        if (d.min !== undefined) add('below the domain', at(d.min - 1), V(new RegExp(`${name} must be (between|[≥>])`)), `${p.name} must be ${d.minExclusive ? '>' : '≥'} ${d.min}${unit ? ` ${unit}` : ''}`);
+        if (d.max !== undefined) add('above the domain', at(d.max + 1), V(new RegExp(`${name} must be .*${esc(String(d.max))}`)), `${p.name} must be ≤ ${d.max}${unit ? ` ${unit}` : ''}`);
+      }
+      if (p.kind === 'potential' && !p.allowBeyond10V) add('millivolts typed as volts', at(250), V(/of 250 V is beyond ±10 V: were millivolts typed as volts\? Give 0\.25 for 250 mV/), 'beyond ±10 V: were millivolts typed as volts?');
     }
-    out.push('');
+  } else if (k.shape === 'values') {
+    const headers = base[params.findIndex((q) => q.name === (p.headerParam ?? 'species'))];
+    const first = Array.isArray(headers) ? String(headers[0]?.[0]) : String(headers);
+    const v = base[index];
+    const grid: Arg = Array.isArray(v) ? v.map((row, r) => row.map((c, j) => (r === 0 && j === 0 ? '#N/A' : c))) : '#N/A';
+    add('error in an input cell', at(grid), NA(new RegExp(`${name} \\(${esc(first)}\\) holds the error #N/A from its cell`)), `${p.name} holds #N/A in a cell: that case gives #N/A`);
+  } else if (k.shape === 'list') {
+    add('error in an input cell', at([['#N/A', 1]]), NA(new RegExp(`${name} \\(entry 1\\) holds the error #N/A from its cell`)), `an entry of ${p.name} holds #N/A`);
+  } else if (k.shape === 'header') {
+    add('error in an input cell', at('#N/A'), NA(new RegExp(`${name} entry 1 holds the error #N/A from its cell`)), `a name in ${p.name} holds #N/A`);
   }
-  return out.join('\n');
+  return out;
 }
 
-/** Rows of the README's error catalogue: function, argument, input class and result, as written. */
-export function readCatalogueRows(
-  readme: string,
-): { fn: string; argument: string; input: string; result: string }[] {
-  const start = readme.indexOf(`\n${CATALOGUE_HEADING}\n`);
-  if (start < 0) return [];
-  const rest = readme.slice(start + CATALOGUE_HEADING.length + 2);
-  const end = rest.search(/\n## /);
-  const section = end < 0 ? rest : rest.slice(0, end);
-  const rows: { fn: string; argument: string; input: string; result: string }[] = [];
-  let fn = '';
-  for (const line of section.split('\n')) {
-    const h = /^### ECHEM\.([A-Z]+)\s*$/.exec(line);
-    if (h) {
-      fn = h[1]!;
-      continue;
-    }
-    if (!line.startsWith('|') || /^\|\s*(argument|---)/.test(line)) continue;
-    const cells = line
-      .slice(1, -1)
-      .split(/(?<!\\)\|/)
-      .map((s) => s.trim().replace(/\\\|/g, '|'));
-    if (cells.length >= 3) rows.push({ fn, argument: cells[0]!, input: cells[1]!, result: cells[2]! });
-  }
-  return rows;
+function derivedCases(): BadInputCase[] {
+  return CATALOGUE.flatMap((f) => {
+    const ex = f.examples[0];
+    if (!ex) return [];
+    const base = f.params.map((_, i) => (i < ex.args.length ? ex.args[i] : null));
+    return f.params.flatMap((_, i) => paramCases(f.id, f.params, base, i));
+  });
 }
+
+const key = (c: BadInputCase) => `${c.fn}|${c.argument}|${c.input}`;
+const HAND_KEYS = new Set(HAND_CASES.map(key));
+
+/** Every case: the derived ones that no hand case replaces, then the hand cases. */
+export const BAD_INPUT_CASES: readonly BadInputCase[] = [
+  ...derivedCases().filter((c) => !HAND_KEYS.has(key(c))),
+  ...HAND_CASES,
+];

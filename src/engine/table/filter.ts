@@ -1,6 +1,6 @@
 /**
  * Picking rows of the built-in potentials table by what a user types, shared by
- * POTENTIALS([filter]) and the task pane's potentials sheet:
+ * LISTTABLE([filter]) and the task pane's potentials sheet:
  * - an element symbol alone ("Fe", "Cu", "O") picks every row with a species containing
  *   that element;
  * - a species ("Cu2+", "Fe3+", "MnO4-", "Cu²⁺") picks the rows where that species (same

@@ -20,6 +20,7 @@ import {
 import { type Resolved, type ResolvedHalf, standardPotentialV } from '../table/resolve';
 import { slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
 import { pKw } from './water';
+import { splitSpeciesHeader } from '../notation/speciesHeader';
 
 /** One species' place in the Nernst equation. */
 export interface NernstTerm {
@@ -112,18 +113,13 @@ const headerCache = new Map<string, SpeciesHeader>();
 export function parseSpeciesHeader(text: string): SpeciesHeader {
   const cached = headerCache.get(text);
   if (cached) return cached;
-  const t = text.trim();
+  // the one header grammar: src/engine/notation/speciesHeader.ts
+  const { side, isPH, body } = splitSpeciesHeader(text);
   let h: SpeciesHeader;
-  if (/^ph$/i.test(t)) h = { text, kind: 'pH', side: null, key: 'H|1', species: null };
+  if (isPH) h = { text, kind: 'pH', side, key: 'H|1', species: null };
   else {
-    const m = /^(left|right|l|r)\s*:\s*(.*)$/i.exec(t);
-    const side = m ? (m[1]!.toLowerCase().startsWith('l') ? 'left' : 'right') : null;
-    const body = m ? m[2]! : t;
-    if (/^ph$/i.test(body)) h = { text, kind: 'pH', side, key: 'H|1', species: null };
-    else {
-      const s = parseSpecies(body, 'species');
-      h = { text, kind: 'species', side, key: speciesKey(s), species: s };
-    }
+    const s = parseSpecies(body, 'species');
+    h = { text, kind: 'species', side, key: speciesKey(s), species: s };
   }
   if (headerCache.size > 10000) headerCache.clear();
   headerCache.set(text, h);

@@ -1,0 +1,243 @@
+/**
+ * The Nernst family: electrode potentials and cell EMFs, standard potentials, the reaction
+ * quotient, and the cell notation of a reaction at given activities (docs/functions/).
+ */
+import {
+  STANDARD_TEMP_C,
+  bindSpecies,
+  compiledReaction,
+  describeDiagram,
+  standardPotentialV,
+  sweepCases,
+  sweepToColumn,
+  type Binding,
+} from '../../engine';
+import type { Arg, Result, ResultCell, Scalar } from '../cellTypes';
+import { asGrid } from '../args';
+import { cellError, toCellError } from '../errorCodes';
+import { finiteCell } from '../spec/reader';
+import { readTempC } from '../spec/kinds';
+import { ACTIVITIES, OPTIONAL_SPECIES_HEADER, REACTION, SPECIES_HEADER, TABLE, TEMP_C } from '../spec/params';
+import type { CallArgs, FunctionSpec } from '../spec/types';
+
+const DERIVED = 'derived by hand: E = E° − (RT ln10/nF)·log10 Q with the SI 2019 exact R and F';
+const CU_E0 = 'E°(Cu2+/Cu) = 0.337 V, OpenStax Chemistry 2e, Appendix L';
+const ZN_E0 = 'E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
+
+type Quantity = 'potential' | 'log10Q';
+
+/** The last prepared single-reaction call: repeated calls skip compiling and binding. */
+let lastPrepared: { reaction: string; species: Scalar[]; table: Arg; binding: Binding } | null = null;
+
+function scalarOf(a: Arg): Scalar | undefined {
+  if (!Array.isArray(a)) return a;
+  return a.length === 1 && Array.isArray(a[0]) && a[0].length === 1 ? (a[0][0] as Scalar) : undefined;
+}
+
+function sameSpeciesRow(a: Scalar[], species: Arg): boolean {
+  if (!Array.isArray(species) || species.length !== 1) return false;
+  const row = species[0];
+  if (!Array.isArray(row) || row.length !== a.length) return false;
+  for (let i = 0; i < a.length; i++) if (row[i] !== a[i]) return false;
+  return true;
+}
+
+/**
+ * The fast path for the common sweep (one reaction text, the same species row and table as
+ * the previous call, one temperature): the same computation without re-reading arguments.
+ * Returns null where the call does not have that shape.
+ */
+function fastNernst(args: readonly Arg[], quantity: Quantity): Result | null {
+  const [reaction, species, values] = args;
+  const temp = quantity === 'potential' ? args[3] : null;
+  const table = quantity === 'potential' ? args[4] : args[3];
+  const p = lastPrepared;
+  if (!p || !Array.isArray(values) || values.length === 0) return null;
+  if (scalarOf(reaction) !== p.reaction || table !== p.table || !sameSpeciesRow(p.species, species)) return null;
+  const t = scalarOf(temp);
+  if (t === undefined || (t !== null && typeof t !== 'number')) return null;
+  const first = values[0];
+  if (!Array.isArray(first) || first.length !== p.species.length || !Array.isArray(values[values.length - 1]))
+    return null;
+  // the one temperature check, also on the fast path
+  const tempC = readTempC(t, TEMP_C);
+  return sweepToColumn<ResultCell>(p.binding, values as Scalar[][], tempC, quantity, toCellError);
+}
+
+function toColumn(res: { values: Float64Array; errors: ReadonlyMap<number, unknown> }, n: number): Result {
+  const out: Result = new Array<ResultCell[]>(n);
+  for (let i = 0; i < n; i++) {
+    out[i] = [res.errors.has(i) ? toCellError(res.errors.get(i)) : finiteCell(res.values[i]!, 'E')];
+  }
+  return out;
+}
+
+/** The Nernst equation (or log10 Q) over the cases of a call. */
+function nernstCases(call: CallArgs, quantity: Quantity): Result {
+  const cells = call.table();
+  const headers = call.headers();
+  const rows = call.rows();
+  const n = call.cases;
+  const valueRows: readonly Scalar[][] = rows ?? [[]];
+  const reactions = call.column('reaction')!;
+  const tempOf = (i: number) => (quantity === 'potential' ? call.at(i).num('temp_C') : STANDARD_TEMP_C);
+  if (reactions.length === 1) {
+    const text = call.at(0).text('reaction');
+    const b = bindSpecies(compiledReaction(text, cells), headers);
+    const sg = asGrid(call.raw('species'));
+    const reaction = call.raw('reaction');
+    lastPrepared =
+      sg && sg.length === 1 && typeof reaction === 'string' && text === reaction
+        ? { reaction, species: sg[0]!.slice(), table: call.raw('table'), binding: b }
+        : null;
+    const temps = quantity === 'potential' ? call.column('temp_C') : null;
+    if (!temps || temps.length === 1) return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
+    return toColumn(sweepCases(b, valueRows, tempOf, quantity, n), n);
+  }
+  const out: Result = new Array<ResultCell[]>(n);
+  let lastText: string | null = null;
+  let lastBinding: Binding | null = null;
+  for (let i = 0; i < n; i++) {
+    try {
+      const text = call.at(i).text('reaction');
+      if (text !== lastText) {
+        lastBinding = bindSpecies(compiledReaction(text, cells), headers);
+        lastText = text;
+      }
+      const row = valueRows.length === 1 ? valueRows[0]! : valueRows[i]!;
+      const res = sweepCases(lastBinding!, [row], tempOf(i), quantity, 1);
+      out[i] = [res.errors.has(0) ? toCellError(res.errors.get(0)) : finiteCell(res.values[0]!, 'E')];
+    } catch (e) {
+      out[i] = [toCellError(e)];
+    }
+  }
+  return out;
+}
+
+const POTENTIAL: FunctionSpec = {
+  id: 'POTENTIAL',
+  family: 'Nernst',
+  summary:
+    'Electrode potential of a half-reaction, or EMF of a cell or reaction, in V vs SHE, by the Nernst equation at the activities and temperature given.',
+  returns: 'E in V vs SHE, one row per case',
+  params: [REACTION, OPTIONAL_SPECIES_HEADER, { ...ACTIVITIES, optional: true }, TEMP_C, TABLE],
+  result: { kind: 'perCase' },
+  notes: [
+    'E = E° − (RT ln10 / nF)·log10 Q. Pure solids and liquids and water are left out of Q; activities written inline in a cell diagram are used.',
+    'A cell EMF is E(right) − E(left) for the cell as written; a negative value means the written reaction is not spontaneous.',
+  ],
+  examples: [
+    { args: ['Cu2+/Cu', 'Cu2+', 0.01], expected: 0.2778407, tolerance: 1e-6, source: `${CU_E0}; ${DERIVED}` },
+    {
+      args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
+      expected: 1.0692203,
+      tolerance: 1e-6,
+      source: `${CU_E0}; ${ZN_E0}; ${DERIVED}`,
+    },
+    {
+      args: ['O2(g) + 4 H+ + 4 e- -> 2 H2O', [['O2', 'pH']], [[0.21, 7]]],
+      expected: 0.8048603,
+      tolerance: 1e-6,
+      source: `E°(O2/H2O) = 1.229 V, OpenStax Chemistry 2e, Appendix L; ${DERIVED}`,
+    },
+  ],
+  run: (call) => fastNernst(argsOf(call, 5), 'potential') ?? nernstCases(call, 'potential'),
+};
+
+function argsOf(call: CallArgs, n: number): Arg[] {
+  const names = ['reaction', 'species', 'values', n === 5 ? 'temp_C' : 'table', 'table'].slice(0, n);
+  return names.map((name) => call.raw(name));
+}
+
+const STDPOTENTIAL: FunctionSpec = {
+  id: 'STDPOTENTIAL',
+  family: 'Nernst',
+  summary:
+    "Standard potential E° in V vs SHE of a half-reaction, couple or cell at temp_C (with the table's dE°/dT; where it has none, E° at 25 °C).",
+  returns: 'E° in V vs SHE, one row per case',
+  params: [REACTION, TEMP_C, TABLE],
+  result: { kind: 'perCase' },
+  examples: [
+    { args: ['Cu2+/Cu'], expected: 0.337, tolerance: 1e-12, source: CU_E0 },
+    { args: ['Zn(s) | Zn2+(aq) || Cu2+(aq) | Cu(s)'], expected: 1.0988, tolerance: 1e-12, source: `${CU_E0}; ${ZN_E0}` },
+  ],
+  perCase: (a, call) => standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.num('temp_C')),
+};
+
+const QUOTIENT: FunctionSpec = {
+  id: 'QUOTIENT',
+  family: 'Nernst',
+  summary:
+    "Reaction quotient Q from the activities given (pure solids, liquids and water left out); #NUM! where Q leaves the number range (use LOGQ).",
+  returns: 'Q (dimensionless), one row per case',
+  params: [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE],
+  result: { kind: 'perCase' },
+  examples: [
+    {
+      args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
+      expected: 10,
+      tolerance: 1e-12,
+      source: 'derived by hand: Q = a(Zn2+)/a(Cu2+) = 0.1/0.01',
+    },
+  ],
+  run: (call) =>
+    nernstCases(call, 'log10Q').map((row) =>
+      row.map((c) => {
+        if (typeof c !== 'number') return c;
+        if (c > 308.25 || c < -307.65) {
+          return cellError(
+            '#NUM!',
+            `Q = 10^${c.toFixed(4)} is outside the spreadsheet's number range; use LOGQ, which gives log10 Q = ${c.toFixed(6)}.`,
+          );
+        }
+        return Math.pow(10, c);
+      }),
+    ),
+};
+
+const LOGQ: FunctionSpec = {
+  id: 'LOGQ',
+  family: 'Nernst',
+  summary: 'log10 of the reaction quotient Q, computed in log space so that it never overflows.',
+  returns: 'log10 Q, one row per case',
+  params: [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE],
+  result: { kind: 'perCase' },
+  examples: [
+    {
+      args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
+      expected: 1,
+      tolerance: 1e-12,
+      source: 'derived by hand: log10(0.1/0.01)',
+    },
+  ],
+  run: (call) => fastNernst(argsOf(call, 4), 'log10Q') ?? nernstCases(call, 'log10Q'),
+};
+
+const CELLNOTATION: FunctionSpec = {
+  id: 'CELLNOTATION',
+  family: 'Nernst',
+  summary: 'The IUPAC cell notation of a reaction or cell, with the activities given written inline.',
+  returns: 'Cell notation text, one row per case',
+  params: [REACTION, OPTIONAL_SPECIES_HEADER, { ...ACTIVITIES, optional: true }, TABLE],
+  result: { kind: 'perCase' },
+  examples: [
+    {
+      args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
+      expected: 'Zn(s) | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu(s)',
+      source: 'IUPAC cell notation (common practice): anode left, single bar a phase boundary, double bar the salt bridge',
+    },
+  ],
+  perCase: (a, call) => {
+    const form = compiledReaction(a.text('reaction'), call.table());
+    const b = bindSpecies(form, call.headers());
+    const row = a.row();
+    if (row)
+      sweepCases(b, [row], STANDARD_TEMP_C, 'log10Q', 1).errors.forEach((e) => {
+        throw e;
+      });
+    return describeDiagram(form.resolved, b, row);
+  },
+};
+
+/** The Nernst family, in docs order. */
+export const NERNST_SPECS: readonly FunctionSpec[] = [POTENTIAL, STDPOTENTIAL, QUOTIENT, LOGQ, CELLNOTATION];
