@@ -8,3 +8,4 @@ export { EQUILIBRIUM_SPECS } from './equilibrium';
 export { ACTIVITY_SPECS } from './activity';
 export { REFERENCE_SPECS } from './references';
 export { TABLE_SPECS } from './table';
+export { THERMO_SPECS } from './thermo';
