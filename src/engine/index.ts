@@ -152,3 +152,4 @@ export {
   splitSpeciesHeader,
   canonicalSpeciesHeader,
 } from './notation/speciesHeader';
+export { tableCycleProblems, CYCLE_TOLERANCE_V } from './table/cycles';

@@ -313,7 +313,7 @@ export function LISTTABLE(filter?: any[][]): any[][] {
 }
 
 /**
- * The problems in your potentials table (unbalanced rows, bad numbers, duplicates), one per row, or OK. Example: =ECHEM.CHECKTABLE({"Cu2+ + 2 e- -> Cu",0.337}) gives OK.
+ * The problems in your potentials table (unbalanced rows, bad numbers, duplicates, thermodynamic cycles that disagree by more than 2 mV), one per row, or OK. Example: =ECHEM.CHECKTABLE({"Cu2+ + 2 e- -> Cu",0.337}) gives OK.
  * @customfunction CHECKTABLE
  * @helpurl https://localhost:3000/taskpane.html#ref-checktable
  * @param table Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source
