@@ -69,10 +69,10 @@ export const BUILTIN_POTENTIALS: readonly BuiltinPotentialRow[] = [
   { halfReaction: 'Be2+ + 2 e- -> Be', e0V: -1.9678, dE0dTmVperK: 0.044, published: { e0V: -1.847, source: OSX }, source: `${LAYER}); ${OSX} prints -1.847 V` },
 
   // Nitrogen
-  { halfReaction: 'NO3- + H2O + 2 e- -> NO2- + 2 OH-', e0V: -0.0088, dE0dTmVperK: -1.272, published: { e0V: 0.1, source: OSX }, source: `${LAYER}); ${OSX} prints 0.1 V` },
-  { halfReaction: 'NO3- + 2 H+ + e- -> NO2(g) + H2O', e0V: 0.7729, dE0dTmVperK: 1.018, published: { e0V: 0.803, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.803 V` },
-  { halfReaction: 'NO3- + 3 H+ + 2 e- -> HNO2 + H2O', e0V: 0.9145, dE0dTmVperK: -0.371, published: { e0V: 0.92, source: OSX }, source: `${LAYER}); ${OSX} prints 0.92 V` },
-  { halfReaction: 'NO3- + 4 H+ + 3 e- -> NO(g) + 2 H2O', e0V: 0.9551, dE0dTmVperK: 0.028, published: { e0V: 0.957, source: OSX }, source: `${LAYER}); ${OSX} prints 0.957 V` },
+  { halfReaction: 'NO3- + H2O + 2 e- -> NO2- + 2 OH-', e0V: 0.0042, dE0dTmVperK: -1.272, published: { e0V: 0.1, source: OSX }, source: `${LAYER}); ${OSX} prints 0.1 V` },
+  { halfReaction: 'NO3- + 2 H+ + e- -> NO2(g) + H2O', e0V: 0.7989, dE0dTmVperK: 1.018, published: { e0V: 0.803, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.803 V` },
+  { halfReaction: 'NO3- + 3 H+ + 2 e- -> HNO2 + H2O', e0V: 0.9275, dE0dTmVperK: -0.371, published: { e0V: 0.92, source: OSX }, source: `${LAYER}); ${OSX} prints 0.92 V` },
+  { halfReaction: 'NO3- + 4 H+ + 3 e- -> NO(g) + 2 H2O', e0V: 0.9638, dE0dTmVperK: 0.028, published: { e0V: 0.957, source: OSX }, source: `${LAYER}); ${OSX} prints 0.957 V` },
   { halfReaction: 'HNO2 + H+ + e- -> NO(g) + H2O', e0V: 1.0362, dE0dTmVperK: 0.826, published: { e0V: 0.983, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.983 V` },
 
   // Oxygen (water, peroxide, ozone)

@@ -120,7 +120,7 @@ const TABULATED: readonly SpeciesThermoRecord[] = [
   fromPotential('Al(OH)3(s)', 3 * F * -2.31 + 3 * G_OH, 'Al(OH)3(s) + 3 e- -> Al + 3 OH-) = −2.31 V (CRC Handbook, 92nd ed.'),
   // nitrogen
   ...nbs([
-    ['NO3-(aq)', -111.25, -205.0, 146.4, -86.6],
+    ['NO3-(aq)', -108.74, -205.0, 146.4, -86.6],
     ['NO2-(aq)', -32.2, -104.6, 123.0, -97.5],
     ['NO2(g)', 51.31, 33.18, 240.06, 37.20],
     ['HNO2(aq)', -50.6, -119.2, 135.6, null],
@@ -157,7 +157,7 @@ const TABULATED: readonly SpeciesThermoRecord[] = [
     ['H2SO3(aq)', -537.81, -608.81, 232.2, null],
     ['SO4^2-(aq)', -744.53, -909.27, 20.1, -293],
     ['S2O3^2-(aq)', -522.5, -652.3, 67, null],
-    ['S4O6^2-(aq)', -1022.2, -1224.2, 257.3, null],
+    ['S4O6^2-(aq)', -1022.2, null, 257.3, null],
     ['S2O8^2-(aq)', -1114.9, -1344.7, 244.3, null],
   ]),
   // titanium, vanadium, chromium: the NBS tables give no ΔfG° for these ions; from E°
@@ -259,7 +259,7 @@ const TABULATED: readonly SpeciesThermoRecord[] = [
     ['Pd(s)', 0, 0, 37.57, 25.98],
     ['Pd2+(aq)', 176.5, 149.0, -184, null],
     ['Pt(s)', 0, 0, 41.63, 25.86],
-    ['[PtCl4]2-(aq)', -368.6, -499.2, 175, null],
+    ['[PtCl4]2-(aq)', -368.6, null, 175, null],
     ['Au(s)', 0, 0, 47.40, 25.42],
     ['[AuCl4]-(aq)', -235.14, -322.2, 266.9, null],
     ['La(s)', 0, 0, 56.9, 27.11],
