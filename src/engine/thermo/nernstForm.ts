@@ -212,7 +212,8 @@ function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Bind
       parsed.findIndex(
         (h) =>
           h.kind === kind &&
-          h.key === t.key &&
+          // a pH header serves H+ and, through Kw, OH-
+          (kind === 'pH' || h.key === t.key) &&
           h.side === side &&
           // a header with a written phase binds only to that phase (Cl2(aq) is not Cl2(g))
           !(h.species?.phase && termPhase && h.species.phase !== termPhase),
