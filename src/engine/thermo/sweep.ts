@@ -6,7 +6,7 @@
 import { EngineError } from '../errors';
 import { ZERO_CELSIUS_K, MAX_TEMP_C, slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
 import { type Resolved, halfE0V25, halfSlopeMvPerK, halfCpModel } from '../table/resolve';
-import { checkSpeciesTemperature, cpFactorK } from './reactionThermo';
+import { checkSpeciesTemperature, cpFactorK, SPECIES_DATA_RANGE_C } from './reactionThermo';
 import { pKw } from './water';
 import { type Binding, weightedLogActivity } from './nernstForm';
 
@@ -134,11 +134,12 @@ export function sweepCases(
         const t = (tempC as (i: number) => number)(i);
         const tK = t + ZERO_CELSIUS_K;
         if (!(tK > 0) || !(t <= MAX_TEMP_C)) kelvinFromCelsius(t);
-        const e0 =
-          lin.speciesRange || lin.cpVPerK !== 0
-            ? standardPotentialAt(lin, t)
-            : lin.e0V25 + lin.slopeVPerK * (t - 25);
-        x = e0 - slopePerElectronAtKelvin(tK) * (sum + ohOffset(b, t));
+        let e0 = lin.e0V25 + lin.slopeVPerK * (t - 25);
+        if (lin.speciesRange) {
+          if (!(t >= SPECIES_DATA_RANGE_C.min && t <= SPECIES_DATA_RANGE_C.max)) checkSpeciesTemperature(t);
+          if (lin.cpVPerK !== 0) e0 += lin.cpVPerK * cpFactorK(tK);
+        }
+        x = e0 - slopePerElectronAtKelvin(tK) * (b.ohFromPH === 0 ? sum : sum + ohOffset(b, t));
       }
       if (!Number.isFinite(x))
         throw new EngineError('range', 'The result is beyond the number range; check the values.', 'values');
