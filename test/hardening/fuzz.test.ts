@@ -463,6 +463,7 @@ const PLAUSIBLE: Record<string, fc.Arbitrary<Arg>> = {
   ) as fc.Arbitrary<Arg>,
   electrons: fc.oneof(rowOf(fc.integer({ min: 1, max: 6 })), rowOf(anyScalar)) as fc.Arbitrary<Arg>,
   filter: fc.oneof(speciesName, fc.constantFrom('Fe', 'Cu2+', 'Ag', ''), mutatedText) as fc.Arbitrary<Arg>,
+  quantity: cellOrColumn(fc.oneof(fc.constantFrom('G', 'H', 'S', 'Cp', 'source', '', null), mutatedText)),
 };
 
 /** Arguments for a function: each parameter plausible (3 in 4) or anything, sometimes one too many. */
