@@ -56,219 +56,228 @@ const CRC92_MEMORY = `${CRC92} (from memory)`;
 const LAYER = 'E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory';
 
 // prettier-ignore
-export const BUILTIN_POTENTIALS: readonly BuiltinPotentialRow[] = [
+const ROWS: readonly Omit<BuiltinPotentialRow, 'source'>[] = [
   // Hydrogen
-  { halfReaction: 'H2(g) + 2 e- -> 2 H-', e0V: -2.23, dE0dTmVperK: null, published: { e0V: -2.23, source: OSX }, source: `${LAYER}; ΔfG° of H-(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints -2.23 V` },
-  { halfReaction: '2 H2O + 2 e- -> H2(g) + 2 OH-', e0V: -0.8279, dE0dTmVperK: -0.836, published: { e0V: -0.8277, source: OSX }, source: `${LAYER}); ${OSX} prints -0.8277 V` },
-  { halfReaction: '2 H+ + 2 e- -> H2(g)', e0V: 0, dE0dTmVperK: 0, published: { e0V: 0, source: OSX }, source: `${LAYER}); ${OSX} prints 0 V` },
+  { halfReaction: 'H2(g) + 2 e- -> 2 H-', e0V: -2.23, dE0dTmVperK: null, published: { e0V: -2.23, source: OSX } },
+  { halfReaction: '2 H2O + 2 e- -> H2(g) + 2 OH-', e0V: -0.8279, dE0dTmVperK: -0.836, published: { e0V: -0.8277, source: OSX } },
+  { halfReaction: '2 H+ + 2 e- -> H2(g)', e0V: 0, dE0dTmVperK: 0, published: { e0V: 0, source: OSX } },
 
   // Lithium
-  { halfReaction: 'Li+ + e- -> Li', e0V: -3.04, dE0dTmVperK: -0.514, published: { e0V: -3.04, source: OSX }, source: `${LAYER}; ΔfG° of Li+(aq) from a published E°); ${OSX} prints -3.04 V` },
+  { halfReaction: 'Li+ + e- -> Li', e0V: -3.04, dE0dTmVperK: -0.514, published: { e0V: -3.04, source: OSX } },
 
   // Beryllium
-  { halfReaction: 'Be2+ + 2 e- -> Be', e0V: -1.9678, dE0dTmVperK: 0.044, published: { e0V: -1.847, source: OSX }, source: `${LAYER}); ${OSX} prints -1.847 V` },
+  { halfReaction: 'Be2+ + 2 e- -> Be', e0V: -1.9678, dE0dTmVperK: 0.044, published: { e0V: -1.847, source: OSX } },
 
   // Nitrogen
-  { halfReaction: 'NO3- + H2O + 2 e- -> NO2- + 2 OH-', e0V: 0.0042, dE0dTmVperK: -1.272, published: { e0V: 0.1, source: OSX }, source: `${LAYER}); ${OSX} prints 0.1 V` },
-  { halfReaction: 'NO3- + 2 H+ + e- -> NO2(g) + H2O', e0V: 0.7989, dE0dTmVperK: 1.018, published: { e0V: 0.803, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.803 V` },
-  { halfReaction: 'NO3- + 3 H+ + 2 e- -> HNO2 + H2O', e0V: 0.9275, dE0dTmVperK: -0.371, published: { e0V: 0.92, source: OSX }, source: `${LAYER}); ${OSX} prints 0.92 V` },
-  { halfReaction: 'NO3- + 4 H+ + 3 e- -> NO(g) + 2 H2O', e0V: 0.9638, dE0dTmVperK: 0.028, published: { e0V: 0.957, source: OSX }, source: `${LAYER}); ${OSX} prints 0.957 V` },
-  { halfReaction: 'HNO2 + H+ + e- -> NO(g) + H2O', e0V: 1.0362, dE0dTmVperK: 0.826, published: { e0V: 0.983, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.983 V` },
+  { halfReaction: 'NO3- + H2O + 2 e- -> NO2- + 2 OH-', e0V: 0.0042, dE0dTmVperK: -1.272, published: { e0V: 0.1, source: OSX } },
+  { halfReaction: 'NO3- + 2 H+ + e- -> NO2(g) + H2O', e0V: 0.7989, dE0dTmVperK: 1.018, published: { e0V: 0.803, source: CRC92_MEMORY } },
+  { halfReaction: 'NO3- + 3 H+ + 2 e- -> HNO2 + H2O', e0V: 0.9275, dE0dTmVperK: -0.371, published: { e0V: 0.92, source: OSX } },
+  { halfReaction: 'NO3- + 4 H+ + 3 e- -> NO(g) + 2 H2O', e0V: 0.9638, dE0dTmVperK: 0.028, published: { e0V: 0.957, source: OSX } },
+  { halfReaction: 'HNO2 + H+ + e- -> NO(g) + H2O', e0V: 1.0362, dE0dTmVperK: 0.826, published: { e0V: 0.983, source: CRC92_MEMORY } },
 
   // Oxygen (water, peroxide, ozone)
-  { halfReaction: 'O2(g) + H2O + 2 e- -> HO2- + OH-', e0V: -0.0652, dE0dTmVperK: -2.035, published: { e0V: -0.076, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.076 V` },
-  { halfReaction: 'O2(g) + 2 H2O + 4 e- -> 4 OH-', e0V: 0.4009, dE0dTmVperK: -1.682, published: { e0V: 0.401, source: OSX }, source: `${LAYER}); ${OSX} prints 0.401 V` },
-  { halfReaction: 'O2(g) + 2 H+ + 2 e- -> H2O2', e0V: 0.6946, dE0dTmVperK: -0.995, published: { e0V: 0.695, source: OSX }, source: `${LAYER}); ${OSX} prints 0.695 V` },
-  { halfReaction: 'HO2- + H2O + 2 e- -> 3 OH-', e0V: 0.867, dE0dTmVperK: -1.33, published: { e0V: 0.878, source: OSX }, source: `${LAYER}); ${OSX} prints 0.878 V` },
-  { halfReaction: 'O2(g) + 4 H+ + 4 e- -> 2 H2O', e0V: 1.2288, dE0dTmVperK: -0.846, published: { e0V: 1.229, source: OSX }, source: `${LAYER}); ${OSX} prints 1.229 V` },
-  { halfReaction: 'H2O2 + 2 H+ + 2 e- -> 2 H2O', e0V: 1.7631, dE0dTmVperK: -0.698, published: { e0V: 1.776, source: OSX }, source: `${LAYER}); ${OSX} prints 1.776 V` },
-  { halfReaction: 'O3(g) + 2 H+ + 2 e- -> O2(g) + H2O', e0V: 2.0746, dE0dTmVperK: -0.49, published: { e0V: 2.076, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 2.076 V` },
+  { halfReaction: 'O2(g) + H2O + 2 e- -> HO2- + OH-', e0V: -0.0652, dE0dTmVperK: -2.035, published: { e0V: -0.076, source: CRC92_MEMORY } },
+  { halfReaction: 'O2(g) + 2 H2O + 4 e- -> 4 OH-', e0V: 0.4009, dE0dTmVperK: -1.682, published: { e0V: 0.401, source: OSX } },
+  { halfReaction: 'O2(g) + 2 H+ + 2 e- -> H2O2', e0V: 0.6946, dE0dTmVperK: -0.995, published: { e0V: 0.695, source: OSX } },
+  { halfReaction: 'HO2- + H2O + 2 e- -> 3 OH-', e0V: 0.867, dE0dTmVperK: -1.33, published: { e0V: 0.878, source: OSX } },
+  { halfReaction: 'O2(g) + 4 H+ + 4 e- -> 2 H2O', e0V: 1.2288, dE0dTmVperK: -0.846, published: { e0V: 1.229, source: OSX } },
+  { halfReaction: 'H2O2 + 2 H+ + 2 e- -> 2 H2O', e0V: 1.7631, dE0dTmVperK: -0.698, published: { e0V: 1.776, source: OSX } },
+  { halfReaction: 'O3(g) + 2 H+ + 2 e- -> O2(g) + H2O', e0V: 2.0746, dE0dTmVperK: -0.49, published: { e0V: 2.076, source: CRC92_MEMORY } },
 
   // Fluorine
-  { halfReaction: 'F2(g) + 2 e- -> 2 F-', e0V: 2.8895, dE0dTmVperK: -1.871, published: { e0V: 2.866, source: OSX }, source: `${LAYER}); ${OSX} prints 2.866 V` },
-  { halfReaction: 'F2(g) + 2 H+ + 2 e- -> 2 HF(aq)', e0V: 3.0763, dE0dTmVperK: -0.809, published: { e0V: 3.053, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 3.053 V` },
+  { halfReaction: 'F2(g) + 2 e- -> 2 F-', e0V: 2.8895, dE0dTmVperK: -1.871, published: { e0V: 2.866, source: OSX } },
+  { halfReaction: 'F2(g) + 2 H+ + 2 e- -> 2 HF(aq)', e0V: 3.0763, dE0dTmVperK: -0.809, published: { e0V: 3.053, source: CRC92_MEMORY } },
 
   // Sodium
-  { halfReaction: 'Na+ + e- -> Na', e0V: -2.71, dE0dTmVperK: -0.758, published: { e0V: -2.71, source: OSX }, source: `${LAYER}; ΔfG° of Na+(aq) from a published E°); ${OSX} prints -2.71 V` },
+  { halfReaction: 'Na+ + e- -> Na', e0V: -2.71, dE0dTmVperK: -0.758, published: { e0V: -2.71, source: OSX } },
 
   // Magnesium
-  { halfReaction: 'Mg(OH)2(s) + 2 e- -> Mg + 2 OH-', e0V: -2.6896, dE0dTmVperK: -0.947, published: { e0V: -2.69, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -2.69 V` },
-  { halfReaction: 'Mg2+ + 2 e- -> Mg', e0V: -2.372, dE0dTmVperK: 0.208, published: { e0V: -2.372, source: OSX }, source: `${LAYER}; ΔfG° of Mg2+(aq) from a published E°); ${OSX} prints -2.372 V` },
+  { halfReaction: 'Mg(OH)2(s) + 2 e- -> Mg + 2 OH-', e0V: -2.6896, dE0dTmVperK: -0.947, published: { e0V: -2.69, source: CRC92_MEMORY } },
+  { halfReaction: 'Mg2+ + 2 e- -> Mg', e0V: -2.372, dE0dTmVperK: 0.208, published: { e0V: -2.372, source: OSX } },
 
   // Aluminium
-  { halfReaction: 'Al(OH)3(s) + 3 e- -> Al + 3 OH-', e0V: -2.31, dE0dTmVperK: null, published: { e0V: -2.31, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Al(OH)3(s) from a published E°); E° kept at its 25 °C value at other temperatures; ${CRC92_MEMORY} prints -2.31 V` },
-  { halfReaction: 'Al3+ + 3 e- -> Al', e0V: -1.662, dE0dTmVperK: 0.532, published: { e0V: -1.662, source: OSX }, source: `${LAYER}; ΔfG° of Al3+(aq) from a published E°); ${OSX} prints -1.662 V` },
+  { halfReaction: 'Al(OH)3(s) + 3 e- -> Al + 3 OH-', e0V: -2.31, dE0dTmVperK: null, published: { e0V: -2.31, source: CRC92_MEMORY } },
+  { halfReaction: 'Al3+ + 3 e- -> Al', e0V: -1.662, dE0dTmVperK: 0.532, published: { e0V: -1.662, source: OSX } },
 
   // Sulfur
-  { halfReaction: 'SO4^2- + H2O + 2 e- -> SO3^2- + 2 OH-', e0V: -0.9363, dE0dTmVperK: -1.405, published: { e0V: -0.93, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.93 V` },
-  { halfReaction: 'S(s) + 2 e- -> S2-', e0V: -0.4446, dE0dTmVperK: -0.918, published: { e0V: -0.47627, source: OSX }, source: `${LAYER}); ${OSX} prints -0.47627 V` },
-  { halfReaction: 'S4O6^2- + 2 e- -> 2 S2O3^2-', e0V: 0.1182, dE0dTmVperK: -1.316, published: { e0V: 0.08, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.08 V` },
-  { halfReaction: 'S(s) + 2 H+ + 2 e- -> H2S(aq)', e0V: 0.1442, dE0dTmVperK: -0.215, published: { e0V: 0.142, source: OSX }, source: `${LAYER}); ${OSX} prints 0.142 V` },
-  { halfReaction: 'SO4^2- + 4 H+ + 2 e- -> H2SO3 + H2O', e0V: 0.1576, dE0dTmVperK: 0.784, published: { e0V: 0.172, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.172 V` },
-  { halfReaction: 'S2O8^2- + 2 e- -> 2 SO4^2-', e0V: 1.9389, dE0dTmVperK: -1.735, published: { e0V: 2.01, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 2.01 V` },
+  { halfReaction: 'SO4^2- + H2O + 2 e- -> SO3^2- + 2 OH-', e0V: -0.9363, dE0dTmVperK: -1.405, published: { e0V: -0.93, source: CRC92_MEMORY } },
+  { halfReaction: 'S(s) + 2 e- -> S2-', e0V: -0.4446, dE0dTmVperK: -0.918, published: { e0V: -0.47627, source: OSX } },
+  { halfReaction: 'S4O6^2- + 2 e- -> 2 S2O3^2-', e0V: 0.1182, dE0dTmVperK: -1.316, published: { e0V: 0.08, source: CRC92_MEMORY } },
+  { halfReaction: 'S(s) + 2 H+ + 2 e- -> H2S(aq)', e0V: 0.1442, dE0dTmVperK: -0.215, published: { e0V: 0.142, source: OSX } },
+  { halfReaction: 'SO4^2- + 4 H+ + 2 e- -> H2SO3 + H2O', e0V: 0.1576, dE0dTmVperK: 0.784, published: { e0V: 0.172, source: CRC92_MEMORY } },
+  { halfReaction: 'S2O8^2- + 2 e- -> 2 SO4^2-', e0V: 1.9389, dE0dTmVperK: -1.735, published: { e0V: 2.01, source: CRC92_MEMORY } },
 
   // Chlorine
-  { halfReaction: 'ClO- + H2O + 2 e- -> Cl- + 2 OH-', e0V: 0.8902, dE0dTmVperK: -1.076, published: { e0V: 0.89, source: OSX }, source: `${LAYER}); ${OSX} prints 0.89 V` },
-  { halfReaction: 'ClO4- + 2 H+ + 2 e- -> ClO3- + H2O', e0V: 1.2259, dE0dTmVperK: -0.417, published: { e0V: 1.189, source: OSX }, source: `${LAYER}); ${OSX} prints 1.189 V` },
-  { halfReaction: 'ClO3- + 3 H+ + 2 e- -> HClO2 + H2O', e0V: 1.1571, dE0dTmVperK: -0.18, published: { e0V: 1.21, source: OSX }, source: `${LAYER}); ${OSX} prints 1.21 V` },
-  { halfReaction: 'Cl2(g) + 2 e- -> 2 Cl-', e0V: 1.3601, dE0dTmVperK: -1.248, published: { e0V: 1.35827, source: OSX }, source: `${LAYER}); ${OSX} prints 1.35827 V` },
-  { halfReaction: 'ClO4- + 8 H+ + 8 e- -> Cl- + 4 H2O', e0V: 1.3878, dE0dTmVperK: -0.478, published: { e0V: 1.389, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 1.389 V` },
-  { halfReaction: 'ClO3- + 6 H+ + 6 e- -> Cl- + 3 H2O', e0V: 1.4418, dE0dTmVperK: -0.498, published: { e0V: 1.451, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 1.451 V` },
-  { halfReaction: 'HClO + H+ + 2 e- -> Cl- + H2O', e0V: 1.4948, dE0dTmVperK: -0.758, published: { e0V: 1.482, source: OSX }, source: `${LAYER}); ${OSX} prints 1.482 V` },
-  { halfReaction: '2 HClO + 2 H+ + 2 e- -> Cl2(g) + 2 H2O', e0V: 1.6296, dE0dTmVperK: -0.268, published: { e0V: 1.611, source: OSX }, source: `${LAYER}); ${OSX} prints 1.611 V` },
+  { halfReaction: 'ClO- + H2O + 2 e- -> Cl- + 2 OH-', e0V: 0.8902, dE0dTmVperK: -1.076, published: { e0V: 0.89, source: OSX } },
+  { halfReaction: 'ClO4- + 2 H+ + 2 e- -> ClO3- + H2O', e0V: 1.2259, dE0dTmVperK: -0.417, published: { e0V: 1.189, source: OSX } },
+  { halfReaction: 'ClO3- + 3 H+ + 2 e- -> HClO2 + H2O', e0V: 1.1571, dE0dTmVperK: -0.18, published: { e0V: 1.21, source: OSX } },
+  { halfReaction: 'Cl2(g) + 2 e- -> 2 Cl-', e0V: 1.3601, dE0dTmVperK: -1.248, published: { e0V: 1.35827, source: OSX } },
+  { halfReaction: 'ClO4- + 8 H+ + 8 e- -> Cl- + 4 H2O', e0V: 1.3878, dE0dTmVperK: -0.478, published: { e0V: 1.389, source: CRC92_MEMORY } },
+  { halfReaction: 'ClO3- + 6 H+ + 6 e- -> Cl- + 3 H2O', e0V: 1.4418, dE0dTmVperK: -0.498, published: { e0V: 1.451, source: CRC92_MEMORY } },
+  { halfReaction: 'HClO + H+ + 2 e- -> Cl- + H2O', e0V: 1.4948, dE0dTmVperK: -0.758, published: { e0V: 1.482, source: OSX } },
+  { halfReaction: '2 HClO + 2 H+ + 2 e- -> Cl2(g) + 2 H2O', e0V: 1.6296, dE0dTmVperK: -0.268, published: { e0V: 1.611, source: OSX } },
 
   // Potassium
-  { halfReaction: 'K+ + e- -> K', e0V: -2.931, dE0dTmVperK: -1.074, published: { e0V: -2.931, source: OSX }, source: `${LAYER}; ΔfG° of K+(aq) from a published E°); ${OSX} prints -2.931 V` },
+  { halfReaction: 'K+ + e- -> K', e0V: -2.931, dE0dTmVperK: -1.074, published: { e0V: -2.931, source: OSX } },
 
   // Calcium
-  { halfReaction: 'Ca2+ + 2 e- -> Ca', e0V: -2.868, dE0dTmVperK: -0.187, published: { e0V: -2.868, source: OSX }, source: `${LAYER}; ΔfG° of Ca2+(aq) from a published E°); ${OSX} prints -2.868 V` },
+  { halfReaction: 'Ca2+ + 2 e- -> Ca', e0V: -2.868, dE0dTmVperK: -0.187, published: { e0V: -2.868, source: OSX } },
 
   // Titanium
-  { halfReaction: 'Ti2+ + 2 e- -> Ti', e0V: -1.63, dE0dTmVperK: null, published: { e0V: -1.63, source: OSX }, source: `${LAYER}; ΔfG° of Ti2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints -1.63 V` },
+  { halfReaction: 'Ti2+ + 2 e- -> Ti', e0V: -1.63, dE0dTmVperK: null, published: { e0V: -1.63, source: OSX } },
 
   // Vanadium
-  { halfReaction: 'V2+ + 2 e- -> V', e0V: -1.175, dE0dTmVperK: null, published: { e0V: -1.19, source: OSX }, source: `${LAYER}; ΔfG° of V2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints -1.19 V` },
-  { halfReaction: 'V3+ + e- -> V2+', e0V: -0.255, dE0dTmVperK: null, published: { e0V: -0.255, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of V3+(aq), V2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${CRC92_MEMORY} prints -0.255 V` },
-  { halfReaction: 'VO^2+ + 2 H+ + e- -> V3+ + H2O', e0V: 0.337, dE0dTmVperK: null, published: { e0V: 0.337, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of VO^2+(aq), V3+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${CRC92_MEMORY} prints 0.337 V` },
-  { halfReaction: 'VO2^+ + 2 H+ + e- -> VO^2+ + H2O', e0V: 0.991, dE0dTmVperK: null, published: { e0V: 0.991, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of VO2^+(aq), VO^2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${CRC92_MEMORY} prints 0.991 V` },
+  { halfReaction: 'V2+ + 2 e- -> V', e0V: -1.175, dE0dTmVperK: null, published: { e0V: -1.19, source: OSX } },
+  { halfReaction: 'V3+ + e- -> V2+', e0V: -0.255, dE0dTmVperK: null, published: { e0V: -0.255, source: CRC92_MEMORY } },
+  { halfReaction: 'VO^2+ + 2 H+ + e- -> V3+ + H2O', e0V: 0.337, dE0dTmVperK: null, published: { e0V: 0.337, source: CRC92_MEMORY } },
+  { halfReaction: 'VO2^+ + 2 H+ + e- -> VO^2+ + H2O', e0V: 0.991, dE0dTmVperK: null, published: { e0V: 0.991, source: CRC92_MEMORY } },
 
   // Chromium
-  { halfReaction: 'Cr2+ + 2 e- -> Cr', e0V: -0.913, dE0dTmVperK: null, published: { e0V: -0.913, source: OSX }, source: `${LAYER}; ΔfG° of Cr2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints -0.913 V` },
-  { halfReaction: 'Cr3+ + 3 e- -> Cr', e0V: -0.744, dE0dTmVperK: null, published: { e0V: -0.744, source: OSX }, source: `${LAYER}; ΔfG° of Cr3+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints -0.744 V` },
-  { halfReaction: 'Cr3+ + e- -> Cr2+', e0V: -0.406, dE0dTmVperK: null, published: { e0V: -0.407, source: OSX }, source: `${LAYER}; ΔfG° of Cr3+(aq), Cr2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints -0.407 V` },
-  { halfReaction: 'CrO4^2- + 4 H2O + 3 e- -> Cr(OH)3(s) + 5 OH-', e0V: -0.13, dE0dTmVperK: null, published: { e0V: -0.13, source: OSX }, source: `${LAYER}; ΔfG° of Cr(OH)3(s) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints -0.13 V` },
-  { halfReaction: 'Cr2O7^2- + 14 H+ + 6 e- -> 2 Cr3+ + 7 H2O', e0V: 1.3638, dE0dTmVperK: null, published: { e0V: 1.232, source: OSX }, source: `${LAYER}; ΔfG° of Cr3+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints 1.232 V` },
+  { halfReaction: 'Cr2+ + 2 e- -> Cr', e0V: -0.913, dE0dTmVperK: null, published: { e0V: -0.913, source: OSX } },
+  { halfReaction: 'Cr3+ + 3 e- -> Cr', e0V: -0.744, dE0dTmVperK: null, published: { e0V: -0.744, source: OSX } },
+  { halfReaction: 'Cr3+ + e- -> Cr2+', e0V: -0.406, dE0dTmVperK: null, published: { e0V: -0.407, source: OSX } },
+  { halfReaction: 'CrO4^2- + 4 H2O + 3 e- -> Cr(OH)3(s) + 5 OH-', e0V: -0.13, dE0dTmVperK: null, published: { e0V: -0.13, source: OSX } },
+  { halfReaction: 'Cr2O7^2- + 14 H+ + 6 e- -> 2 Cr3+ + 7 H2O', e0V: 1.3638, dE0dTmVperK: null, published: { e0V: 1.232, source: OSX } },
 
   // Manganese
-  { halfReaction: 'Mn(OH)2(s) + 2 e- -> Mn + 2 OH-', e0V: -1.5573, dE0dTmVperK: -1.137, published: { e0V: -1.56, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -1.56 V` },
-  { halfReaction: 'Mn2+ + 2 e- -> Mn', e0V: -1.185, dE0dTmVperK: -0.13, published: { e0V: -1.185, source: OSX }, source: `${LAYER}; ΔfG° of Mn2+(aq) from a published E°); ${OSX} prints -1.185 V` },
-  { halfReaction: 'MnO4- + e- -> MnO4^2-', e0V: 0.5237, dE0dTmVperK: -2.047, published: { e0V: 0.558, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of MnO4-(aq) from a published E°); ${CRC92_MEMORY} prints 0.558 V` },
-  { halfReaction: 'MnO4- + 2 H2O + 3 e- -> MnO2(s) + 4 OH-', e0V: 0.5862, dE0dTmVperK: -1.786, published: { e0V: 0.558, source: OSX }, source: `${LAYER}; ΔfG° of MnO4-(aq) from a published E°); ${OSX} prints 0.558 V` },
-  { halfReaction: 'MnO2(s) + 4 H+ + 2 e- -> Mn2+ + 2 H2O', e0V: 1.2323, dE0dTmVperK: -0.609, published: { e0V: 1.23, source: OSX }, source: `${LAYER}; ΔfG° of Mn2+(aq) from a published E°); ${OSX} prints 1.23 V` },
-  { halfReaction: 'MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O', e0V: 1.507, dE0dTmVperK: -0.646, published: { e0V: 1.507, source: OSX }, source: `${LAYER}; ΔfG° of MnO4-(aq), Mn2+(aq) from a published E°); ${OSX} prints 1.507 V` },
-  { halfReaction: 'Mn3+ + e- -> Mn2+', e0V: 1.5474, dE0dTmVperK: null, published: { e0V: 1.5415, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Mn3+(aq), Mn2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${CRC92_MEMORY} prints 1.5415 V` },
-  { halfReaction: 'MnO4- + 4 H+ + 3 e- -> MnO2(s) + 2 H2O', e0V: 1.6902, dE0dTmVperK: -0.671, published: { e0V: 1.679, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of MnO4-(aq) from a published E°); ${CRC92_MEMORY} prints 1.679 V` },
+  { halfReaction: 'Mn(OH)2(s) + 2 e- -> Mn + 2 OH-', e0V: -1.5573, dE0dTmVperK: -1.137, published: { e0V: -1.56, source: CRC92_MEMORY } },
+  { halfReaction: 'Mn2+ + 2 e- -> Mn', e0V: -1.185, dE0dTmVperK: -0.13, published: { e0V: -1.185, source: OSX } },
+  { halfReaction: 'MnO4- + e- -> MnO4^2-', e0V: 0.5237, dE0dTmVperK: -2.047, published: { e0V: 0.558, source: CRC92_MEMORY } },
+  { halfReaction: 'MnO4- + 2 H2O + 3 e- -> MnO2(s) + 4 OH-', e0V: 0.5862, dE0dTmVperK: -1.786, published: { e0V: 0.558, source: OSX } },
+  { halfReaction: 'MnO2(s) + 4 H+ + 2 e- -> Mn2+ + 2 H2O', e0V: 1.2323, dE0dTmVperK: -0.609, published: { e0V: 1.23, source: OSX } },
+  { halfReaction: 'MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O', e0V: 1.507, dE0dTmVperK: -0.646, published: { e0V: 1.507, source: OSX } },
+  { halfReaction: 'Mn3+ + e- -> Mn2+', e0V: 1.5474, dE0dTmVperK: null, published: { e0V: 1.5415, source: CRC92_MEMORY } },
+  { halfReaction: 'MnO4- + 4 H+ + 3 e- -> MnO2(s) + 2 H2O', e0V: 1.6902, dE0dTmVperK: -0.671, published: { e0V: 1.679, source: CRC92_MEMORY } },
 
   // Iron
-  { halfReaction: 'Fe(OH)3(s) + e- -> Fe(OH)2(s) + OH-', e0V: -0.5468, dE0dTmVperK: -0.982, published: { e0V: -0.56, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.56 V` },
-  { halfReaction: 'Fe2+ + 2 e- -> Fe', e0V: -0.447, dE0dTmVperK: 0.178, published: { e0V: -0.447, source: OSX }, source: `${LAYER}; ΔfG° of Fe2+(aq) from a published E°); ${OSX} prints -0.447 V` },
-  { halfReaction: 'Fe3+ + 3 e- -> Fe', e0V: -0.041, dE0dTmVperK: 0.508, published: { e0V: -0.037, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Fe3+(aq) from a published E°); ${CRC92_MEMORY} prints -0.037 V` },
-  { halfReaction: '[Fe(CN)6]^3- + e- -> [Fe(CN)6]^4-', e0V: 0.3557, dE0dTmVperK: -2.494, published: { e0V: 0.36, source: OSX }, source: `${LAYER}); ${OSX} prints 0.36 V` },
-  { halfReaction: 'Fe3+ + e- -> Fe2+', e0V: 0.771, dE0dTmVperK: 1.17, published: { e0V: 0.771, source: OSX }, source: `${LAYER}; ΔfG° of Fe3+(aq), Fe2+(aq) from a published E°); ${OSX} prints 0.771 V` },
+  { halfReaction: 'Fe(OH)3(s) + e- -> Fe(OH)2(s) + OH-', e0V: -0.5468, dE0dTmVperK: -0.982, published: { e0V: -0.56, source: CRC92_MEMORY } },
+  { halfReaction: 'Fe2+ + 2 e- -> Fe', e0V: -0.447, dE0dTmVperK: 0.178, published: { e0V: -0.447, source: OSX } },
+  { halfReaction: 'Fe3+ + 3 e- -> Fe', e0V: -0.041, dE0dTmVperK: 0.508, published: { e0V: -0.037, source: CRC92_MEMORY } },
+  { halfReaction: '[Fe(CN)6]^3- + e- -> [Fe(CN)6]^4-', e0V: 0.3557, dE0dTmVperK: -2.494, published: { e0V: 0.36, source: OSX } },
+  { halfReaction: 'Fe3+ + e- -> Fe2+', e0V: 0.771, dE0dTmVperK: 1.17, published: { e0V: 0.771, source: OSX } },
 
   // Cobalt
-  { halfReaction: 'Co(OH)2(s) + 2 e- -> Co + 2 OH-', e0V: -0.7245, dE0dTmVperK: -1.042, published: { e0V: -0.73, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.73 V` },
-  { halfReaction: 'Co2+ + 2 e- -> Co', e0V: -0.28, dE0dTmVperK: 0.064, published: { e0V: -0.28, source: OSX }, source: `${LAYER}; ΔfG° of Co2+(aq) from a published E°); ${OSX} prints -0.28 V` },
-  { halfReaction: 'Co3+ + e- -> Co2+', e0V: 1.9488, dE0dTmVperK: 1.313, published: { e0V: 1.92, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Co2+(aq) from a published E°); ${CRC92_MEMORY} prints 1.92 V` },
+  { halfReaction: 'Co(OH)2(s) + 2 e- -> Co + 2 OH-', e0V: -0.7245, dE0dTmVperK: -1.042, published: { e0V: -0.73, source: CRC92_MEMORY } },
+  { halfReaction: 'Co2+ + 2 e- -> Co', e0V: -0.28, dE0dTmVperK: 0.064, published: { e0V: -0.28, source: OSX } },
+  { halfReaction: 'Co3+ + e- -> Co2+', e0V: 1.9488, dE0dTmVperK: 1.313, published: { e0V: 1.92, source: CRC92_MEMORY } },
 
   // Nickel
-  { halfReaction: 'Ni(OH)2(s) + 2 e- -> Ni + 2 OH-', e0V: -0.6877, dE0dTmVperK: -1.09, published: { e0V: -0.72, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.72 V` },
-  { halfReaction: 'Ni2+ + 2 e- -> Ni', e0V: -0.257, dE0dTmVperK: 0.146, published: { e0V: -0.257, source: OSX }, source: `${LAYER}; ΔfG° of Ni2+(aq) from a published E°); ${OSX} prints -0.257 V` },
-  { halfReaction: 'NiO2(s) + 2 H2O + 2 e- -> Ni(OH)2(s) + 2 OH-', e0V: 0.49, dE0dTmVperK: null, published: { e0V: 0.49, source: OSX }, source: `${LAYER}; ΔfG° of NiO2(s) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints 0.49 V` },
-  { halfReaction: 'NiO2(s) + 4 H+ + 2 e- -> Ni2+ + 2 H2O', e0V: 1.7152, dE0dTmVperK: null, published: { e0V: 1.593, source: OSX }, source: `${LAYER}; ΔfG° of NiO2(s), Ni2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints 1.593 V` },
+  { halfReaction: 'Ni(OH)2(s) + 2 e- -> Ni + 2 OH-', e0V: -0.6877, dE0dTmVperK: -1.09, published: { e0V: -0.72, source: CRC92_MEMORY } },
+  { halfReaction: 'Ni2+ + 2 e- -> Ni', e0V: -0.257, dE0dTmVperK: 0.146, published: { e0V: -0.257, source: OSX } },
+  { halfReaction: 'NiO2(s) + 2 H2O + 2 e- -> Ni(OH)2(s) + 2 OH-', e0V: 0.49, dE0dTmVperK: null, published: { e0V: 0.49, source: OSX } },
+  { halfReaction: 'NiO2(s) + 4 H+ + 2 e- -> Ni2+ + 2 H2O', e0V: 1.7152, dE0dTmVperK: null, published: { e0V: 1.593, source: OSX } },
 
   // Copper
-  { halfReaction: 'Cu2O(s) + H2O + 2 e- -> 2 Cu + 2 OH-', e0V: -0.3557, dE0dTmVperK: -1.29, published: { e0V: -0.36, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.36 V` },
-  { halfReaction: 'Cu2+ + e- -> Cu+', e0V: 0.1607, dE0dTmVperK: 0.776, published: { e0V: 0.153, source: OSX }, source: `${LAYER}); ${OSX} prints 0.153 V` },
-  { halfReaction: 'Cu2+ + 2 e- -> Cu', e0V: 0.3394, dE0dTmVperK: 0.011, published: { e0V: 0.34, source: OSX }, source: `${LAYER}); ${OSX} prints 0.34 V` },
-  { halfReaction: 'Cu+ + e- -> Cu', e0V: 0.518, dE0dTmVperK: -0.754, published: { e0V: 0.521, source: OSX }, source: `${LAYER}); ${OSX} prints 0.521 V` },
+  { halfReaction: 'Cu2O(s) + H2O + 2 e- -> 2 Cu + 2 OH-', e0V: -0.3557, dE0dTmVperK: -1.29, published: { e0V: -0.36, source: CRC92_MEMORY } },
+  { halfReaction: 'Cu2+ + e- -> Cu+', e0V: 0.1607, dE0dTmVperK: 0.776, published: { e0V: 0.153, source: OSX } },
+  { halfReaction: 'Cu2+ + 2 e- -> Cu', e0V: 0.3394, dE0dTmVperK: 0.011, published: { e0V: 0.34, source: OSX } },
+  { halfReaction: 'Cu+ + e- -> Cu', e0V: 0.518, dE0dTmVperK: -0.754, published: { e0V: 0.521, source: OSX } },
 
   // Zinc
-  { halfReaction: 'ZnO(s) + H2O + 2 e- -> Zn + 2 OH-', e0V: -1.2486, dE0dTmVperK: -1.161, published: { e0V: -1.26, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -1.26 V` },
-  { halfReaction: 'Zn(OH)2(s) + 2 e- -> Zn + 2 OH-', e0V: -1.2386, dE0dTmVperK: -0.994, published: { e0V: -1.245, source: OSX }, source: `${LAYER}); ${OSX} prints -1.245 V` },
-  { halfReaction: 'ZnO2^2- + 2 H2O + 2 e- -> Zn + 4 OH-', e0V: -1.1892, dE0dTmVperK: null, published: { e0V: -1.215, source: CRC92_MEMORY }, source: `${LAYER}); E° kept at its 25 °C value at other temperatures; ${CRC92_MEMORY} prints -1.215 V` },
-  { halfReaction: 'Zn2+ + 2 e- -> Zn', e0V: -0.7618, dE0dTmVperK: 0.119, published: { e0V: -0.7618, source: OSX }, source: `${LAYER}; ΔfG° of Zn2+(aq) from a published E°); ${OSX} prints -0.7618 V` },
+  { halfReaction: 'ZnO(s) + H2O + 2 e- -> Zn + 2 OH-', e0V: -1.2486, dE0dTmVperK: -1.161, published: { e0V: -1.26, source: CRC92_MEMORY } },
+  { halfReaction: 'Zn(OH)2(s) + 2 e- -> Zn + 2 OH-', e0V: -1.2386, dE0dTmVperK: -0.994, published: { e0V: -1.245, source: OSX } },
+  { halfReaction: 'ZnO2^2- + 2 H2O + 2 e- -> Zn + 4 OH-', e0V: -1.1892, dE0dTmVperK: null, published: { e0V: -1.215, source: CRC92_MEMORY } },
+  { halfReaction: 'Zn2+ + 2 e- -> Zn', e0V: -0.7618, dE0dTmVperK: 0.119, published: { e0V: -0.7618, source: OSX } },
 
   // Gallium
-  { halfReaction: 'Ga3+ + 3 e- -> Ga', e0V: -0.549, dE0dTmVperK: 0.608, published: { e0V: -0.549, source: OSX }, source: `${LAYER}; ΔfG° of Ga3+(aq) from a published E°); ${OSX} prints -0.549 V` },
+  { halfReaction: 'Ga3+ + 3 e- -> Ga', e0V: -0.549, dE0dTmVperK: 0.608, published: { e0V: -0.549, source: OSX } },
 
   // Bromine
-  { halfReaction: 'Br2(l) + 2 e- -> 2 Br-', e0V: 1.0657, dE0dTmVperK: -0.63, published: { e0V: 1.065, source: CRC54 }, source: `${LAYER}; ΔfG° of Br-(aq) from a published E°); ${CRC54} prints 1.065 V` },
-  { halfReaction: 'Br2(aq) + 2 e- -> 2 Br-', e0V: 1.086, dE0dTmVperK: -0.517, published: { e0V: 1.0873, source: OSX }, source: `${LAYER}; ΔfG° of Br-(aq) from a published E°); ${OSX} prints 1.0873 V` },
-  { halfReaction: 'BrO3- + 6 H+ + 6 e- -> Br- + 3 H2O', e0V: 1.4386, dE0dTmVperK: -0.455, published: { e0V: 1.423, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Br-(aq) from a published E°); ${CRC92_MEMORY} prints 1.423 V` },
-  { halfReaction: '2 BrO3- + 12 H+ + 10 e- -> Br2(l) + 6 H2O', e0V: 1.5132, dE0dTmVperK: -0.42, published: { e0V: 1.482, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 1.482 V` },
+  { halfReaction: 'Br2(l) + 2 e- -> 2 Br-', e0V: 1.0657, dE0dTmVperK: -0.63, published: { e0V: 1.065, source: CRC54 } },
+  { halfReaction: 'Br2(aq) + 2 e- -> 2 Br-', e0V: 1.086, dE0dTmVperK: -0.517, published: { e0V: 1.0873, source: OSX } },
+  { halfReaction: 'BrO3- + 6 H+ + 6 e- -> Br- + 3 H2O', e0V: 1.4386, dE0dTmVperK: -0.455, published: { e0V: 1.423, source: CRC92_MEMORY } },
+  { halfReaction: '2 BrO3- + 12 H+ + 10 e- -> Br2(l) + 6 H2O', e0V: 1.5132, dE0dTmVperK: -0.42, published: { e0V: 1.482, source: CRC92_MEMORY } },
 
   // Rubidium
-  { halfReaction: 'Rb+ + e- -> Rb', e0V: -2.98, dE0dTmVperK: -1.141, published: { e0V: -2.98, source: OSX }, source: `${LAYER}; ΔfG° of Rb+(aq) from a published E°); ${OSX} prints -2.98 V` },
+  { halfReaction: 'Rb+ + e- -> Rb', e0V: -2.98, dE0dTmVperK: -1.141, published: { e0V: -2.98, source: OSX } },
 
   // Strontium
-  { halfReaction: 'Sr2+ + 2 e- -> Sr', e0V: -2.899, dE0dTmVperK: -0.237, published: { e0V: -2.89, source: OSX }, source: `${LAYER}; ΔfG° of Sr2+(aq) from a published E°); ${OSX} prints -2.89 V` },
+  { halfReaction: 'Sr2+ + 2 e- -> Sr', e0V: -2.899, dE0dTmVperK: -0.237, published: { e0V: -2.89, source: OSX } },
 
   // Palladium
-  { halfReaction: 'Pd2+ + 2 e- -> Pd', e0V: 0.9146, dE0dTmVperK: 0.471, published: { e0V: 0.987, source: OSX }, source: `${LAYER}); ${OSX} prints 0.987 V` },
+  { halfReaction: 'Pd2+ + 2 e- -> Pd', e0V: 0.9146, dE0dTmVperK: 0.471, published: { e0V: 0.987, source: OSX } },
 
   // Silver
-  { halfReaction: 'Ag2S(s) + 2 e- -> 2 Ag + S2-', e0V: -0.6554, dE0dTmVperK: -1.058, published: { e0V: -0.691, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.691 V` },
-  { halfReaction: 'AgI(s) + e- -> Ag + I-', e0V: -0.1515, dE0dTmVperK: -0.28, published: { e0V: -0.15224, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.15224 V` },
-  { halfReaction: 'AgBr(s) + e- -> Ag + Br-', e0V: 0.0713, dE0dTmVperK: -0.51, published: { e0V: 0.07133, source: CRC92 }, source: `${LAYER}; ΔfG° of AgBr(s) and Br-(aq) from published values); ${CRC92} prints 0.07133 V` },
-  { halfReaction: 'AgCl(s) + e- -> Ag + Cl-', e0V: 0.2223, dE0dTmVperK: -0.648, published: { e0V: 0.22233, source: OSX }, source: `${LAYER}; ΔfG° of AgCl(s) from a published E°); ${OSX} prints 0.22233 V` },
-  { halfReaction: 'Ag2O(s) + H2O + 2 e- -> 2 Ag + 2 OH-', e0V: 0.3428, dE0dTmVperK: -1.339, published: { e0V: 0.342, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.342 V` },
-  { halfReaction: '[Ag(NH3)2]+ + e- -> Ag + 2 NH3(aq)', e0V: 0.3719, dE0dTmVperK: -0.47, published: { e0V: 0.373, source: OSX }, source: `${LAYER}); ${OSX} prints 0.373 V` },
-  { halfReaction: 'Ag2CrO4(s) + 2 e- -> 2 Ag + CrO4^2-', e0V: 0.4456, dE0dTmVperK: -1.104, published: { e0V: 0.45, source: OSX }, source: `${LAYER}); ${OSX} prints 0.45 V` },
-  { halfReaction: 'Ag2SO4(s) + 2 e- -> 2 Ag + SO4^2-', e0V: 0.6536, dE0dTmVperK: -1.171, published: { e0V: 0.654, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.654 V` },
-  { halfReaction: 'Ag+ + e- -> Ag', e0V: 0.7996, dE0dTmVperK: -0.989, published: { e0V: 0.7996, source: OSX }, source: `${LAYER}; ΔfG° of Ag+(aq) from a published E°); ${OSX} prints 0.7996 V` },
-  { halfReaction: 'Ag2+ + e- -> Ag+', e0V: 1.9801, dE0dTmVperK: 0.988, published: { e0V: 1.98, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Ag+(aq) from a published E°); ${CRC92_MEMORY} prints 1.98 V` },
+  { halfReaction: 'Ag2S(s) + 2 e- -> 2 Ag + S2-', e0V: -0.6554, dE0dTmVperK: -1.058, published: { e0V: -0.691, source: CRC92_MEMORY } },
+  { halfReaction: 'AgI(s) + e- -> Ag + I-', e0V: -0.1515, dE0dTmVperK: -0.28, published: { e0V: -0.15224, source: CRC92_MEMORY } },
+  { halfReaction: 'AgBr(s) + e- -> Ag + Br-', e0V: 0.0713, dE0dTmVperK: -0.51, published: { e0V: 0.07133, source: CRC92 } },
+  { halfReaction: 'AgCl(s) + e- -> Ag + Cl-', e0V: 0.2223, dE0dTmVperK: -0.648, published: { e0V: 0.22233, source: OSX } },
+  { halfReaction: 'Ag2O(s) + H2O + 2 e- -> 2 Ag + 2 OH-', e0V: 0.3428, dE0dTmVperK: -1.339, published: { e0V: 0.342, source: CRC92_MEMORY } },
+  { halfReaction: '[Ag(NH3)2]+ + e- -> Ag + 2 NH3(aq)', e0V: 0.3719, dE0dTmVperK: -0.47, published: { e0V: 0.373, source: OSX } },
+  { halfReaction: 'Ag2CrO4(s) + 2 e- -> 2 Ag + CrO4^2-', e0V: 0.4456, dE0dTmVperK: -1.104, published: { e0V: 0.45, source: OSX } },
+  { halfReaction: 'Ag2SO4(s) + 2 e- -> 2 Ag + SO4^2-', e0V: 0.6536, dE0dTmVperK: -1.171, published: { e0V: 0.654, source: CRC92_MEMORY } },
+  { halfReaction: 'Ag+ + e- -> Ag', e0V: 0.7996, dE0dTmVperK: -0.989, published: { e0V: 0.7996, source: OSX } },
+  { halfReaction: 'Ag2+ + e- -> Ag+', e0V: 1.9801, dE0dTmVperK: 0.988, published: { e0V: 1.98, source: CRC92_MEMORY } },
 
   // Cadmium
-  { halfReaction: 'Cd(OH)2(s) + 2 e- -> Cd + 2 OH-', e0V: -0.8245, dE0dTmVperK: -1.018, published: { e0V: -0.812, source: CRC54 }, source: `${LAYER}); ${CRC54} prints -0.812 V` },
-  { halfReaction: 'Cd2+ + 2 e- -> Cd', e0V: -0.403, dE0dTmVperK: -0.03, published: { e0V: -0.403, source: OSX }, source: `${LAYER}; ΔfG° of Cd2+(aq) from a published E°); ${OSX} prints -0.403 V` },
+  { halfReaction: 'Cd(OH)2(s) + 2 e- -> Cd + 2 OH-', e0V: -0.8245, dE0dTmVperK: -1.018, published: { e0V: -0.812, source: CRC54 } },
+  { halfReaction: 'Cd2+ + 2 e- -> Cd', e0V: -0.403, dE0dTmVperK: -0.03, published: { e0V: -0.403, source: OSX } },
 
   // Indium
-  { halfReaction: 'In3+ + 3 e- -> In', e0V: -0.3382, dE0dTmVperK: 0.044, published: { e0V: -0.3382, source: OSX }, source: `${LAYER}; ΔfG° of In3+(aq) from a published E°); ${OSX} prints -0.3382 V` },
+  { halfReaction: 'In3+ + 3 e- -> In', e0V: -0.3382, dE0dTmVperK: 0.044, published: { e0V: -0.3382, source: OSX } },
 
   // Tin
-  { halfReaction: 'Sn2+ + 2 e- -> Sn', e0V: -0.1375, dE0dTmVperK: -0.322, published: { e0V: -0.1375, source: OSX }, source: `${LAYER}; ΔfG° of Sn2+(aq) from a published E°); ${OSX} prints -0.1375 V` },
-  { halfReaction: 'Sn4+ + 2 e- -> Sn2+', e0V: 0.151, dE0dTmVperK: -0.159, published: { e0V: 0.151, source: OSX }, source: `${LAYER}; ΔfG° of Sn4+(aq), Sn2+(aq) from a published E°); ${OSX} prints 0.151 V` },
+  { halfReaction: 'Sn2+ + 2 e- -> Sn', e0V: -0.1375, dE0dTmVperK: -0.322, published: { e0V: -0.1375, source: OSX } },
+  { halfReaction: 'Sn4+ + 2 e- -> Sn2+', e0V: 0.151, dE0dTmVperK: -0.159, published: { e0V: 0.151, source: OSX } },
 
   // Iodine
-  { halfReaction: 'I2(s) + 2 e- -> 2 I-', e0V: 0.5345, dE0dTmVperK: -0.126, published: { e0V: 0.5355, source: OSX }, source: `${LAYER}); ${OSX} prints 0.5355 V` },
-  { halfReaction: 'I3^- + 2 e- -> 3 I-', e0V: 0.5354, dE0dTmVperK: -0.187, published: { e0V: 0.536, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.536 V` },
-  { halfReaction: '2 IO3- + 12 H+ + 10 e- -> I2(s) + 6 H2O', e0V: 1.2093, dE0dTmVperK: -0.368, published: { e0V: 1.195, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 1.195 V` },
+  { halfReaction: 'I2(s) + 2 e- -> 2 I-', e0V: 0.5345, dE0dTmVperK: -0.126, published: { e0V: 0.5355, source: OSX } },
+  { halfReaction: 'I3^- + 2 e- -> 3 I-', e0V: 0.5354, dE0dTmVperK: -0.187, published: { e0V: 0.536, source: CRC92_MEMORY } },
+  { halfReaction: '2 IO3- + 12 H+ + 10 e- -> I2(s) + 6 H2O', e0V: 1.2093, dE0dTmVperK: -0.368, published: { e0V: 1.195, source: CRC92_MEMORY } },
 
   // Caesium
-  { halfReaction: 'Cs+ + e- -> Cs', e0V: -3.026, dE0dTmVperK: -1.173, published: { e0V: -3.026, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Cs+(aq) from a published E°); ${CRC92_MEMORY} prints -3.026 V` },
+  { halfReaction: 'Cs+ + e- -> Cs', e0V: -3.026, dE0dTmVperK: -1.173, published: { e0V: -3.026, source: CRC92_MEMORY } },
 
   // Barium
-  { halfReaction: 'Ba2+ + 2 e- -> Ba', e0V: -2.912, dE0dTmVperK: -0.402, published: { e0V: -2.912, source: OSX }, source: `${LAYER}; ΔfG° of Ba2+(aq) from a published E°); ${OSX} prints -2.912 V` },
+  { halfReaction: 'Ba2+ + 2 e- -> Ba', e0V: -2.912, dE0dTmVperK: -0.402, published: { e0V: -2.912, source: OSX } },
 
   // Lanthanum
-  { halfReaction: 'La3+ + 3 e- -> La', e0V: -2.362, dE0dTmVperK: 0.271, published: { e0V: -2.52, source: OSX }, source: `${LAYER}); ${OSX} prints -2.52 V` },
+  { halfReaction: 'La3+ + 3 e- -> La', e0V: -2.362, dE0dTmVperK: 0.271, published: { e0V: -2.52, source: OSX } },
 
   // Cerium
-  { halfReaction: 'Ce3+ + 3 e- -> Ce', e0V: -2.3216, dE0dTmVperK: 0.28, published: { e0V: -2.483, source: OSX }, source: `${LAYER}); ${OSX} prints -2.483 V` },
-  { halfReaction: 'Ce4+ + e- -> Ce3+', e0V: 1.7433, dE0dTmVperK: 0.318, published: { e0V: 1.61, source: OSX }, source: `${LAYER}); ${OSX} prints 1.61 V` },
+  { halfReaction: 'Ce3+ + 3 e- -> Ce', e0V: -2.3216, dE0dTmVperK: 0.28, published: { e0V: -2.483, source: OSX } },
+  { halfReaction: 'Ce4+ + e- -> Ce3+', e0V: 1.7433, dE0dTmVperK: 0.318, published: { e0V: 1.61, source: OSX } },
 
   // Platinum
-  { halfReaction: '[PtCl4]^2- + 2 e- -> Pt + 4 Cl-', e0V: 0.81, dE0dTmVperK: -0.197, published: { e0V: 0.755, source: OSX }, source: `${LAYER}); ${OSX} prints 0.755 V` },
-  { halfReaction: 'Pt2+ + 2 e- -> Pt', e0V: 1.18, dE0dTmVperK: null, published: { e0V: 1.2, source: OSX }, source: `${LAYER}; ΔfG° of Pt2+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints 1.2 V` },
+  { halfReaction: '[PtCl4]^2- + 2 e- -> Pt + 4 Cl-', e0V: 0.81, dE0dTmVperK: -0.197, published: { e0V: 0.755, source: OSX } },
+  { halfReaction: 'Pt2+ + 2 e- -> Pt', e0V: 1.18, dE0dTmVperK: null, published: { e0V: 1.2, source: OSX } },
 
   // Gold
-  { halfReaction: '[AuCl4]- + 3 e- -> Au + 4 Cl-', e0V: 1.0011, dE0dTmVperK: -0.655, published: { e0V: 1.002, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 1.002 V` },
-  { halfReaction: 'Au3+ + 2 e- -> Au+', e0V: 1.401, dE0dTmVperK: null, published: { e0V: 1.401, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Au3+(aq), Au+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${CRC92_MEMORY} prints 1.401 V` },
-  { halfReaction: 'Au3+ + 3 e- -> Au', e0V: 1.498, dE0dTmVperK: null, published: { e0V: 1.498, source: OSX }, source: `${LAYER}; ΔfG° of Au3+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints 1.498 V` },
-  { halfReaction: 'Au+ + e- -> Au', e0V: 1.692, dE0dTmVperK: null, published: { e0V: 1.692, source: OSX }, source: `${LAYER}; ΔfG° of Au+(aq) from a published E°); E° kept at its 25 °C value at other temperatures; ${OSX} prints 1.692 V` },
+  { halfReaction: '[AuCl4]- + 3 e- -> Au + 4 Cl-', e0V: 1.0011, dE0dTmVperK: -0.655, published: { e0V: 1.002, source: CRC92_MEMORY } },
+  { halfReaction: 'Au3+ + 2 e- -> Au+', e0V: 1.401, dE0dTmVperK: null, published: { e0V: 1.401, source: CRC92_MEMORY } },
+  { halfReaction: 'Au3+ + 3 e- -> Au', e0V: 1.498, dE0dTmVperK: null, published: { e0V: 1.498, source: OSX } },
+  { halfReaction: 'Au+ + e- -> Au', e0V: 1.692, dE0dTmVperK: null, published: { e0V: 1.692, source: OSX } },
 
   // Mercury
-  { halfReaction: 'HgO(s) + H2O + 2 e- -> Hg(l) + 2 OH-', e0V: 0.0975, dE0dTmVperK: -1.121, published: { e0V: 0.0977, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.0977 V` },
-  { halfReaction: 'Hg2Cl2(s) + 2 e- -> 2 Hg(l) + 2 Cl-', e0V: 0.2681, dE0dTmVperK: -0.301, published: { e0V: 0.26808, source: OSX }, source: `${LAYER}; ΔfG° of Hg2Cl2(s) from a published E°); ${OSX} prints 0.26808 V` },
-  { halfReaction: 'Hg2SO4(s) + 2 e- -> 2 Hg(l) + SO4^2-', e0V: 0.6152, dE0dTmVperK: -0.825, published: { e0V: 0.6125, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints 0.6125 V` },
-  { halfReaction: 'Hg2^2+ + 2 e- -> 2 Hg(l)', e0V: 0.7973, dE0dTmVperK: -0.327, published: { e0V: 0.7973, source: OSX }, source: `${LAYER}; ΔfG° of Hg2^2+(aq) from a published E°); ${OSX} prints 0.7973 V` },
-  { halfReaction: 'Hg2+ + 2 e- -> Hg(l)', e0V: 0.851, dE0dTmVperK: -0.116, published: { e0V: 0.851, source: OSX }, source: `${LAYER}; ΔfG° of Hg2+(aq) from a published E°); ${OSX} prints 0.851 V` },
-  { halfReaction: '2 Hg2+ + 2 e- -> Hg2^2+', e0V: 0.9047, dE0dTmVperK: 0.094, published: { e0V: 0.92, source: OSX }, source: `${LAYER}; ΔfG° of Hg2+(aq), Hg2^2+(aq) from a published E°); ${OSX} prints 0.92 V` },
+  { halfReaction: 'HgO(s) + H2O + 2 e- -> Hg(l) + 2 OH-', e0V: 0.0975, dE0dTmVperK: -1.121, published: { e0V: 0.0977, source: CRC92_MEMORY } },
+  { halfReaction: 'Hg2Cl2(s) + 2 e- -> 2 Hg(l) + 2 Cl-', e0V: 0.2681, dE0dTmVperK: -0.301, published: { e0V: 0.26808, source: OSX } },
+  { halfReaction: 'Hg2SO4(s) + 2 e- -> 2 Hg(l) + SO4^2-', e0V: 0.6152, dE0dTmVperK: -0.825, published: { e0V: 0.6125, source: CRC92_MEMORY } },
+  { halfReaction: 'Hg2^2+ + 2 e- -> 2 Hg(l)', e0V: 0.7973, dE0dTmVperK: -0.327, published: { e0V: 0.7973, source: OSX } },
+  { halfReaction: 'Hg2+ + 2 e- -> Hg(l)', e0V: 0.851, dE0dTmVperK: -0.116, published: { e0V: 0.851, source: OSX } },
+  { halfReaction: '2 Hg2+ + 2 e- -> Hg2^2+', e0V: 0.9047, dE0dTmVperK: 0.094, published: { e0V: 0.92, source: OSX } },
 
   // Thallium
-  { halfReaction: 'Tl+ + e- -> Tl', e0V: -0.336, dE0dTmVperK: -1.313, published: { e0V: -0.336, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Tl+(aq) from a published E°); ${CRC92_MEMORY} prints -0.336 V` },
-  { halfReaction: 'Tl3+ + 2 e- -> Tl+', e0V: 1.2801, dE0dTmVperK: 0.968, published: { e0V: 1.252, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of Tl+(aq) from a published E°); ${CRC92_MEMORY} prints 1.252 V` },
+  { halfReaction: 'Tl+ + e- -> Tl', e0V: -0.336, dE0dTmVperK: -1.313, published: { e0V: -0.336, source: CRC92_MEMORY } },
+  { halfReaction: 'Tl3+ + 2 e- -> Tl+', e0V: 1.2801, dE0dTmVperK: 0.968, published: { e0V: 1.252, source: CRC92_MEMORY } },
 
   // Lead
-  { halfReaction: 'PbO(s) + H2O + 2 e- -> Pb + 2 OH-', e0V: -0.5728, dE0dTmVperK: -1.171, published: { e0V: -0.58, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.58 V` },
-  { halfReaction: 'PbSO4(s) + 2 e- -> Pb + SO4^2-', e0V: -0.3505, dE0dTmVperK: -1.007, published: { e0V: -0.3505, source: OSX }, source: `${LAYER}; ΔfG° of PbSO4(s) from a published E°); ${OSX} prints -0.3505 V` },
-  { halfReaction: 'PbCl2(s) + 2 e- -> Pb + 2 Cl-', e0V: -0.2676, dE0dTmVperK: -0.461, published: { e0V: -0.2675, source: CRC92_MEMORY }, source: `${LAYER}); ${CRC92_MEMORY} prints -0.2675 V` },
-  { halfReaction: 'Pb2+ + 2 e- -> Pb', e0V: -0.1262, dE0dTmVperK: -0.396, published: { e0V: -0.1262, source: OSX }, source: `${LAYER}; ΔfG° of Pb2+(aq) from a published E°); ${OSX} prints -0.1262 V` },
-  { halfReaction: 'PbO2(s) + 4 H+ + 2 e- -> Pb2+ + 2 H2O', e0V: 1.4657, dE0dTmVperK: -0.254, published: { e0V: 1.455, source: CRC92_MEMORY }, source: `${LAYER}; ΔfG° of PbO2(s), Pb2+(aq) from a published E°); ${CRC92_MEMORY} prints 1.455 V` },
-  { halfReaction: 'PbO2(s) + SO4^2- + 4 H+ + 2 e- -> PbSO4(s) + 2 H2O', e0V: 1.69, dE0dTmVperK: 0.358, published: { e0V: 1.69, source: OSX }, source: `${LAYER}; ΔfG° of PbO2(s), PbSO4(s) from a published E°); ${OSX} prints 1.69 V` },
+  { halfReaction: 'PbO(s) + H2O + 2 e- -> Pb + 2 OH-', e0V: -0.5728, dE0dTmVperK: -1.171, published: { e0V: -0.58, source: CRC92_MEMORY } },
+  { halfReaction: 'PbSO4(s) + 2 e- -> Pb + SO4^2-', e0V: -0.3505, dE0dTmVperK: -1.007, published: { e0V: -0.3505, source: OSX } },
+  { halfReaction: 'PbCl2(s) + 2 e- -> Pb + 2 Cl-', e0V: -0.2676, dE0dTmVperK: -0.461, published: { e0V: -0.2675, source: CRC92_MEMORY } },
+  { halfReaction: 'Pb2+ + 2 e- -> Pb', e0V: -0.1262, dE0dTmVperK: -0.396, published: { e0V: -0.1262, source: OSX } },
+  { halfReaction: 'PbO2(s) + 4 H+ + 2 e- -> Pb2+ + 2 H2O', e0V: 1.4657, dE0dTmVperK: -0.254, published: { e0V: 1.455, source: CRC92_MEMORY } },
+  { halfReaction: 'PbO2(s) + SO4^2- + 4 H+ + 2 e- -> PbSO4(s) + 2 H2O', e0V: 1.69, dE0dTmVperK: 0.358, published: { e0V: 1.69, source: OSX } },
 
   // Bismuth
-  { halfReaction: 'Bi3+ + 3 e- -> Bi', e0V: 0.2861, dE0dTmVperK: null, published: { e0V: 0.308, source: CRC92_MEMORY }, source: `${LAYER}); E° kept at its 25 °C value at other temperatures; ${CRC92_MEMORY} prints 0.308 V` },
+  { halfReaction: 'Bi3+ + 3 e- -> Bi', e0V: 0.2861, dE0dTmVperK: null, published: { e0V: 0.308, source: CRC92_MEMORY } },
 
 ];
+
+/**
+ * Every built-in row with its source text: the species data it is derived from and the value
+ * its publication prints (FORMATION(species, "source") names the source of each species).
+ */
+export const BUILTIN_POTENTIALS: readonly BuiltinPotentialRow[] = ROWS.map((r) => ({
+  ...r,
+  source: `${LAYER}${r.dE0dTmVperK === null ? '; no S° for a species: E° kept at its 25 °C value at other temperatures' : ''}); ${r.published.source} prints ${String(r.published.e0V)} V`,
+}));
