@@ -7,10 +7,23 @@
  *   manifest.xml    the add-in manifest (copied from manifest/)
  *   assets/*.png    the icons (copied from assets/)
  *
- * `npm run build` (production, minified) or `npm start` (dev server on port 3000: https with
- * the Office development certificate where office-addin-dev-certs can provide one, plain http
- * otherwise, which Excel refuses to load: the server says so when it starts; `npm start -- --env http`
- * asks for plain http on purpose).
+ * `npm run build` (production, minified) or `npm start` / `npm run dev-server` (dev server on
+ * port 3000: https with the Office development certificate where office-addin-dev-certs can
+ * provide one, plain http otherwise, which Excel refuses to load: the server says so when it
+ * starts; `npm start -- --env http` asks for plain http on purpose).
+ *
+ * One engine in the page: the task pane is built with `dependOn: 'functions'`, so taskpane.js
+ * holds only the pane's own modules and uses the engine, the catalogue and decimal.js of
+ * functions.js (loaded first by the page, which is the shared runtime).
+ *
+ * Build settings (`--env NAME=VALUE`):
+ *   origin=https://addins.example.net/potentia  the address the add-in is served from: the
+ *       manifest, every help link of functions.json and the pages are rewritten from the
+ *       development address (default https://localhost:3000)
+ *   officejs=local  serve Office.js from this add-in (copied from the @microsoft/office-js
+ *       package into dist/office-js/, for offline or on-premises deployments); the page's
+ *       script tag and Content-Security-Policy follow. Default: Office's CDN, as store
+ *       add-ins require.
  */
 const path = require('path');
 const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
@@ -18,6 +31,84 @@ const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 
 const DEV_PORT = 3000;
+/** The development address every URL of the sources is written with. */
+const DEV_ORIGIN = `https://localhost:${DEV_PORT}`;
+const OFFICE_JS_CDN = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
+const OFFICE_JS_LOCAL = 'office-js/office.js';
+
+/** The deployment address from `--env origin=…`: an https URL, no trailing slash. */
+function originFrom(env) {
+  const raw = env.origin === undefined || env.origin === true ? DEV_ORIGIN : String(env.origin);
+  const origin = raw.replace(/\/+$/, '');
+  let url;
+  try {
+    url = new (require('url').URL)(origin);
+  } catch {
+    throw new Error(
+      `--env origin=${raw} is not a URL; give e.g. --env origin=https://addins.example.net/potentia`,
+    );
+  }
+  if (url.protocol !== 'https:' || /["'<>\s]/.test(origin) || url.search || url.hash) {
+    throw new Error(
+      `--env origin=${raw} must be a plain https:// address (Office loads add-ins over https only)`,
+    );
+  }
+  return origin;
+}
+
+/**
+ * Rewrites the development address to the deployment address in every text file written
+ * (manifest.xml, functions.json, the page and the bundles), after all plugins have emitted.
+ */
+class DeploymentOriginPlugin {
+  constructor(origin) {
+    this.origin = origin;
+  }
+  apply(compiler) {
+    if (this.origin === DEV_ORIGIN) return;
+    compiler.hooks.afterEmit.tapAsync('DeploymentOriginPlugin', (compilation, done) => {
+      const fs = compiler.outputFileSystem;
+      const out = compilation.outputOptions.path;
+      const files = Object.keys(compilation.assets).filter((f) => /\.(xml|json|html|js)$/.test(f));
+      let pending = files.length;
+      if (pending === 0) return done();
+      let failed = null;
+      for (const f of files) {
+        const file = path.join(out, f);
+        fs.readFile(file, (err, data) => {
+          if (err) failed = failed || err;
+          const text = err ? '' : data.toString('utf8');
+          const finish = (e) => {
+            if (e) failed = failed || e;
+            if (--pending === 0) done(failed);
+          };
+          if (err || !text.includes(DEV_ORIGIN)) return finish();
+          fs.writeFile(file, text.split(DEV_ORIGIN).join(this.origin), finish);
+        });
+      }
+    });
+  }
+}
+
+/** Points the page at Office.js served from the add-in itself, and its policy with it. */
+class LocalOfficeJsPlugin {
+  apply(compiler) {
+    compiler.hooks.compilation.tap('LocalOfficeJsPlugin', (compilation) => {
+      HtmlWebpackPlugin.getHooks(compilation).beforeEmit.tap('LocalOfficeJsPlugin', (data) => {
+        if (!data.html.includes(OFFICE_JS_CDN)) {
+          throw new Error(
+            `officejs=local: the page does not load ${OFFICE_JS_CDN}; update LocalOfficeJsPlugin`,
+          );
+        }
+        data.html = data.html
+          .split(OFFICE_JS_CDN)
+          .join(OFFICE_JS_LOCAL)
+          .replace(/(script-src 'self') https:\/\/appsforoffice\.microsoft\.com/g, '$1');
+        return data;
+      });
+    });
+  }
+}
 const FUNCTIONS_SOURCE = './src/functions/functions.ts';
 
 /**
@@ -113,6 +204,11 @@ async function devServerHttpsOptions() {
 
 module.exports = async (env = {}, argv = {}) => {
   const production = argv.mode !== 'development';
+  const origin = originFrom(env);
+  const officeJsLocal = env.officejs === 'local';
+  if (env.officejs !== undefined && !officeJsLocal && env.officejs !== 'cdn') {
+    throw new Error(`--env officejs=${env.officejs}: use officejs=local (or cdn, the default)`);
+  }
   const serving = Boolean(env.WEBPACK_SERVE);
   // `npm start -- --env http` skips the certificate (a container, a browser-only check).
   const https = serving && !env.http ? await devServerHttpsOptions() : null;
@@ -127,11 +223,15 @@ module.exports = async (env = {}, argv = {}) => {
     devtool: production ? false : 'source-map',
     entry: {
       functions: FUNCTIONS_SOURCE,
-      taskpane: './src/taskpane/taskpane.ts',
+      // Uses the modules of functions.js (the engine once in the page).
+      taskpane: { import: './src/taskpane/taskpane.ts', dependOn: 'functions' },
     },
     output: {
       path: path.resolve(__dirname, 'dist'),
       filename: '[name].js',
+      // Files are found next to the page: no run-time detection of the script's address
+      // (functions.js also runs where there is no document, e.g. a JavaScript-only runtime).
+      publicPath: '',
       clean: true,
     },
     resolve: { extensions: ['.ts', '.js'] },
@@ -146,6 +246,8 @@ module.exports = async (env = {}, argv = {}) => {
               onlyCompileBundledFiles: true,
               // ES modules let webpack drop unused engine code; the type check is `npm run typecheck`.
               compilerOptions: { module: 'es2020', moduleResolution: 'bundler', sourceMap: !production },
+              // the specs' documentation text stays out of the bundle (scripts/build/stripSpecDocs.js)
+              getCustomTransformers: () => ({ before: [require('./scripts/build/stripSpecDocs').stripSpecDocs] }),
             },
           },
         },
@@ -171,12 +273,24 @@ module.exports = async (env = {}, argv = {}) => {
         inject: 'body',
       }),
       new ContentSecurityPolicyPlugin(),
+      ...(officeJsLocal ? [new LocalOfficeJsPlugin()] : []),
       new CopyWebpackPlugin({
         patterns: [
           { from: 'manifest/manifest.xml', to: 'manifest.xml' },
           { from: 'assets/icon-*.png', to: 'assets/[name][ext]' },
+          ...(officeJsLocal
+            ? [
+                {
+                  from: path.join(path.dirname(require.resolve('@microsoft/office-js/package.json')), 'dist'),
+                  to: 'office-js',
+                  globOptions: { ignore: ['**/*.debug.js'] },
+                  info: { minimized: true },
+                },
+              ]
+            : []),
         ],
       }),
+      new DeploymentOriginPlugin(origin),
     ],
     devServer: {
       port: DEV_PORT,

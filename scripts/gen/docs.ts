@@ -82,6 +82,8 @@ export function functionPage(s: FunctionSpec): string {
   }
   const errs = errorsFor(s.id);
   out.push('', '## Errors', '');
+  for (const n of s.errors ?? []) out.push(`- ${n.code}: ${n.when}`);
+  if (s.errors?.length) out.push('');
   if (errs.length === 0) out.push('No bad-input cases are listed yet.');
   else {
     out.push('| argument | input | result | the message says |', '|---|---|---|---|');

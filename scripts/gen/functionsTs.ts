@@ -30,7 +30,8 @@ export function paramLine(p: ParamSpec): string {
   if (p.choices) bits.push(`one of ${p.choices.map((c) => `"${c}"`).join(', ')}`);
   const dflt = defaultText(p);
   const text = bits.join('; ');
-  return dflt === null ? text : `${text} (default: ${dflt})`;
+  if (dflt === null) return text;
+  return typeof p.default === 'number' ? `${text} (default ${dflt})` : `${text} (default: ${dflt})`;
 }
 
 /** The formula-bar example of a spec: its first example, with the result the function gives. */
@@ -55,12 +56,10 @@ function wrapper(s: FunctionSpec): string {
   ];
   const params = s.params.map((p) => `${jsName(p)}${p.optional ? '?' : ''}: any[][]`);
   const names = s.params.map(jsName);
-  const oneLine = `export function ${s.id}(${params.join(', ')}): any[][] {`;
-  const head =
-    oneLine.length <= 110 ? [oneLine] : [`export function ${s.id}(`, ...params.map((p) => `  ${p},`), '): any[][] {'];
+  // one line per signature, however long: the file is generated, and read by the metadata plugin
   return [
     ...lines,
-    ...head,
+    `export function ${s.id}(${params.join(', ')}): any[][] {`,
     `  return toExcel(implementation('${s.id}'), ${names.join(', ')});`,
     '}',
   ].join('\n');

@@ -16,7 +16,7 @@ export const DEMO_USAGE = `Usage: potentia demo
 Recalculates assets/templates/${CP_TEMPLATE.file} in memory with the ECHEM functions
 (a fictional water utility's pipe-to-soil survey, invented readings) and prints the
 converted potentials, the -0.850 V vs Cu/CuSO4 check and a zinc-anode couple's EMF.
-Nothing is written. To recalculate a file: potentia recalc IN.xlsx -o OUT.xlsx
+Nothing is written. To recalculate a file: npx potentia recalc IN.xlsx -o OUT.xlsx
 `;
 
 /** The displayed value of a cell after recalculation (its cached result for a formula). */
@@ -88,8 +88,8 @@ export async function demoCommand(argv: string[], io: Io): Promise<number> {
   io.out('\nCautions:\n');
   for (const line of CAUTIONS) io.out(`  - ${line}\n`);
   io.out(
-    '\nNext: potentia recalc assets/templates/cell-voltage-sweep.xlsx -o sweep.xlsx\n' +
-      '      potentia eval \'=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01}, 25)\'\n',
+    '\nNext: npx potentia recalc assets/templates/cell-voltage-sweep.xlsx -o sweep.xlsx\n' +
+      '      npx potentia eval \'=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01}, 25)\'\n',
   );
   return EXIT_OK;
 }

@@ -112,6 +112,6 @@ export function unknownFunctionMessage(name: string, echemNames: readonly string
   const ids = echemNames.map((n) => n.replace(/^ECHEM\./, '')).join(', ');
   return (
     `unknown function ${name}: ${what}${hint} ECHEM functions: ${ids}. ` +
-    'List the built-in potentials with: potentia eval "=ECHEM.LISTTABLE()"'
+    'List the built-in potentials with: npx potentia eval "=ECHEM.LISTTABLE()"'
   );
 }

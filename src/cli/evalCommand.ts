@@ -12,25 +12,42 @@ import { echemFunctionNames, HF_CONFIG, registerEchemFunctions } from './echemPl
 import { EXIT_CELL_ERRORS, EXIT_OK, UsageError } from './io';
 import type { Io } from './io';
 import { explainError, isHfError, spillSize } from './engineValues';
+import { formulaForEngine } from './formulaText';
 
 /** A computed value as eval reports it. */
 export type EvalCell = number | string | boolean | null | { error: string; message: string };
 /** One formula's result: one value, or rows of values for a spill. */
 export type EvalResult = EvalCell | EvalCell[][];
 
-export const EVAL_USAGE = `Usage: potentia eval [--json] [--allow-errors] FORMULA...
+export const EVAL_USAGE = `Usage: potentia eval [--json] [--full] [--allow-errors] FORMULA...
 
 Evaluates each formula and prints its result; a spill prints as rows (tab-separated).
 The leading "=" is optional. Text arguments need double quotes, so quote the whole
 formula for the shell, e.g.
-  potentia eval '=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01}, 25)'
-  potentia eval "=ECHEM.NERNSTSLOPE(37)" "=ECHEM.LISTTABLE(\\"Cu\\")"
+  npx potentia eval '=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01}, 25)'
+  npx potentia eval "=ECHEM.NERNSTSLOPE(37)" "=ECHEM.LISTTABLE(\\"Cu\\")"
 
 Options:
   --json          one JSON value per formula per line: a number, a string, an array of
                   rows, or {"error": "#VALUE!", "message": "..."}
+  --full          print every digit of a number (default: at most 15 significant
+                  digits, as a spreadsheet shows them, so 0.1+0.2 prints 0.3)
   --allow-errors  exit 0 even when a result is an error (otherwise exit code 1)
 `;
+
+/** Significant digits printed by default: what a spreadsheet cell shows at most. */
+export const DISPLAY_DIGITS = 15;
+
+/** A number as printed: rounded to 15 significant digits unless every digit is asked for. */
+export function displayNumber(x: number, full = false): number {
+  if (full || !Number.isFinite(x) || x === 0) return x;
+  return Number(x.toPrecision(DISPLAY_DIGITS));
+}
+
+function displayResult(r: EvalResult, full: boolean): EvalResult {
+  const cell = (c: EvalCell): EvalCell => (typeof c === 'number' ? displayNumber(c, full) : c);
+  return Array.isArray(r) ? r.map((row) => row.map(cell)) : cell(r);
+}
 
 function cellOf(v: HfCellValue, echemNames: readonly string[]): EvalCell {
   if (v === null || v === undefined) return null;
@@ -72,7 +89,7 @@ export function evaluateFormulas(formulas: readonly string[]): EvalResult[] {
   const names = formulas.map((_, i) => `F${i + 1}`);
   formulas.forEach((f, i) => {
     const text = f.trim();
-    sheets[names[i] as string] = [[text.startsWith('=') ? text : `=${text}`]];
+    sheets[names[i] as string] = [[formulaForEngine(text)]];
   });
   const hf = HyperFormula.buildFromSheets(sheets, { ...HF_CONFIG });
   try {
@@ -127,6 +144,7 @@ export function evalCommand(argv: string[], io: Io): number {
     args: argv,
     options: {
       json: { type: 'boolean', default: false },
+      full: { type: 'boolean', default: false },
       'allow-errors': { type: 'boolean', default: false },
       help: { type: 'boolean', short: 'h', default: false },
     },
@@ -138,12 +156,12 @@ export function evalCommand(argv: string[], io: Io): number {
     return EXIT_OK;
   }
   if (positionals.length === 0) {
-    throw new UsageError('eval needs at least one formula, e.g. potentia eval "=ECHEM.NERNSTSLOPE(25)"');
+    throw new UsageError('eval needs at least one formula, e.g. npx potentia eval "=ECHEM.NERNSTSLOPE(25)"');
   }
   const empty = positionals.findIndex((p) => p.trim() === '' || p.trim() === '=');
   if (empty >= 0) throw new UsageError(`formula ${empty + 1} is empty`);
 
-  const results = evaluateFormulas(positionals);
+  const results = evaluateFormulas(positionals).map((r) => displayResult(r, values.full));
   const multiLine = results.some((r) => Array.isArray(r) && r.length > 1);
   results.forEach((r, i) => {
     if (values.json) {

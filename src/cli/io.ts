@@ -27,8 +27,10 @@ export function processIo(): Io {
 export const EXIT_OK = 0;
 /** A formula or a cell computed to an error (and --allow-errors was not given). */
 export const EXIT_CELL_ERRORS = 1;
-/** The command could not run: bad options, missing or unreadable file, output exists. */
+/** The command could not run: bad options, missing or unreadable file, output exists, a limit. */
 export const EXIT_USAGE = 2;
+/** A bug in the runner (an exception nobody expected): reported with its stack. */
+export const EXIT_INTERNAL = 3;
 
 /** A problem with how the command was called: printed with a hint, exit code 2. */
 export class UsageError extends Error {

@@ -4,7 +4,9 @@
  *
  * Calculation by HyperFormula (GPL-3.0 licence, used under 'gpl-v3'), files by ExcelJS.
  */
-import { EXIT_OK, EXIT_USAGE, processIo, UsageError } from './io';
+import { EXIT_INTERNAL, EXIT_OK, EXIT_USAGE, processIo, UsageError } from './io';
+import { packageVersion } from './paths';
+import { forTerminal } from './terminalText';
 import type { Io } from './io';
 
 export const USAGE = `Usage: potentia <command> [options]
@@ -13,13 +15,16 @@ Commands:
   eval FORMULA...           evaluate formulas (ECHEM functions, spreadsheet functions,
                             inline arrays {..}); --json for one JSON value per formula
   recalc IN.xlsx [-o OUT]   recalculate a workbook and write the values (IN.recalc.xlsx)
+  recalc IN... | FOLDER      several workbooks or a folder, in parallel, one summary
   table [--csv]             print the built-in potentials table
   demo                      recalculate a shipped template in memory and show its results
+  --version                 print the version
 
-Run "potentia <command> --help" for a command's options.
+In a checkout of the project the command is "npx potentia" (or "npm run potentia --").
+Run "npx potentia <command> --help" for a command's options.
 Examples:
-  potentia eval '=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01}, 25)'
-  potentia recalc assets/templates/cell-voltage-sweep.xlsx -o sweep.xlsx
+  npx potentia eval '=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01}, 25)'
+  npx potentia recalc assets/templates/cell-voltage-sweep.xlsx -o sweep.xlsx
 
 Results are thermodynamic estimates, not measurements. Calculation by HyperFormula (GPL-3.0).
 `;
@@ -41,10 +46,17 @@ async function helpFor(command: string | undefined): Promise<string | undefined>
 }
 
 /** Runs the command line `argv` (without "node" and the script); returns the exit code. */
-export async function main(argv: readonly string[], io: Io = processIo()): Promise<number> {
+export async function main(argv: readonly string[], rawIo: Io = processIo()): Promise<number> {
+  // Workbook text and formulas may hold control characters: none reaches the terminal.
+  const io: Io = { ...rawIo, out: (t) => rawIo.out(forTerminal(t)), err: (t) => rawIo.err(forTerminal(t)) };
   const [command, ...rest] = argv;
   try {
     switch (command) {
+      case '--version':
+      case '-V':
+      case 'version':
+        io.out(`potentia ${packageVersion()}\n`);
+        return EXIT_OK;
       case undefined:
         io.err(USAGE);
         return EXIT_USAGE;
@@ -72,8 +84,8 @@ export async function main(argv: readonly string[], io: Io = processIo()): Promi
       io.err(`potentia: ${(e as Error).message}\n`);
       io.err(
         which
-          ? `Run "potentia ${which} --help" for its options.\n`
-          : 'Run "potentia --help" for the commands.\n',
+          ? `Run "npx potentia ${which} --help" for its options.\n`
+          : 'Run "npx potentia --help" for the commands.\n',
       );
       return EXIT_USAGE;
     }
@@ -94,9 +106,11 @@ export function run(): void {
     },
     (e: unknown) => {
       process.stderr.write(
-        `potentia: internal error: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}\n`,
+        forTerminal(
+          `potentia: internal error (a bug; please report it with the command line): ${e instanceof Error ? (e.stack ?? e.message) : String(e)}\n`,
+        ),
       );
-      process.exitCode = 3;
+      process.exitCode = EXIT_INTERNAL;
     },
   );
 }

@@ -3,7 +3,8 @@
  * ECHEM functions and the ordinary spreadsheet ones) and writes a copy with the formulas
  * kept and their computed values cached, reporting every cell that computes to an error.
  *
- * Never writes over its input; refuses to replace an existing output without --force.
+ * Never writes over its input; refuses to replace an existing output without --force;
+ * writes atomically (safeWrite.ts); refuses workbooks past the read limits (limits.ts).
  */
 import * as fs from 'node:fs';
 import * as path from 'node:path';
@@ -11,25 +12,42 @@ import { parseArgs } from 'node:util';
 import ExcelJS from 'exceljs';
 import cliProgress from 'cli-progress';
 import { echemFunctionNames } from './echemPlugin';
-import { EXIT_CELL_ERRORS, EXIT_OK, UsageError } from './io';
+import * as os from 'node:os';
+import { Worker } from 'node:worker_threads';
+import { EXIT_CELL_ERRORS, EXIT_INTERNAL, EXIT_OK, EXIT_USAGE, UsageError } from './io';
+import { checkPackage, DEFAULT_LIMITS, DEFAULT_MAX_CELLS, DEFAULT_MAX_UNCOMPRESSED_MB } from './limits';
+import type { ReadLimits } from './limits';
+import { checkOutput, writeFileAtomically } from './safeWrite';
+import { withDynamicArrays } from './dynamicArrays';
 import type { Io } from './io';
 import { buildEngine, loadWorkbook, writeResults } from './workbook';
 import type { RecalcSummary } from './workbook';
 
-export const RECALC_USAGE = `Usage: potentia recalc IN.xlsx [-o OUT.xlsx] [--force] [--allow-errors]
+export const RECALC_USAGE = `Usage: potentia recalc IN.xlsx [-o OUT.xlsx] [options]
+       potentia recalc IN1.xlsx IN2.xlsx ... | FOLDER [-o OUT_FOLDER] [options]
 
 Recalculates every formula of IN.xlsx and writes the workbook, formulas kept, with the
 computed values, to OUT.xlsx (default: IN.recalc.xlsx next to the input). Prints how many
-cells were computed and every error with its sheet, cell and message.
+cells were computed and every error with its sheet, cell and message. Several workbooks,
+or a folder of them, are recalculated in parallel (one worker thread each, up to --jobs)
+with one summary; -o then names an existing folder for the outputs.
+
+The output is written to a temporary file in its folder and put in place in one step: an
+interrupted or failed run leaves an existing output as it was. Never the input, never
+through a symbolic link; an existing output is replaced only with --force.
 
 Options:
-  -o, --output FILE  where to write (never the input itself)
-  -f, --force        replace OUT.xlsx if it exists
-  --allow-errors     exit 0 even when cells compute to errors (otherwise exit code 1)
-  --progress         always show the progress bar on standard error
-  --no-progress      never show it (default: shown on a terminal for large workbooks)
+  -o, --output FILE    where to write (a folder when several workbooks are given)
+  -f, --force          replace OUT.xlsx if it exists
+  --allow-errors       exit 0 even when cells compute to errors (otherwise exit code 1)
+  --max-size MB        refuse a workbook that unpacks to more (default ${DEFAULT_MAX_UNCOMPRESSED_MB})
+  --max-cells N        refuse a workbook with more cells (default ${DEFAULT_MAX_CELLS.toLocaleString('en-US')})
+  -j, --jobs N         workbooks recalculated at once (default: the number of cores)
+  --progress           always show the progress bar on standard error
+  --no-progress        never show it (default: shown on a terminal for large workbooks)
 
-Exit codes: 0 done, 1 some cells compute to errors, 2 the command could not run.
+Exit codes: 0 done, 1 some cells compute to errors, 2 the command could not run (for
+several workbooks: the highest of them).
 `;
 
 /** Formulas above which a progress bar is worth drawing. */
@@ -75,23 +93,20 @@ export function checkInputFile(file: string): void {
   );
 }
 
-function sameFile(a: string, b: string): boolean {
-  const ra = fs.realpathSync(a);
-  let rb = path.resolve(b);
-  try {
-    rb = fs.realpathSync(b);
-  } catch {
-    // b does not exist yet: its resolved path is what counts.
-  }
-  return ra === rb || (process.platform !== 'linux' && ra.toLowerCase() === rb.toLowerCase());
-}
-
-/** Reads an .xlsx file with ExcelJS, turning its failures into a clear message. */
-export async function readWorkbookFile(file: string): Promise<ExcelJS.Workbook> {
+/**
+ * Reads an .xlsx file with ExcelJS, turning its failures into a clear message. The package
+ * is checked against the limits first (unpacked size, cell count), before ExcelJS parses it.
+ */
+export async function readWorkbookFile(
+  file: string,
+  limits: ReadLimits = DEFAULT_LIMITS,
+): Promise<ExcelJS.Workbook> {
   checkInputFile(file);
+  const data = fs.readFileSync(file);
+  checkPackage(file, data, limits);
   const wb = new ExcelJS.Workbook();
   try {
-    await wb.xlsx.readFile(file);
+    await wb.xlsx.load(data as unknown as ExcelJS.Buffer);
   } catch (e) {
     throw new UsageError(
       `cannot read ${file} as an .xlsx workbook (${e instanceof Error ? e.message : String(e)}); ` +
@@ -144,8 +159,9 @@ function makeProgress(io: Io, show: boolean): Progress {
 export function recalcWorkbook(
   wb: ExcelJS.Workbook,
   progress?: { phase: (name: string, total: number) => void; tick: (value: number) => void },
+  maxCells: number = DEFAULT_MAX_CELLS,
 ): RecalcSummary & { warnings: string[] } {
-  const loaded = loadWorkbook(wb);
+  const loaded = loadWorkbook(wb, maxCells);
   progress?.phase('computing', 1);
   const { hf, warnings } = buildEngine(loaded);
   try {
@@ -185,6 +201,107 @@ export function formatSummary(summary: RecalcSummary, input: string, output: str
   return lines.join('\n') + '\n';
 }
 
+/** Options of one recalculation. */
+export interface RecalcOptions {
+  force: boolean;
+  allowErrors: boolean;
+  limits: ReadLimits;
+  /** Draw a progress bar (single workbook only). */
+  progress: 'auto' | 'always' | 'never';
+}
+
+/**
+ * Recalculates one workbook file and writes its output atomically; prints its summary and
+ * warnings to `io`. Returns the exit code for this workbook.
+ */
+export async function recalcFile(
+  input: string,
+  output: string,
+  options: RecalcOptions,
+  io: Io,
+  report?: (summary: RecalcSummary) => void,
+): Promise<number> {
+  if (output.trim() === '') throw new UsageError('the output file name (-o) is empty');
+  checkInputFile(input);
+  checkOutput(input, output, options.force);
+
+  const wb = await readWorkbookFile(input, options.limits);
+  let formulaCount = 0;
+  wb.eachSheet((ws) =>
+    ws.eachRow((row) =>
+      row.eachCell((cell) => {
+        if (cell.type === ExcelJS.ValueType.Formula) formulaCount++;
+      }),
+    ),
+  );
+  const show =
+    options.progress !== 'never' &&
+    (options.progress === 'always' || (io.errIsTTY && formulaCount > PROGRESS_THRESHOLD));
+  const progress = makeProgress(io, show);
+  let summary: RecalcSummary & { warnings: string[] };
+  try {
+    summary = recalcWorkbook(wb, progress, options.limits.maxCells);
+    progress.phase('saving', 1);
+    let data: Uint8Array;
+    try {
+      data = await withDynamicArrays(await workbookBytes(wb), summary.spillAnchors);
+    } catch (e) {
+      throw new UsageError(`cannot write ${output} (${e instanceof Error ? e.message : String(e)})`);
+    }
+    writeFileAtomically(output, data, options.force, input);
+    progress.tick(1);
+  } finally {
+    progress.stop();
+  }
+  for (const w of summary.warnings) io.err(`warning: ${w}\n`);
+  io.out(formatSummary(summary, input, output));
+  report?.(summary);
+  return summary.errors.length > 0 && !options.allowErrors ? EXIT_CELL_ERRORS : EXIT_OK;
+}
+
+/** The bytes of the .xlsx file for a recalculated workbook. */
+async function workbookBytes(wb: ExcelJS.Workbook): Promise<Uint8Array> {
+  return new Uint8Array(await wb.xlsx.writeBuffer());
+}
+
+function positiveNumber(text: string | undefined, option: string, fallback: number): number {
+  if (text === undefined) return fallback;
+  const n = Number(text);
+  if (!Number.isFinite(n) || n <= 0) throw new UsageError(`${option} needs a positive number, got "${text}"`);
+  return n;
+}
+
+/** The workbooks a command line names: files as given, folders by their .xlsx/.xlsm files. */
+export function expandInputs(positionals: readonly string[]): { inputs: string[]; fromFolder: boolean } {
+  const inputs: string[] = [];
+  let fromFolder = false;
+  for (const p of positionals) {
+    let stat: fs.Stats | undefined;
+    try {
+      stat = fs.statSync(p);
+    } catch {
+      stat = undefined;
+    }
+    if (stat?.isDirectory()) {
+      fromFolder = true;
+      const found = fs
+        .readdirSync(p)
+        .filter(
+          (f) =>
+            /\.(xlsx|xlsm)$/i.test(f) &&
+            !/\.recalc\.xlsx$/i.test(f) &&
+            !f.startsWith('~$') &&
+            !f.startsWith('.'),
+        )
+        .sort()
+        .map((f) => path.join(p, f));
+      if (found.length === 0) throw new UsageError(`the folder ${p} holds no .xlsx workbooks`);
+      inputs.push(...found);
+    } else inputs.push(p);
+  }
+  return { inputs, fromFolder };
+}
+
 export async function recalcCommand(argv: string[], io: Io): Promise<number> {
   const { values, positionals } = parseArgs({
     args: argv,
@@ -192,6 +309,9 @@ export async function recalcCommand(argv: string[], io: Io): Promise<number> {
       output: { type: 'string', short: 'o' },
       force: { type: 'boolean', short: 'f', default: false },
       'allow-errors': { type: 'boolean', default: false },
+      'max-size': { type: 'string' },
+      'max-cells': { type: 'string' },
+      jobs: { type: 'string', short: 'j' },
       progress: { type: 'boolean', default: false },
       'no-progress': { type: 'boolean', default: false },
       help: { type: 'boolean', short: 'h', default: false },
@@ -203,57 +323,165 @@ export async function recalcCommand(argv: string[], io: Io): Promise<number> {
     io.out(RECALC_USAGE);
     return EXIT_OK;
   }
-  if (positionals.length !== 1) {
-    throw new UsageError(
-      positionals.length === 0
-        ? 'recalc needs the workbook to recalculate, e.g. potentia recalc plant.xlsx'
-        : `recalc takes one workbook, got ${positionals.length}: ${positionals.join(' ')} (use -o for the output)`,
-    );
+  if (positionals.length === 0) {
+    throw new UsageError('recalc needs the workbook to recalculate, e.g. npx potentia recalc plant.xlsx');
   }
-  const input = positionals[0] as string;
-  const output = values.output ?? defaultOutputPath(input);
-  if (output.trim() === '') throw new UsageError('the output file name (-o) is empty');
-
-  checkInputFile(input);
-  if (sameFile(input, output)) {
-    throw new UsageError(
-      `the output ${output} is the input itself: recalc never overwrites its input; choose another -o`,
-    );
+  const options: RecalcOptions = {
+    force: values.force,
+    allowErrors: values['allow-errors'],
+    limits: {
+      maxUncompressedBytes:
+        positiveNumber(values['max-size'], '--max-size', DEFAULT_MAX_UNCOMPRESSED_MB) * 1024 * 1024,
+      maxCells: Math.floor(positiveNumber(values['max-cells'], '--max-cells', DEFAULT_MAX_CELLS)),
+    },
+    progress: values['no-progress'] ? 'never' : values.progress ? 'always' : 'auto',
+  };
+  const jobs = Math.floor(positiveNumber(values.jobs, '--jobs', os.availableParallelism()));
+  const { inputs, fromFolder } = expandInputs(positionals);
+  if (inputs.length === 1 && !fromFolder) {
+    const input = inputs[0] as string;
+    return recalcFile(input, values.output ?? defaultOutputPath(input), options, io);
   }
-  if (fs.existsSync(output) && !values.force) {
-    throw new UsageError(
-      `${output} already exists: add --force to replace it, or choose another name with -o`,
-    );
-  }
-  const outDir = path.dirname(path.resolve(output));
-  if (!fs.existsSync(outDir)) throw new UsageError(`the folder for the output does not exist: ${outDir}`);
-
-  const wb = await readWorkbookFile(input);
-  let formulaCount = 0;
-  wb.eachSheet((ws) =>
-    ws.eachRow((row) =>
-      row.eachCell((cell) => {
-        if (cell.type === ExcelJS.ValueType.Formula) formulaCount++;
-      }),
-    ),
-  );
-  const show =
-    !values['no-progress'] && (values.progress || (io.errIsTTY && formulaCount > PROGRESS_THRESHOLD));
-  const progress = makeProgress(io, show);
-  let summary: RecalcSummary & { warnings: string[] };
-  try {
-    summary = recalcWorkbook(wb, progress);
-    progress.phase('saving', 1);
-    try {
-      await wb.xlsx.writeFile(output);
-    } catch (e) {
-      throw new UsageError(`cannot write ${output} (${e instanceof Error ? e.message : String(e)})`);
+  let outDir: string | undefined;
+  if (values.output !== undefined) {
+    outDir = values.output;
+    if (!fs.existsSync(outDir) || !fs.statSync(outDir).isDirectory()) {
+      throw new UsageError(
+        `with several workbooks, -o names an existing folder for the outputs; ${outDir} is not one`,
+      );
     }
-    progress.tick(1);
-  } finally {
-    progress.stop();
   }
-  for (const w of summary.warnings) io.err(`warning: ${w}\n`);
-  io.out(formatSummary(summary, input, output));
-  return summary.errors.length > 0 && !values['allow-errors'] ? EXIT_CELL_ERRORS : EXIT_OK;
+  const outputs = inputs.map((i) =>
+    outDir === undefined ? defaultOutputPath(i) : path.join(outDir, path.basename(defaultOutputPath(i))),
+  );
+  const clash = outputs.find((o, k) => outputs.indexOf(o) !== k);
+  if (clash !== undefined)
+    throw new UsageError(`two inputs would both write ${clash}; give them different names`);
+  return recalcMany(inputs, outputs, { ...options, progress: 'never' }, jobs, io);
+}
+
+/** What one workbook of a batch reported. */
+export interface BatchResult {
+  input: string;
+  code: number;
+  out: string;
+  err: string;
+  formulas: number;
+  errors: number;
+}
+
+/** Recalculates one workbook of a batch with its output captured (in a worker or here). */
+export async function recalcForBatch(
+  input: string,
+  output: string,
+  options: RecalcOptions,
+): Promise<BatchResult> {
+  let out = '';
+  let err = '';
+  const sink = { write: () => true } as unknown as NodeJS.WritableStream;
+  const io: Io = { out: (t) => (out += t), err: (t) => (err += t), errIsTTY: false, errStream: sink };
+  try {
+    let formulas = 0;
+    let errors = 0;
+    const code = await recalcFile(input, output, options, io, (s) => {
+      formulas = s.formulas;
+      errors = s.errors.length;
+    });
+    return { input, code, out, err, formulas, errors };
+  } catch (e) {
+    if (e instanceof UsageError)
+      return { input, code: EXIT_USAGE, out, err: `${err}potentia: ${e.message}\n`, formulas: 0, errors: 0 };
+    const text = e instanceof Error ? (e.stack ?? e.message) : String(e);
+    return {
+      input,
+      code: EXIT_INTERNAL,
+      out,
+      err: `${err}potentia: internal error: ${text}\n`,
+      formulas: 0,
+      errors: 0,
+    };
+  }
+}
+
+/** The compiled worker next to this module, when the runner runs compiled (not under ts-jest). */
+function workerScript(): string | undefined {
+  const file = path.join(__dirname, 'recalcWorker.js');
+  return __filename.endsWith('.js') && fs.existsSync(file) ? file : undefined;
+}
+
+function runInWorker(
+  script: string,
+  input: string,
+  output: string,
+  options: RecalcOptions,
+): Promise<BatchResult> {
+  return new Promise((resolve) => {
+    const worker = new Worker(script, { workerData: { input, output, options } });
+    let settled = false;
+    worker.once('message', (r: BatchResult) => {
+      settled = true;
+      resolve(r);
+    });
+    worker.once('error', (e) => {
+      if (settled) return;
+      settled = true;
+      resolve({
+        input,
+        code: EXIT_INTERNAL,
+        out: '',
+        err: `potentia: internal error: ${e.message}\n`,
+        formulas: 0,
+        errors: 0,
+      });
+    });
+    worker.once('exit', (code) => {
+      if (settled) return;
+      settled = true;
+      resolve({
+        input,
+        code: EXIT_INTERNAL,
+        out: '',
+        err: `potentia: the worker for ${input} stopped (exit ${code})\n`,
+        formulas: 0,
+        errors: 0,
+      });
+    });
+  });
+}
+
+/** Recalculates several workbooks, up to `jobs` at once in worker threads; one summary. */
+export async function recalcMany(
+  inputs: readonly string[],
+  outputs: readonly string[],
+  options: RecalcOptions,
+  jobs: number,
+  io: Io,
+): Promise<number> {
+  const script = workerScript();
+  const results: BatchResult[] = new Array<BatchResult>(inputs.length);
+  let next = 0;
+  const lane = async (): Promise<void> => {
+    for (let k = next++; k < inputs.length; k = next++) {
+      const input = inputs[k] as string;
+      const output = outputs[k] as string;
+      const r = script
+        ? await runInWorker(script, input, output, options)
+        : await recalcForBatch(input, output, options);
+      results[k] = r;
+      io.out(r.out);
+      io.err(r.err);
+    }
+  };
+  const width = script ? Math.max(1, Math.min(jobs, inputs.length)) : 1;
+  await Promise.all(Array.from({ length: width }, lane));
+  const failed = results.filter((r) => r.code >= EXIT_USAGE).length;
+  const withErrors = results.filter((r) => r.errors > 0).length;
+  const formulas = results.reduce((a, r) => a + r.formulas, 0);
+  const errors = results.reduce((a, r) => a + r.errors, 0);
+  io.out(
+    `Recalculated ${plural(inputs.length, 'workbook')} (${plural(width, 'worker')}): ` +
+      `${(inputs.length - failed).toLocaleString('en-US')} written, ${withErrors.toLocaleString('en-US')} with cell errors, ` +
+      `${failed.toLocaleString('en-US')} could not run; ${plural(formulas, 'formula')}, ${plural(errors, 'error')}\n`,
+  );
+  return results.reduce((worst, r) => Math.max(worst, r.code), EXIT_OK);
 }

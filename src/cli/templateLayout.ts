@@ -4,9 +4,10 @@
  * read results back through them, so the three cannot drift apart.
  */
 import * as path from 'node:path';
+import { packageRoot } from './paths';
 
 /** The folder of the shipped templates. */
-export const TEMPLATE_DIR = path.resolve(__dirname, '..', '..', 'assets', 'templates');
+export const TEMPLATE_DIR = path.join(packageRoot(), 'assets', 'templates');
 
 /** The potentials range every template's formulas use as their `table` argument. */
 export const POTENTIALS_SHEET = 'Potentials';

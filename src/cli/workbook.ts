@@ -12,7 +12,8 @@
  * Writing: each formula cell keeps its formula and gets its newly computed result as the
  * cached value (what a spreadsheet program shows before it recalculates). A formula whose
  * result spills over several cells is written as an array formula over the spill range,
- * with the spilled values in the cells of that range.
+ * with the spilled values in the cells of that range, and then marked as a dynamic array
+ * (dynamicArrays.ts) when the file is saved.
  */
 import ExcelJS from 'exceljs';
 import { HyperFormula } from 'hyperformula';
@@ -20,6 +21,9 @@ import type { CellValue as HfCellValue, RawCellContent } from 'hyperformula';
 import { HF_CONFIG, registerEchemFunctions } from './echemPlugin';
 import { explainError, isHfError, spillSize } from './engineValues';
 import type { HfErrorValue } from './engineValues';
+import { formulaForEngine } from './formulaText';
+import { UsageError } from './io';
+import { DEFAULT_MAX_CELLS, ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
 
 /** How a formula is stored in the file. */
 export type FormulaKind = 'single' | 'shared-master' | 'shared' | 'array';
@@ -62,6 +66,8 @@ export interface RecalcSummary {
   /** Cells written: formula cells plus cells filled by spills. */
   cellsComputed: number;
   errors: CellErrorReport[];
+  /** The anchor cells ("E7") of formulas written over a range, by sheet: written as dynamic arrays. */
+  spillAnchors: Map<string, Set<string>>;
 }
 
 interface FormulaModel {
@@ -118,14 +124,7 @@ function dateSerial(d: Date): number {
   return (d.getTime() - EXCEL_EPOCH_MS) / 86400000;
 }
 
-/**
- * Formula text as HyperFormula reads it: a leading "=", and without the prefixes that
- * spreadsheet files put before newer functions (`_xlfn.`, `_xlws.`).
- */
-export function formulaForEngine(stored: string): string {
-  const body = stored.startsWith('=') ? stored.slice(1) : stored;
-  return `=${body.replace(/_xlfn\.|_xlws\./gi, '')}`;
-}
+export { formulaForEngine } from './formulaText';
 
 export const ERROR_LITERALS = new Set(['#N/A', '#REF!', '#NAME?', '#DIV/0!', '#NULL!', '#VALUE!', '#NUM!']);
 
@@ -146,8 +145,15 @@ function valueForEngine(v: ExcelJS.CellValue): RawCellContent {
   return null;
 }
 
-/** Reads a workbook's sheets, values and formulas for HyperFormula. */
-export function loadWorkbook(wb: ExcelJS.Workbook): LoadedWorkbook {
+/**
+ * Reads a workbook's sheets, values and formulas for HyperFormula.
+ *
+ * @param maxCells the most cells an array formula's range may cover (a range larger than
+ *   that, or past the engine's sheet size, is refused as damaged)
+ * @throws UsageError for a sheet larger than the calculation engine holds or an array
+ *   formula whose range is larger than any data
+ */
+export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MAX_CELLS): LoadedWorkbook {
   const sheetNames: string[] = [];
   const sheets: Record<string, RawCellContent[][]> = {};
   const formulas: FormulaCell[] = [];
@@ -155,6 +161,20 @@ export function loadWorkbook(wb: ExcelJS.Workbook): LoadedWorkbook {
   wb.worksheets.forEach((ws, sheetIndex) => {
     const name = ws.name;
     sheetNames.push(name);
+    const lastRow = ws.rowCount;
+    if (lastRow > ENGINE_MAX_ROWS) {
+      throw new UsageError(
+        `sheet "${name}" has data down to row ${lastRow.toLocaleString('en-US')}; the calculation engine holds ` +
+          `${ENGINE_MAX_ROWS.toLocaleString('en-US')} rows a sheet: split the sheet, or clear the cells below row ` +
+          `${ENGINE_MAX_ROWS.toLocaleString('en-US')} that hold stray content`,
+      );
+    }
+    if (ws.columnCount > ENGINE_MAX_COLUMNS) {
+      throw new UsageError(
+        `sheet "${name}" has data in column ${ws.columnCount.toLocaleString('en-US')}; the calculation engine holds ` +
+          `${ENGINE_MAX_COLUMNS.toLocaleString('en-US')} columns a sheet`,
+      );
+    }
     const grid: RawCellContent[][] = [];
     const put = (row: number, col: number, content: RawCellContent): void => {
       while (grid.length <= row) grid.push([]);
@@ -171,6 +191,14 @@ export function loadWorkbook(wb: ExcelJS.Workbook): LoadedWorkbook {
         if (cell.type === ExcelJS.ValueType.Formula && m && m.shareType === 'array' && m.ref) {
           const rg = parseRange(m.ref);
           if (!rg) return;
+          const area = (rg.bottom - rg.top + 1) * (rg.right - rg.left + 1);
+          if (area > maxCells || rg.bottom >= ENGINE_MAX_ROWS || rg.right >= ENGINE_MAX_COLUMNS) {
+            throw new UsageError(
+              `the array formula in ${name}!${a1(Number(cell.row) - 1, Number(cell.col) - 1)} claims the range ${m.ref} ` +
+                `(${area.toLocaleString('en-US')} cells), larger than the sheet's data or the engine's sheet; ` +
+                'the file is damaged: re-enter the formula in a spreadsheet program and save again',
+            );
+          }
           for (let r = rg.top; r <= rg.bottom; r++) {
             for (let c = rg.left; c <= rg.right; c++) {
               if (r !== Number(cell.row) - 1 || c !== Number(cell.col) - 1) covered.add(`${r},${c}`);
@@ -229,7 +257,17 @@ export function loadWorkbook(wb: ExcelJS.Workbook): LoadedWorkbook {
 /** Builds a HyperFormula engine (with the ECHEM functions) and computes the workbook. */
 export function buildEngine(loaded: LoadedWorkbook): { hf: HyperFormula; warnings: string[] } {
   registerEchemFunctions();
-  const hf = HyperFormula.buildFromSheets(loaded.sheets, { ...HF_CONFIG });
+  let hf: HyperFormula;
+  try {
+    hf = HyperFormula.buildFromSheets(loaded.sheets, { ...HF_CONFIG });
+  } catch (e) {
+    // The engine refuses what it cannot hold (sheet size, names): a limit, not a bug.
+    const message = e instanceof Error ? e.message : String(e);
+    if (e instanceof Error && /limit|exceed|size|invalid|sheet/i.test(`${e.name} ${message}`)) {
+      throw new UsageError(`the calculation engine cannot load this workbook: ${message}`);
+    }
+    throw e;
+  }
   const warnings: string[] = [];
   for (const n of loaded.names) {
     try {
@@ -276,6 +314,7 @@ export function writeResults(
   onProgress?: (done: number) => void,
 ): RecalcSummary {
   const errors: CellErrorReport[] = [];
+  const spillAnchors = new Map<string, Set<string>>();
   let cellsComputed = 0;
   let done = 0;
   for (const f of loaded.formulas) {
@@ -300,6 +339,9 @@ export function writeResults(
 
     const spills = size.width > 1 || size.height > 1;
     if (spills || f.kind === 'array') {
+      let onSheet = spillAnchors.get(f.sheet);
+      if (onSheet === undefined) spillAnchors.set(f.sheet, (onSheet = new Set()));
+      onSheet.add(a1(f.row, f.col));
       const ref = `${a1(f.row, f.col)}:${a1(f.row + size.height - 1, f.col + size.width - 1)}`;
       cell.value = { formula: f.formula, shareType: 'array', ref, result } as unknown as ExcelJS.CellValue;
       // Cells of the stored array range that the new result no longer covers are emptied.
@@ -347,5 +389,5 @@ export function writeResults(
     done++;
     onProgress?.(done);
   }
-  return { formulas: loaded.formulas.length, cellsComputed, errors };
+  return { formulas: loaded.formulas.length, cellsComputed, errors, spillAnchors };
 }

@@ -1,37 +1,75 @@
 /**
- * Caches of parsed user tables and resolved reactions, keyed by content, so a
- * sweep of 100,000 cases (or 100,000 single-case calls) parses and resolves once.
- * Bounded: the oldest entries are dropped past a limit.
+ * The engine's caches: parsed user tables and resolved reactions, cached by content, so a
+ * sweep of 100,000 cases (or 100,000 single-case calls) parses and resolves once; and the
+ * one registry of all the engine's caches (src/engine/cacheRegistry.ts, re-exported here),
+ * with one clear ({@link clearCaches}) and one report ({@link cacheStats}).
+ *
+ * Other modules make their caches with `ByteBoundedCache` (which registers itself) or
+ * register their own with `registerCache`, importing them from './cacheRegistry'.
  */
 import { type PotentialTable, readUserTable, defaultTable, tableKey } from './table/potentialTable';
 import { type Resolved, resolveReaction } from './table/resolve';
 import { type NernstForm, nernstForm } from './thermo/nernstForm';
 import { EngineError } from './errors';
+import { ByteBoundedCache, clearRegisteredCaches, registerCache } from './cacheRegistry';
 
-class BoundedCache<V> {
-  private readonly map = new Map<string, V>();
-  constructor(private readonly limit: number) {}
-  get(k: string): V | undefined {
-    return this.map.get(k);
-  }
-  set(k: string, v: V): void {
-    if (this.map.size >= this.limit) {
-      const first = this.map.keys().next();
-      if (!first.done) this.map.delete(first.value);
-    }
-    this.map.set(k, v);
-  }
-  clear(): void {
-    this.map.clear();
-  }
-}
+export {
+  ByteBoundedCache,
+  approximateBytes,
+  cacheStats,
+  registerCache,
+  type CacheLimits,
+  type CacheStats,
+  type RegisteredCache,
+} from './cacheRegistry';
 
-const tables = new BoundedCache<PotentialTable>(64);
+/** The byte budget of the resolved-reaction cache (all tables together). */
+export const RESOLUTION_CACHE_BYTES = 64 * 1024 * 1024;
+/** The byte budget of the parsed-table cache. */
+export const TABLE_CACHE_BYTES = 32 * 1024 * 1024;
+
+// Table keys are the table's content as JSON: the size is the key's, which dominates.
+const tables = new ByteBoundedCache<PotentialTable>('userTables', {
+  maxEntries: 64,
+  maxBytes: TABLE_CACHE_BYTES,
+  sizeOf: (k) => 64 + 8 * k.length,
+});
 type Outcome = { ok: true; form: NernstForm } | { ok: false; error: EngineError };
-const resolutions = new Map<string, BoundedCache<Outcome>>();
+/** Resolutions by table key, then by reaction text: one budget for all of them. */
+const resolutions = new ByteBoundedCache<Outcome>('resolvedReactions', {
+  maxEntries: 4096,
+  maxBytes: RESOLUTION_CACHE_BYTES,
+});
 let last: { key: string; text: string; outcome: Outcome } | null = null;
 let lastTableCells: unknown = undefined;
 let lastTable: { key: string; table: PotentialTable } | null = null;
+/** Short numbers stand for table keys inside the resolution cache (a key may be long JSON). */
+const tableIds = new Map<string, number>();
+
+registerCache({
+  name: 'lastUsed',
+  clear: () => {
+    last = null;
+    lastTableCells = undefined;
+    lastTable = null;
+    tableIds.clear();
+  },
+  stats: () => ({ name: 'lastUsed', entries: tableIds.size, bytes: 0 }),
+});
+
+function resolutionKey(tableKeyText: string, text: string): string {
+  let id = tableIds.get(tableKeyText);
+  if (id === undefined) {
+    if (tableIds.size >= 64) {
+      // Ids are reused only after both maps are emptied, so no key can mean two tables.
+      tableIds.clear();
+      resolutions.clear();
+    }
+    id = tableIds.size;
+    tableIds.set(tableKeyText, id);
+  }
+  return `${id}\u0000${text}`;
+}
 
 /**
  * The potentials table for a user range (cached by content); the built-in table where none is given.
@@ -72,13 +110,8 @@ export function compiledReaction(
     if (!last.outcome.ok) throw last.outcome.error;
     return last.outcome.form;
   }
-  let byText = resolutions.get(key);
-  if (!byText) {
-    if (resolutions.size >= 64) resolutions.clear();
-    byText = new BoundedCache<Outcome>(4096);
-    resolutions.set(key, byText);
-  }
-  let o = byText.get(text);
+  const cacheKey = resolutionKey(key, text);
+  let o = resolutions.get(cacheKey);
   if (!o) {
     try {
       o = { ok: true, form: nernstForm(resolveReaction(text, table)) };
@@ -86,7 +119,7 @@ export function compiledReaction(
       if (!(e instanceof EngineError)) throw e;
       o = { ok: false, error: e };
     }
-    byText.set(text, o);
+    resolutions.set(cacheKey, o);
   }
   last = { key, text, outcome: o };
   if (!o.ok) throw o.error;
@@ -101,11 +134,12 @@ export function resolvedReaction(
   return compiledReaction(text, cells).resolved;
 }
 
-/** Drop all cached tables and resolutions (tests, benchmarks). */
+/**
+ * Drops everything every registered cache holds (tests, benchmarks, a host freeing memory).
+ *
+ * @example
+ * clearCaches(); cacheStats().every((c) => c.entries === 0) // true
+ */
 export function clearCaches(): void {
-  tables.clear();
-  resolutions.clear();
-  last = null;
-  lastTableCells = undefined;
-  lastTable = null;
+  clearRegisteredCaches();
 }

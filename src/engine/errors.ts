@@ -18,6 +18,15 @@
 export type EngineErrorKind =
   'parse' | 'argument' | 'unbalanced' | 'notFound' | 'ambiguous' | 'shape' | 'range';
 
+/**
+ * A pointer to a next step that the function layer words for its host (e.g. the name of the
+ * worksheet function that does it), so that engine messages name no worksheet function.
+ * - `balance`    the reaction can be balanced automatically
+ * - `logForm`    the log form of the result never overflows
+ * - `checkTable` the user's table can be checked row by row
+ */
+export type EngineHint = 'balance' | 'logForm' | 'checkTable';
+
 export class EngineError extends Error {
   /** What went wrong, for mapping to a spreadsheet error code. */
   readonly kind: EngineErrorKind;
@@ -25,13 +34,16 @@ export class EngineError extends Error {
   readonly argument: string | undefined;
   /** 1-based character position in the text, for parse errors. */
   readonly position: number | undefined;
+  /** A next step for the host to word (see {@link EngineHint}). */
+  readonly hint: EngineHint | undefined;
 
-  constructor(kind: EngineErrorKind, message: string, argument?: string, position?: number) {
+  constructor(kind: EngineErrorKind, message: string, argument?: string, position?: number, hint?: EngineHint) {
     super(message);
     this.name = 'EngineError';
     this.kind = kind;
     this.argument = argument;
     this.position = position;
+    this.hint = hint;
   }
 }
 

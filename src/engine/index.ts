@@ -2,7 +2,7 @@
  * Potentia engine: the one entry point for functions/, taskpane/ and cli/.
  * Pure TypeScript; no Office, no DOM.
  */
-export { EngineError, isEngineError, type EngineErrorKind } from './errors';
+export { EngineError, isEngineError, type EngineErrorKind, type EngineHint } from './errors';
 export * from './constants';
 export { type Rational, formatRational } from './rational';
 
@@ -146,6 +146,21 @@ export {
   reactionEntropyJK,
   thermoneutralV,
 } from './thermo/reactionEnergy';
+// runner and build (issue 10): the cache registry and the parser's limits
+export {
+  registerCache,
+  cacheStats,
+  approximateBytes,
+  ByteBoundedCache,
+  type CacheStats,
+  type CacheLimits,
+  type RegisteredCache,
+} from './cache';
+export { MAX_NOTATION_CHARS } from './notation/source';
+export { MAX_FORMULA_NESTING, MAX_ATOM_COUNT } from './notation/formula';
+export { MAX_CHARGE } from './notation/species';
+export { MAX_COEFFICIENT_PART } from './notation/reaction';
+
 // species-header grammar (i11): one reading of `left:Ag+`, `l:Ag+`, `pH`, `left:pH`
 export {
   type SpeciesHeaderParts,

@@ -3,7 +3,7 @@
  * Messages travel on #VALUE! and #N/A (the codes whose messages a spreadsheet
  * shows); #NUM! is for numeric range; #N/A for "not in the table".
  */
-import { isEngineError, type EngineErrorKind } from '../engine';
+import { isEngineError, type EngineErrorKind, type EngineHint } from '../engine';
 import type { CellError, ErrorCode } from './cellTypes';
 
 const CODE_BY_KIND: Record<EngineErrorKind, ErrorCode> = {
@@ -14,6 +14,13 @@ const CODE_BY_KIND: Record<EngineErrorKind, ErrorCode> = {
   shape: '#VALUE!',
   notFound: '#N/A',
   range: '#NUM!',
+};
+
+/** The engine's hints, worded with the worksheet functions that take the next step. */
+const HINT_TEXT: Record<EngineHint, string> = {
+  balance: 'Or let BALANCE balance it.',
+  logForm: 'Use LOGK, whose log form never overflows.',
+  checkTable: 'CHECKTABLE lists every problem of the table.',
 };
 
 /** A cell error value. */
@@ -29,7 +36,8 @@ export function cellError(code: ErrorCode, message: string): CellError {
  * toCellError(new EngineError('notFound', 'not in the table')).code // '#N/A'
  */
 export function toCellError(e: unknown): CellError {
-  if (isEngineError(e)) return cellError(CODE_BY_KIND[e.kind], e.message);
+  if (isEngineError(e))
+    return cellError(CODE_BY_KIND[e.kind], e.hint ? `${e.message} ${HINT_TEXT[e.hint]}` : e.message);
   const msg = e instanceof Error ? e.message : String(e);
   return cellError('#VALUE!', `Internal error: ${msg}. Please report this with the formula that caused it.`);
 }

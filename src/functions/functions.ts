@@ -26,17 +26,11 @@ function implementation(id: string): (...args: Arg[]) => Result {
  * @param reaction Half-reaction (a reduction), couple such as "Cu2+/Cu", cell diagram such as "Zn | Zn2+ || Cu2+ | Cu", or full reaction; one cell or a column of cases
  * @param [species] Names of the species whose values follow, one per column of values, e.g. "Cu2+", "O2", "pH" or "left:Ag+" (default: standard state)
  * @param [values] Activities: mol/L for solutes, bar for gases, the pH under a "pH" column; one row per case (default: none)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns E in V vs SHE, one row per case
  */
-export function POTENTIAL(
-  reaction: any[][],
-  species?: any[][],
-  values?: any[][],
-  temp_C?: any[][],
-  table?: any[][],
-): any[][] {
+export function POTENTIAL(reaction: any[][], species?: any[][], values?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
   return toExcel(implementation('POTENTIAL'), reaction, species, values, temp_C, table);
 }
 
@@ -45,7 +39,7 @@ export function POTENTIAL(
  * @customfunction STDPOTENTIAL
  * @helpurl https://localhost:3000/taskpane.html#ref-stdpotential
  * @param reaction Half-reaction (a reduction), couple such as "Cu2+/Cu", cell diagram such as "Zn | Zn2+ || Cu2+ | Cu", or full reaction; one cell or a column of cases
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns E° in V vs SHE, one row per case
  */
@@ -91,12 +85,7 @@ export function LOGQ(reaction: any[][], species: any[][], values: any[][], table
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns Cell notation text, one row per case
  */
-export function CELLNOTATION(
-  reaction: any[][],
-  species?: any[][],
-  values?: any[][],
-  table?: any[][],
-): any[][] {
+export function CELLNOTATION(reaction: any[][], species?: any[][], values?: any[][], table?: any[][]): any[][] {
   return toExcel(implementation('CELLNOTATION'), reaction, species, values, table);
 }
 
@@ -106,7 +95,7 @@ export function CELLNOTATION(
  * @helpurl https://localhost:3000/taskpane.html#ref-logk
  * @param reaction_or_E A reaction, couple or cell (E° and n from the table), or a potential in V (then give n); one cell or a column of cases
  * @param [n] Electrons transferred (needed with a potential); > 0, whole (default: from the reaction)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns log10 K, one row per case
  */
@@ -120,7 +109,7 @@ export function LOGK(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], tabl
  * @helpurl https://localhost:3000/taskpane.html#ref-eqconst
  * @param reaction_or_E A reaction, couple or cell (E° and n from the table), or a potential in V (then give n); one cell or a column of cases
  * @param [n] Electrons transferred (needed with a potential); > 0, whole (default: from the reaction)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns K (dimensionless), one row per case
  */
@@ -134,7 +123,7 @@ export function EQCONST(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], t
  * @helpurl https://localhost:3000/taskpane.html#ref-gibbs
  * @param reaction_or_E A reaction, couple or cell (E° and n from the table), or a potential in V (then give n); one cell or a column of cases
  * @param [n] Electrons transferred (needed with a potential); > 0, whole (default: from the reaction)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns ΔG in kJ/mol, one row per case
  */
@@ -171,8 +160,8 @@ export function BALANCE(reaction: any[][], medium?: any[][], table?: any[][]): a
  * Nernst slope RT ln10/(nF) in V per decade of activity from the exact SI constants; a negative n gives the negative slope of an anion-responsive electrode. Example: =ECHEM.NERNSTSLOPE(25) gives 0.0591593.
  * @customfunction NERNSTSLOPE
  * @helpurl https://localhost:3000/taskpane.html#ref-nernstslope
- * @param [temp_C] Temperature in °C; one cell or a column of cases; > −273.15 °C, ≤ 10000 °C (default: 25)
- * @param [n] Electrons (charge of the sensed ion); signed: −1 for an anion-responsive electrode; not 0 (default: 1)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; > −273.15 °C, ≤ 10000 °C (default 25)
+ * @param [n] Electrons (charge of the sensed ion); signed: −1 for an anion-responsive electrode; not 0 (default 1)
  * @returns Slope in V per decade, one row per case
  */
 export function NERNSTSLOPE(temp_C?: any[][], n?: any[][]): any[][] {
@@ -199,18 +188,11 @@ export function COMBINE(potentials: any[][], n: any[][]): any[][] {
  * @param value_left Activity of the varying species at the left electrode (mol/L, or bar for a gas); ≥ 0
  * @param value_right Activity of the varying species at the right electrode (mol/L, or bar for a gas); ≥ 0
  * @param [species] The species whose activity differs (default: the couple's only dissolved species)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns EMF in V, one row per case
  */
-export function CONCCELL(
-  reaction: any[][],
-  value_left: any[][],
-  value_right: any[][],
-  species?: any[][],
-  temp_C?: any[][],
-  table?: any[][],
-): any[][] {
+export function CONCCELL(reaction: any[][], value_left: any[][], value_right: any[][], species?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
   return toExcel(implementation('CONCCELL'), reaction, value_left, value_right, species, temp_C, table);
 }
 
@@ -222,16 +204,10 @@ export function CONCCELL(
  * @param ionic_strength Ionic strength in mol/kg; one cell or a column of cases; ≥ 0 mol/kg
  * @param [model] Activity model: "limiting" (Debye–Hückel limiting law), "extended" (with ion size) or "davies"; one of "limiting", "extended", "davies" (default: "davies")
  * @param [ion_size] Ion-size parameter å in Å, for the extended model; > 0 Å (default: Kielland's value for the ion)
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns γ (dimensionless), one row per case
  */
-export function ACTCOEF(
-  species: any[][],
-  ionic_strength: any[][],
-  model?: any[][],
-  ion_size?: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function ACTCOEF(species: any[][], ionic_strength: any[][], model?: any[][], ion_size?: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('ACTCOEF'), species, ionic_strength, model, ion_size, temp_C);
 }
 
@@ -243,16 +219,10 @@ export function ACTCOEF(
  * @param values Molalities in mol/kg, one per species column (a "pH" column passes through); one row per case
  * @param [ionic_strength] Ionic strength in mol/kg; one cell or a column of cases; ≥ 0 mol/kg (default: from the row)
  * @param [model] Activity model: "limiting" (Debye–Hückel limiting law), "extended" (with ion size) or "davies"; one of "limiting", "extended", "davies" (default: "davies")
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns Activities, one row per case and one column per species
  */
-export function ACTIVITY(
-  species: any[][],
-  values: any[][],
-  ionic_strength?: any[][],
-  model?: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function ACTIVITY(species: any[][], values: any[][], ionic_strength?: any[][], model?: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('ACTIVITY'), species, values, ionic_strength, model, temp_C);
 }
 
@@ -276,16 +246,10 @@ export function IONICSTR(species: any[][], values: any[][]): any[][] {
  * @param from_ref The reference it was measured against, e.g. "SCE"
  * @param to_ref The reference to express it against, e.g. "SHE"
  * @param [pH] pH of the solution, for RHE; −2–16 (default: none (needed for RHE))
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns The potential in V vs to_ref, one row per case
  */
-export function VSREF(
-  potential: any[][],
-  from_ref: any[][],
-  to_ref: any[][],
-  pH?: any[][],
-  temp_C?: any[][],
-): any[][] {
+export function VSREF(potential: any[][], from_ref: any[][], to_ref: any[][], pH?: any[][], temp_C?: any[][]): any[][] {
   return toExcel(implementation('VSREF'), potential, from_ref, to_ref, pH, temp_C);
 }
 
@@ -340,7 +304,7 @@ export function FORMATION(species: any[][], quantity?: any[][]): any[][] {
  * @customfunction ENTHALPY
  * @helpurl https://localhost:3000/taskpane.html#ref-enthalpy
  * @param reaction A reaction (also one that is not a redox reaction, e.g. "PbSO4(s) -> Pb2+ + SO4^2-"), half-reaction, couple or cell; one cell or a column of cases
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns ΔrH° in kJ/mol, one row per case
  */
@@ -353,7 +317,7 @@ export function ENTHALPY(reaction: any[][], temp_C?: any[][], table?: any[][]): 
  * @customfunction ENTROPY
  * @helpurl https://localhost:3000/taskpane.html#ref-entropy
  * @param reaction A reaction (also one that is not a redox reaction, e.g. "PbSO4(s) -> Pb2+ + SO4^2-"), half-reaction, couple or cell; one cell or a column of cases
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
  * @returns ΔrS° in J/(mol·K), one row per case
  */
@@ -366,7 +330,7 @@ export function ENTROPY(reaction: any[][], temp_C?: any[][], table?: any[][]): a
  * @customfunction THERMONEUTRAL
  * @helpurl https://localhost:3000/taskpane.html#ref-thermoneutral
  * @param reaction A reaction (also one that is not a redox reaction, e.g. "PbSO4(s) -> Pb2+ + SO4^2-"), half-reaction, couple or cell; one cell or a column of cases
- * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default: 25)
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
  * @returns V, one row per case
  */
 export function THERMONEUTRAL(reaction: any[][], temp_C?: any[][]): any[][] {

@@ -104,15 +104,15 @@ const SAMPLES: Record<string, unknown[]> = {
       [0.01, 0.01],
       [0.1, 0.1],
     ],
-    cell('davies'),
     null,
+    cell('davies'),
     null,
   ],
   IONICSTR: [[['Na+', 'SO4^2-']], [[0.02, 0.01]]],
   COMBINE: [[[0.771, -0.447]], [[1, 2]]],
   SOURCE: [cell('Fe3+/Fe2+'), null],
-  DIAGRAM: [cell('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]], null],
-  POTENTIALS: [cell('Fe')],
+  CELLNOTATION: [cell('Zn + Cu2+ -> Zn2+ + Cu'), [['Zn2+', 'Cu2+']], [[0.1, 0.01]], null],
+  LISTTABLE: [cell('Fe')],
   CHECKTABLE: [
     [
       ['Half-reaction', 'E° (V)', 'dE°/dT (mV/K)', 'Source'],

@@ -138,7 +138,8 @@ test('an omitted middle argument reads as omitted (standard temperature)', () =>
 test('a blocked spill is reported with what to do', () => {
   const hf = build([['=ECHEM.NERNSTSLOPE({25;50;75})'], [null], ['in the way']]);
   const v = hf.getCellValue(at(0, 0));
-  expect(isHfError(v) && v.value).toBe('#SPILL!');
-  if (isHfError(v)) expect(explainError(v, echemFunctionNames())).toContain('clear the cells it spills into');
+  if (!isHfError(v)) throw new Error(`expected #SPILL!, got ${String(v)}`);
+  expect(v.value).toBe('#SPILL!');
+  expect(explainError(v, echemFunctionNames())).toContain('clear the cells it spills into');
   hf.destroy();
 });

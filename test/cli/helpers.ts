@@ -2,11 +2,12 @@
  * Shared pieces of the runner's tests: a captured Io, temporary folders, the launcher, and
  * the Nernst equation written out by hand with the SI exact constants.
  */
-import { execFile } from 'node:child_process';
+import { execFile, execFileSync } from 'node:child_process';
 import * as fs from 'node:fs';
 import * as os from 'node:os';
 import * as path from 'node:path';
 import type { Io } from '../../src/cli/io';
+import { main } from '../../src/cli/main';
 
 /** Repository root. */
 export const ROOT = path.resolve(__dirname, '..', '..');
@@ -62,8 +63,64 @@ export interface RunResult {
   stderr: string;
 }
 
-/** Runs `node bin/potentia.js ...args` as a child process. */
-export function runCli(args: readonly string[], cwd = ROOT): Promise<RunResult> {
+const BUILD_LOCK = path.join(ROOT, '.build-cli-test.lock');
+let cliBuilt = false;
+
+/**
+ * Compiles the runner into build/cli (incrementally: quick when nothing changed) before a
+ * test starts `bin/potentia.js`, so a spawned runner never runs stale JavaScript. One jest
+ * worker builds at a time (a lock folder); the others wait.
+ */
+export async function ensureCliBuilt(): Promise<void> {
+  if (cliBuilt) return;
+  const deadline = Date.now() + 300_000;
+  for (;;) {
+    try {
+      fs.mkdirSync(BUILD_LOCK);
+      break;
+    } catch {
+      if (Date.now() > deadline)
+        throw new Error(`build/cli was not built in time; remove ${BUILD_LOCK} if it is stale.`);
+      await new Promise((r) => setTimeout(r, 200));
+    }
+  }
+  try {
+    execFileSync(process.execPath, [require.resolve('typescript/bin/tsc'), '-p', 'tsconfig.build-cli.json'], {
+      cwd: ROOT,
+      stdio: 'pipe',
+    });
+    // Mark the build current (an incremental build that changed nothing keeps its old date),
+    // so the launcher does not rebuild it again in each child process.
+    const info = path.join(ROOT, 'build', 'cli', '.tsbuildinfo');
+    const now = new Date();
+    if (fs.existsSync(info)) fs.utimesSync(info, now, now);
+    cliBuilt = true;
+  } finally {
+    fs.rmdirSync(BUILD_LOCK);
+  }
+}
+
+/**
+ * Runs the command in this process (no child process, no start-up cost): `main` with a
+ * captured Io. An exception past `main` is what the launcher reports as exit code 3.
+ */
+export async function runMain(args: readonly string[]): Promise<RunResult> {
+  const io = captureIo();
+  try {
+    const code = await main(args, io);
+    return { code, stdout: io.stdout(), stderr: io.stderr() };
+  } catch (e) {
+    return {
+      code: 3,
+      stdout: io.stdout(),
+      stderr: `${io.stderr()}${e instanceof Error ? e.message : String(e)}`,
+    };
+  }
+}
+
+/** Runs `node bin/potentia.js ...args` as a child process (the compiled runner). */
+export async function runCli(args: readonly string[], cwd = ROOT): Promise<RunResult> {
+  await ensureCliBuilt();
   return new Promise((resolve) => {
     execFile(
       process.execPath,

@@ -9,6 +9,7 @@ import {
   potentialV,
   EngineError,
   nernstSlopeV,
+  countElements,
 } from '../../src/engine';
 
 describe('Roman numerals are refused, not read as iodine', () => {
@@ -26,7 +27,10 @@ describe('Roman numerals are refused, not read as iodine', () => {
 
   test('a real iodine group in brackets still reads', () => {
     // common practice: Pb(IO3)2 has two iodate groups
-    expect(() => parseNotation('Pb(IO3)2 + 2 e- -> Pb + 2 IO3-')).not.toThrow();
+    const n = parseNotation('Pb(IO3)2 + 2 e- -> Pb + 2 IO3-');
+    expect(n.kind).toBe('half');
+    // by hand: 1 Pb, 2 I and 6 O on each side
+    expect(countElements('Pb(IO3)2')).toEqual(new Map([['Pb', 1], ['I', 2], ['O', 6]]));
   });
 });
 

@@ -15,6 +15,7 @@ import { stub } from './installStub';
 import { StubError } from './customFunctionsStub';
 import '../../src/functions/functions';
 import { HF_CONFIG, registerEchemFunctions } from '../../src/cli/echemPlugin';
+import { callFunction, type Arg } from '../../src/functions/catalogue';
 
 /** E°(Cu2+/Cu) of the built-in row: ΔfG°(Cu2+) = 65.49 kJ/mol / 2F (NBS 1982, from memory; OpenStax Appendix L prints +0.34). */
 const E_CU = 65.49e3 / (2 * 96485.33212331001);
@@ -132,6 +133,24 @@ describe('an error in an input cell gives the same result in Excel and in the ru
       message: 'values (Cu2+) holds the error #N/A from its cell: fix that cell (or the formula that gives it) first.',
     });
     expect(r[2]![0]).toBeCloseTo(E_CU, 12);
+  });
+
+  test('a repeated sweep (the fast path) propagates an error cell the same way', () => {
+    const args: Arg[] = ['Cu2+/Cu', [['Cu2+']], [[0.01], ['#N/A'], [1]]];
+    const first = callFunction('POTENTIAL', args);
+    const again = callFunction('POTENTIAL', args);
+    expect(again).toEqual(first);
+    expect(again[1]![0]).toEqual({
+      kind: 'cell-error',
+      code: '#N/A',
+      message: 'values (Cu2+) holds the error #N/A from its cell: fix that cell (or the formula that gives it) first.',
+    });
+  });
+
+  test('an error cell under a species the reaction does not read is not read', () => {
+    // extra species are ignored (docs/design.md, "Conventions"): a(Cu2+) = 0.01 → 0.337 − RT ln10/F
+    const r = callFunction('POTENTIAL', ['Cu2+/Cu', [['Cu2+', 'Zn2+']], [[0.01, '#N/A']]]);
+    expect(r[0]![0] as number).toBeCloseTo(0.2778407, 6);
   });
 
   test('a table row with an error does not break lookups of other rows', () => {

@@ -1,6 +1,6 @@
 /**
  * The bad-input catalogue: every function of the catalogue × every input class that applies
- * to it, with the result the contract asks for (PRODUCT.md, "Errors"): the error code, and a
+ * to it, with the result the contract asks for (docs/design.md, "Errors"): the error code, and a
  * fragment of the message (a regular expression) that names the argument or the fix.
  *
  * The cases are of two sorts: derived from the function specs (every parameter gets the input
@@ -225,7 +225,13 @@ function reactionCases(
 }
 
 /** Temperature cases for a function whose temp_C is at `index` of `base`. */
-function tempCases(fn: string, base: readonly Arg[], index: number, huge = TEMP_HUGE): BadInputCase[] {
+function tempCases(
+  fn: string,
+  base: readonly Arg[],
+  index: number,
+  huge = TEMP_HUGE,
+  hugeSays = 'temp_C must be between 0 and 100 °C (the aqueous range of the data)',
+): BadInputCase[] {
   const at = (t: Arg) => base.map((a, i) => (i === index ? t : a));
   return [
     {
@@ -258,7 +264,7 @@ function tempCases(fn: string, base: readonly Arg[], index: number, huge = TEMP_
       input: 'huge (1e308)',
       args: at(1e308),
       expect: V(huge),
-      says: 'temp_C must be between 0 and 100 °C (the aqueous range of the data)',
+      says: hugeSays,
     },
     {
       fn,
@@ -402,7 +408,7 @@ const HAND_CASES: readonly BadInputCase[] = [
     input: 'unbalanced reaction',
     args: ['Cu2+ + e- -> Cu', null, null],
     expect: V(
-      /"Cu2\+ \+ e- -> Cu" does not balance \(charge: 1 on the left, 0 on the right\)\. Correct the coefficients, or use BALANCE/,
+      /"Cu2\+ \+ e- -> Cu" does not balance \(charge: 1 on the left, 0 on the right\)\. Correct the coefficients\. Or let BALANCE balance it/,
     ),
     says: 'what does not balance; correct the coefficients or use BALANCE',
   },
@@ -575,7 +581,7 @@ const HAND_CASES: readonly BadInputCase[] = [
     input: 'K beyond the number range',
     args: [10, 2, null, null],
     expect: NUM(
-      /K = 1\.1748e\+338 is outside the spreadsheet's number range.*use LOGK, which gives log10 K = 338\.07/,
+      /K = 1\.1748e\+338 is outside the spreadsheet's number range.*log10 K = 338\.07.*Use LOGK/,
     ),
     says: 'K is outside the number range: use LOGK (the message gives K and log10 K)',
   },
@@ -727,7 +733,13 @@ const HAND_CASES: readonly BadInputCase[] = [
   },
 
   // -------------------------------------------------------------------- NERNSTSLOPE
-  ...tempCases('NERNSTSLOPE', [25, 1], 0, /temp_C must be > −273\.15 °C and ≤ 10000 °C; got 1e\+308 °C/),
+  ...tempCases(
+    'NERNSTSLOPE',
+    [25, 1],
+    0,
+    /temp_C must be > −273\.15 °C and ≤ 10000 °C; got 1e\+308 °C/,
+    'temp_C must be above absolute zero and at most 10000 °C',
+  ),
   {
     fn: 'NERNSTSLOPE',
     argument: 'n',

@@ -4,10 +4,13 @@
  * uncaught exception, no NaN or ±Infinity in any result cell, and every failure is an
  * EngineError (engine) or a CellError with a code and a non-empty message (catalogue).
  *
- * Size: POTENTIA_FUZZ_RUNS inputs in total (default 100,000; e.g. POTENTIA_FUZZ_RUNS=1000000
- * for a long run). Reproducible: one fast-check seed, POTENTIA_FUZZ_SEED (default below); the
- * seed and the counts are printed. On a failure fast-check prints the seed and path of the
- * counterexample, so `POTENTIA_FUZZ_SEED=<seed>` replays it.
+ * Size: a time budget, POTENTIA_FUZZ_SECONDS (default 8 s in all, shared out like the inputs
+ * below), so the suite takes the same time on a busy machine as on an idle one and does less
+ * work there; and at most POTENTIA_FUZZ_RUNS inputs in total (default 100,000; e.g.
+ * POTENTIA_FUZZ_SECONDS=600 POTENTIA_FUZZ_RUNS=10000000 for a long run). Reproducible: one
+ * fast-check seed, POTENTIA_FUZZ_SEED (default below); the seed and the counts are printed.
+ * A run under a budget tries a prefix of the seed's sequence, so a failure replays with
+ * `POTENTIA_FUZZ_SEED=<seed>` and a budget at least as long.
  */
 import fc from 'fast-check';
 import {
@@ -38,6 +41,7 @@ import {
 
 const TOTAL = positiveIntFromEnv('POTENTIA_FUZZ_RUNS', 100_000);
 const SEED = intFromEnv('POTENTIA_FUZZ_SEED', 20_260_407);
+const BUDGET_MS = positiveIntFromEnv('POTENTIA_FUZZ_SECONDS', 8) * 1000;
 
 function intFromEnv(name: string, dflt: number): number {
   const raw = process.env[name];
@@ -59,6 +63,14 @@ function positiveIntFromEnv(name: string, dflt: number): number {
 const PARSER_RUNS = Math.max(1, Math.round(TOTAL * 0.35));
 const ROUNDTRIP_RUNS = Math.max(1, Math.round(TOTAL * 0.05));
 const PER_FUNCTION_RUNS = Math.max(1, Math.round((TOTAL * 0.6) / CATALOGUE.length));
+// The time budget, shared the same way; a run stops at its share (not a failure).
+const budget = (share: number) => ({
+  interruptAfterTimeLimit: Math.max(50, Math.round(BUDGET_MS * share)),
+  markInterruptAsFailure: false,
+});
+const PARSER_BUDGET = budget(0.35);
+const ROUNDTRIP_BUDGET = budget(0.05);
+const PER_FUNCTION_BUDGET = budget(0.6 / CATALOGUE.length);
 
 /**
  * A cap per test, not a timing assertion: generous (a default run takes seconds), growing with
@@ -76,7 +88,7 @@ afterAll(() => {
       `${counts.roundTrip} round-tripped), ${counts.catalogue} catalogue calls over ${CATALOGUE.length} ` +
       `functions (${counts.catalogueErrors} returned at least one error cell); ` +
       `${counts.parser + counts.roundTrip + counts.catalogue} inputs in ${seconds} s ` +
-      `(POTENTIA_FUZZ_RUNS=${TOTAL}, POTENTIA_FUZZ_SEED=${SEED}).`,
+      `(POTENTIA_FUZZ_SECONDS=${BUDGET_MS / 1000}, POTENTIA_FUZZ_RUNS=${TOTAL}, POTENTIA_FUZZ_SEED=${SEED}).`,
   );
 });
 
@@ -253,7 +265,7 @@ describe('parser fuzz', () => {
           accepted = expectEngineErrorOnly(() => parseSpecies(text)) || accepted;
           if (accepted) counts.parserAccepted++;
         }),
-        { seed: SEED, numRuns: PARSER_RUNS },
+        { seed: SEED, numRuns: PARSER_RUNS, ...PARSER_BUDGET },
       );
     },
     CAP_MS,
@@ -286,7 +298,7 @@ describe('parser fuzz', () => {
             expect(describeSpecies(parseSpecies(f))).toBe(describeSpecies(s));
           }
         }),
-        { seed: SEED + 1, numRuns: ROUNDTRIP_RUNS },
+        { seed: SEED + 1, numRuns: ROUNDTRIP_RUNS, ...ROUNDTRIP_BUDGET },
       );
     },
     CAP_MS,
@@ -545,7 +557,7 @@ function fuzzFunction(f: (typeof CATALOGUE)[number], ordinaryOnly: boolean, exam
       }
       if (checkResult(f.id, xs, r)) counts.catalogueErrors++;
     }),
-    { seed, numRuns: PER_FUNCTION_RUNS, examples: examples.map((e) => [e]) },
+    { seed, numRuns: PER_FUNCTION_RUNS, ...PER_FUNCTION_BUDGET, examples: examples.map((e) => [e]) },
   );
 }
 

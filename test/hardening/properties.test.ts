@@ -4,7 +4,7 @@
  * that a failure replays; fast-check prints the seed and the shrunk counterexample.
  *
  * Stoichiometry is checked with an element counter written here, independent of the engine's,
- * in exact rational arithmetic (bigint), as PRODUCT.md asks ("no float tolerance").
+ * in exact rational arithmetic (bigint), as docs/design.md asks (stoichiometry is exact, no float tolerance).
  */
 import fc from 'fast-check';
 import {

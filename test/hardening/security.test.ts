@@ -1,30 +1,24 @@
 /**
- * Safety of the built add-in (PRODUCT.md, "Reliability and safety": no network requests besides
- * the platform's own script; no eval): the bundles make no network calls and evaluate no code,
+ * Safety of the built add-in (docs/design.md, "Safety": no network requests besides the
+ * platform's own script; no eval): the bundles make no network calls and evaluate no code,
  * the task pane's Content-Security-Policy forbids eval and foreign scripts, and the manifest
  * asks for no more than ReadWriteDocument.
  *
- * The bundles are read from dist/, which `npm test` builds first. Where dist/ is missing (a
- * test run on its own, before any build) the bundle checks are skipped with a warning; run
- * `npm run build` (or `npm test`) to include them. The manifest is checked from manifest/.
+ * The bundles are read from dist/, which `npm test` builds first; a run on its own builds it
+ * (test/build/ensureBuilt.ts) or fails, never skips. The manifest is checked from manifest/.
  *
  * The dependency audit needs the registry, so it is not a test: run scripts/audit.sh.
  */
 import * as fs from 'fs';
 import * as path from 'path';
+import { BUILD_TIMEOUT_MS, ensureBuilt } from '../build/ensureBuilt';
 
 const ROOT = path.resolve(__dirname, '..', '..');
 const DIST = path.join(ROOT, 'dist');
 const BUNDLES = ['functions.js', 'taskpane.js'];
 const PAGE = 'taskpane.html';
 
-const built = [...BUNDLES, PAGE].every((f) => fs.existsSync(path.join(DIST, f)));
-if (!built) {
-  console.warn(
-    `security.test.ts: dist/ has no build (${[...BUNDLES, PAGE].join(', ')}), so the bundle and page ` +
-      'checks are skipped. `npm test` builds first; or run `npm run build` and then this test.',
-  );
-}
+beforeAll(() => ensureBuilt(), BUILD_TIMEOUT_MS);
 const read = (f: string) => fs.readFileSync(path.join(DIST, f), 'utf8');
 
 /**
@@ -88,7 +82,7 @@ function findings(text: string, rule: (typeof FORBIDDEN)[number]): string[] {
   return out;
 }
 
-(built ? describe : describe.skip)('built bundles', () => {
+describe('built bundles', () => {
   test.each(BUNDLES)('%s makes no network request and evaluates no code', (file) => {
     const text = read(file);
     expect(text.length).toBeGreaterThan(1000);
@@ -127,7 +121,7 @@ function contentSecurityPolicy(html: string): Map<string, string[]> | null {
   return null;
 }
 
-(built ? describe : describe.skip)('task pane page', () => {
+describe('task pane page', () => {
   const OFFICE_JS = 'https://appsforoffice.microsoft.com';
 
   test('has a Content-Security-Policy meta tag without unsafe-eval', () => {

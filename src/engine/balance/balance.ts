@@ -90,8 +90,10 @@ export function assertBalanced(r: Reaction, text: string, argument = 'reaction')
   if (!c.balanced) {
     throw new EngineError(
       'unbalanced',
-      `${quote(text)} does not balance (${c.problems.join('; ')}). Correct the coefficients, or use BALANCE to balance it.`,
+      `${quote(text)} does not balance (${c.problems.join('; ')}). Correct the coefficients.`,
       argument,
+      undefined,
+      'balance',
     );
   }
 }

@@ -8,6 +8,15 @@ import { isElementSymbol } from './elements';
 /** Element symbol → number of atoms (integers). */
 export type ElementCounts = ReadonlyMap<string, number>;
 
+/** The deepest nesting of brackets (and hydrate dots) read in one formula. */
+export const MAX_FORMULA_NESTING = 32;
+
+/**
+ * The largest atom count read: a subscript, a multiplier or a total of one element.
+ * Counts stay exact integers below it; a larger one is refused, never rounded.
+ */
+export const MAX_ATOM_COUNT = Number.MAX_SAFE_INTEGER;
+
 /**
  * Count the atoms of each element in a formula.
  *
@@ -31,16 +40,38 @@ export function countElements(formula: string, offset = 0, fullText = formula): 
       offset + at + 1,
     );
   };
+  const tooLarge = (at: number): never =>
+    fail(
+      `an atom count above ${MAX_ATOM_COUNT.toLocaleString('en-US')} is not read (it could not stay exact); check the subscripts`,
+      at,
+    );
   const readInt = (): number | null => {
-    const m = /^\d+/.exec(formula.slice(i));
-    if (!m) return null;
-    i += m[0].length;
-    return parseInt(m[0], 10);
+    const start = i;
+    while (i < formula.length && formula.charCodeAt(i) >= 48 && formula.charCodeAt(i) <= 57) i++;
+    if (i === start) return null;
+    const digits = formula.slice(start, i);
+    const n = digits.length > 16 ? Infinity : Number(digits);
+    if (!(n <= MAX_ATOM_COUNT)) tooLarge(start);
+    return n;
   };
-  const addTo = (into: Map<string, number>, from: ReadonlyMap<string, number>, times: number) => {
-    for (const [el, c] of from) into.set(el, (into.get(el) ?? 0) + c * times);
+  const addCount = (into: Map<string, number>, el: string, n: number, at: number) => {
+    const total = (into.get(el) ?? 0) + n;
+    if (!(total <= MAX_ATOM_COUNT)) tooLarge(at);
+    into.set(el, total);
   };
+  const addTo = (into: Map<string, number>, from: ReadonlyMap<string, number>, times: number, at: number) => {
+    for (const [el, c] of from) {
+      const n = c * times;
+      if (!(n <= MAX_ATOM_COUNT)) tooLarge(at);
+      addCount(into, el, n, at);
+    }
+  };
+  let depth = 0;
   const parseGroup = (closer: string | null): Map<string, number> => {
+    // The formula itself is level 0; each bracket (or hydrate part) one more.
+    if (++depth > MAX_FORMULA_NESTING + 1) {
+      fail(`brackets nested deeper than ${MAX_FORMULA_NESTING} levels are not read`, i);
+    }
     const counts = new Map<string, number>();
     let sawItem = false;
     while (i < formula.length) {
@@ -59,8 +90,9 @@ export function countElements(formula: string, offset = 0, fullText = formula): 
         const inner = parseGroup(close);
         if (formula[i] !== close) fail(`"${ch}" opened here is not closed`, start);
         i++;
+        const timesAt = i;
         const times = readInt() ?? 1;
-        addTo(counts, inner, times);
+        addTo(counts, inner, times, timesAt);
         sawItem = true;
       } else if (ch === ')' || ch === ']') {
         if (closer === ch) break;
@@ -76,8 +108,9 @@ export function countElements(formula: string, offset = 0, fullText = formula): 
         } else if (!isElementSymbol(sym)) {
           fail(`"${sym}${next && /[a-z]/.test(next) ? next : ''}" is not an element symbol`, start);
         }
+        const nAt = i;
         const n = readInt() ?? 1;
-        counts.set(sym, (counts.get(sym) ?? 0) + n);
+        addCount(counts, sym, n, nAt);
         sawItem = true;
         if (formula[i] !== undefined && /[a-z]/.test(formula[i] as string)) {
           fail(
@@ -89,11 +122,12 @@ export function countElements(formula: string, offset = 0, fullText = formula): 
         if (closer !== null) fail(`"${ch}" inside brackets`, i);
         if (!sawItem) fail(`expected a formula before "${ch}"`, i);
         i++;
+        const timesAt = i;
         const times = readInt() ?? 1;
         const start = i;
         const part = parseGroup(null);
         if (part.size === 0) fail(`expected a formula after "${ch}"`, start);
-        addTo(counts, part, times);
+        addTo(counts, part, times, timesAt);
       } else if (/[a-z]/.test(ch)) {
         fail(`element symbols start with a capital letter ("${ch}")`, i);
       } else {
@@ -101,6 +135,7 @@ export function countElements(formula: string, offset = 0, fullText = formula): 
       }
     }
     if (!sawItem) fail('expected an element symbol', i);
+    depth--;
     return counts;
   };
   if (formula.length === 0) fail('expected a formula', 0);

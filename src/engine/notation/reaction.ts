@@ -5,17 +5,7 @@
  * Arrows: `->`, `→`, `=`, `<=>`, `⇌` (and `-->`, `<->`, `=>`).
  * Electrons: `e-` or `e`.
  */
-import {
-  type Rational,
-  ONE,
-  parseRational,
-  formatRational,
-  eq,
-  add,
-  neg,
-  isZero,
-  sign,
-} from '../rational';
+import { type Rational, ONE, parseRational, formatRational, eq, add, neg, isZero, sign } from '../rational';
 import { SourceText } from './source';
 import {
   type InlineActivity,
@@ -47,6 +37,13 @@ export interface StoichEntry {
 }
 
 const ARROW = /<=>|<->|-->|->|=>|=/g;
+
+/**
+ * The largest numerator or denominator of a coefficient (2^53 − 1): coefficients are exact
+ * rationals, and below this their electron counts and sums stay exact as numbers too. A
+ * larger one is refused with a message, never rounded.
+ */
+export const MAX_COEFFICIENT_PART = BigInt(Number.MAX_SAFE_INTEGER);
 
 /** Find the single arrow in normalised text; null where there is none. */
 export function findArrow(src: SourceText, argument = 'reaction'): { at: number; length: number } | null {
@@ -80,6 +77,13 @@ export function parseSide(src: SourceText, from: number, to: number, argument = 
       const c = parseRational(cm[1] as string);
       if (!c || isZero(c))
         src.fail(i, `coefficient "${cm[1] as string}" must be a positive number`, argument);
+      if (c.num > MAX_COEFFICIENT_PART || c.den > MAX_COEFFICIENT_PART) {
+        src.fail(
+          i,
+          `coefficient "${cm[1] as string}" is too large to compute with exactly (numerator and denominator at most ${MAX_COEFFICIENT_PART.toLocaleString('en-US')}); divide the reaction through`,
+          argument,
+        );
+      }
       coefficient = c;
       i += cm[0].length;
       skip();

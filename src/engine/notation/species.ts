@@ -16,6 +16,7 @@ import { ATM_IN_BAR } from '../constants';
 import { countElements, type ElementCounts } from './formula';
 import { GAS_FORMULAS, LIQUID_FORMULAS, isElementSymbol, isMetal } from './elements';
 import { SourceText } from './source';
+import { ByteBoundedCache } from '../cacheRegistry';
 
 export type Phase = 's' | 'l' | 'g' | 'aq';
 
@@ -77,7 +78,12 @@ const UNIT_FACTORS: Record<string, { factor: number; kind: 'solute' | 'gas' | 'a
 /** The inline-activity units the parser accepts, for messages and documentation. */
 export const INLINE_UNITS: readonly string[] = Object.keys(UNIT_FACTORS).filter((u) => u !== '');
 
-const elementCache = new Map<string, ElementCounts>();
+const elementCache = new ByteBoundedCache<ElementCounts>('elementCounts', {
+  maxEntries: 4096,
+  maxBytes: 8 * 1024 * 1024,
+  // A formula's counts hold at most one entry per element symbol in it.
+  sizeOf: (k, v) => 64 + 2 * k.length + 48 * (v as ElementCounts).size,
+});
 
 /**
  * Element counts of a species (empty for the electron). Cached by formula.
@@ -210,12 +216,14 @@ function readChargeSuffix(body: string, signs: string): { formula: string; charg
 
 /** Apply the trailing-digit rule; null where the digits (if any) stay subscripts. */
 function splitTrailingDigits(body: string, sgn: number): { formula: string; mag: number } | null {
-  const m = /^(.*?)(\d+)$/.exec(body);
-  if (!m) return null;
-  const head = m[1] as string;
-  const digits = m[2] as string;
+  // Step back over the trailing digits (a linear scan; no backtracking pattern).
+  let cut = body.length;
+  while (cut > 0 && isDigit(body.charCodeAt(cut - 1))) cut--;
+  if (cut === body.length) return null;
+  const head = body.slice(0, cut);
+  const digits = body.slice(cut);
   if (head === '') return null;
-  if (head.endsWith(']')) return { formula: head, mag: parseInt(digits, 10) };
+  if (head.endsWith(']')) return { formula: head, mag: chargeMagnitude(digits) };
   if (digits.length >= 2) {
     return { formula: head + digits.slice(0, -1), mag: parseInt(digits.slice(-1), 10) };
   }
@@ -224,6 +232,24 @@ function splitTrailingDigits(body: string, sgn: number): { formula: string; mag:
   if (monatomic && !(halide && sgn < 0)) return { formula: head, mag: parseInt(digits, 10) };
   return null;
 }
+
+function isDigit(code: number): boolean {
+  return code >= 48 && code <= 57;
+}
+
+/** A charge magnitude from its digits; longer runs than any charge read give a value past the limit. */
+function chargeMagnitude(digits: string): number {
+  return digits.length > 3 ? MAX_CHARGE + 1 : parseInt(digits, 10);
+}
+
+/** The largest charge number read (|z|); larger ones are refused as implausible. */
+export const MAX_CHARGE = 12;
+
+/**
+ * Longest text between "(" and ")" read as a phase or inline amount ("(aq, 0.001 mol/kg)");
+ * a longer group is a formula bracket. Bounding it keeps every scan of a group short.
+ */
+const MAX_PHASE_GROUP = 64;
 
 /** A species read from text, with where it ended and any inline activity. */
 export interface ScannedSpecies {
@@ -265,24 +291,22 @@ export function scanSpecies(src: SourceText, i: number, argument = 'reaction'): 
     if (!FORMULA_CHAR.test(ch)) break;
     j++;
   }
-  let body = t.slice(i, j);
   // brackets in the body must balance; a trailing ")" that closes nothing belongs to the caller
-  while (body.endsWith(')') && !bracketsBalance(body)) {
-    body = body.slice(0, -1);
-    j--;
-  }
+  j = balancedEnd(t, i, j);
+  const body = t.slice(i, j);
   let charge = 0;
   let k = j;
   let formula = body;
   const rest = t.slice(k);
   let m: RegExpExecArray | null;
   if ((m = /^\^(?:(\d*)([+-])|([+-])(\d+))/.exec(rest))) {
-    const mag = m[1] !== undefined ? (m[1] === '' ? 1 : parseInt(m[1], 10)) : parseInt(m[4] as string, 10);
+    const mag =
+      m[1] !== undefined ? (m[1] === '' ? 1 : chargeMagnitude(m[1])) : chargeMagnitude(m[4] as string);
     const sgn = (m[2] ?? m[3]) === '+' ? 1 : -1;
     charge = mag * sgn;
     k += m[0].length;
   } else if ((m = /^([+-])(\d+)(?=$|[\s(),|/])/.exec(rest))) {
-    charge = parseInt(m[2] as string, 10) * (m[1] === '+' ? 1 : -1);
+    charge = chargeMagnitude(m[2] as string) * (m[1] === '+' ? 1 : -1);
     k += m[0].length;
   } else if ((m = /^(\+{2,}|-{2,})(?![->])/.exec(rest))) {
     charge = m[1]!.length * (m[1]!.startsWith('+') ? 1 : -1);
@@ -297,10 +321,16 @@ export function scanSpecies(src: SourceText, i: number, argument = 'reaction'): 
     k += 1;
   } else if ((m = /^ +(\d+)([+-])(?=$|[\s(),|/])/.exec(rest))) {
     // "SO4 2-": a charge written after a space
-    charge = parseInt(m[1] as string, 10) * (m[2] === '+' ? 1 : -1);
+    charge = chargeMagnitude(m[1] as string) * (m[2] === '+' ? 1 : -1);
     k += m[0].length;
   }
-  if (charge !== 0 && Math.abs(charge) > 12) src.fail(j, `charge ${charge} is not plausible`, argument);
+  if (Math.abs(charge) > MAX_CHARGE) {
+    src.fail(
+      j,
+      `a charge larger than ${MAX_CHARGE} is not read (no ion carries one); check the charge`,
+      argument,
+    );
+  }
   // validate the formula
   try {
     countElements(formula);
@@ -340,17 +370,28 @@ export function scanSpecies(src: SourceText, i: number, argument = 'reaction'): 
   return { species, activity, end: k };
 }
 
-function bracketsBalance(s: string): boolean {
-  let round = 0;
-  let square = 0;
-  for (const ch of s) {
-    if (ch === '(') round++;
-    else if (ch === ')') round--;
-    else if (ch === '[') square++;
-    else if (ch === ']') square--;
-    if (round < 0 || square < 0) return false;
+/**
+ * The end of the body [from, to) once the trailing ")" that close nothing are left to the
+ * caller: the longest prefix ending where the text stops being ")" whose brackets balance.
+ * One pass over the body (prefix bracket counts), however many ")" trail it.
+ */
+function balancedEnd(t: string, from: number, to: number): number {
+  const n = to - from;
+  // ok[k]: the prefix of length k never closes more than it opened; round/square: open counts.
+  const round = new Int32Array(n + 1);
+  const square = new Int32Array(n + 1);
+  const ok = new Uint8Array(n + 1);
+  ok[0] = 1;
+  for (let k = 0; k < n; k++) {
+    const ch = t[from + k];
+    round[k + 1] = (round[k] as number) + (ch === '(' ? 1 : ch === ')' ? -1 : 0);
+    square[k + 1] = (square[k] as number) + (ch === '[' ? 1 : ch === ']' ? -1 : 0);
+    ok[k + 1] = ok[k] === 1 && (round[k + 1] as number) >= 0 && (square[k + 1] as number) >= 0 ? 1 : 0;
   }
-  return round === 0 && square === 0;
+  let len = n;
+  while (len > 0 && t[from + len - 1] === ')' && !(ok[len] === 1 && round[len] === 0 && square[len] === 0))
+    len--;
+  return from + len;
 }
 
 /**
@@ -360,7 +401,17 @@ function phaseGroupAt(
   t: string,
   i: number,
 ): { phase: string | null; amount: string | null; amountOffset: number; length: number } | null {
-  const close = t.indexOf(')', i);
+  // Look for the ")" only a short way ahead: a phase group is short, and this keeps a text
+  // of many "(" linear.
+  let close = -1;
+  const last = Math.min(t.length, i + 1 + MAX_PHASE_GROUP);
+  for (let k = i + 1; k < last; k++) {
+    if (t[k] === ')') {
+      close = k;
+      break;
+    }
+    if (t[k] === '(') return null;
+  }
   if (close < 0) return null;
   const inner = t.slice(i + 1, close);
   const withPhase = /^(\s*)([a-z]+)\s*(?:,(\s*)(.*?))?\s*$/.exec(inner);

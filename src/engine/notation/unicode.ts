@@ -43,11 +43,12 @@ const FRACTIONS: Record<string, string> = { '½': '1/2', '⅓': '1/3', '¼': '1/
  * normalizeNotation('Fe³⁺ + e⁻ → Fe²⁺').text // 'Fe^3+ + e^- -> Fe^2+'
  */
 export function normalizeNotation(input: string): { text: string; origin: number[] } {
-  let text = '';
+  // One entry per output character; joined once at the end (linear in the input).
+  const out: string[] = [];
   const origin: number[] = [];
   const push = (s: string, at: number) => {
     for (const ch of s) {
-      text += ch;
+      out.push(ch);
       origin.push(at);
     }
   };
@@ -72,16 +73,18 @@ export function normalizeNotation(input: string): { text: string; origin: number
     }
     const frac = FRACTIONS[ch];
     if (frac !== undefined) {
-      // a mixed number "1½" is 3/2: fold the whole part written just before
-      const digits = /(\d+)$/.exec(text);
-      if (digits) {
-        const run = digits[1] as string;
-        const whole = parseInt(run, 10);
-        const [num, den] = frac.split('/').map((x) => parseInt(x, 10)) as [number, number];
-        const start = origin[origin.length - run.length] ?? at;
-        text = text.slice(0, -run.length);
-        origin.length -= run.length;
-        push(`${whole * den + num}/${den} `, start);
+      // A mixed number "1½" is 3/2: fold the whole part written just before. The digits are
+      // found by stepping back over the output (never by a search of the whole text), and
+      // the whole part is read as a bigint, so the fraction stays exact at any length.
+      let runStart = out.length;
+      while (runStart > 0 && isAsciiDigit(out[runStart - 1] as string)) runStart--;
+      if (runStart < out.length) {
+        const run = out.slice(runStart).join('');
+        const [num, den] = frac.split('/').map((x) => BigInt(x)) as [bigint, bigint];
+        const start = origin[runStart] ?? at;
+        out.length = runStart;
+        origin.length = runStart;
+        push(`${BigInt(run) * den + num}/${den} `, start);
       } else push(frac + ' ', at);
       continue;
     }
@@ -125,5 +128,9 @@ export function normalizeNotation(input: string): { text: string; origin: number
         push(ch, at);
     }
   }
-  return { text, origin };
+  return { text: out.join(''), origin };
+}
+
+function isAsciiDigit(ch: string): boolean {
+  return ch >= '0' && ch <= '9' && ch.length === 1;
 }

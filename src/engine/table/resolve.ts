@@ -356,8 +356,10 @@ function refuseBroken(
   if (broken && !table.userRows.some((u) => matches(u.perElectron))) {
     throw new EngineError(
       'argument',
-      `${quote(text)} needs row ${broken.row} of your table, which cannot be used: ${broken.message.replace(/^row \d+:?\s*/, '')} Fix the row (CHECKTABLE lists every problem).`,
+      `${quote(text)} needs row ${broken.row} of your table, which cannot be used: ${broken.message.replace(/^row \d+:?\s*/, '')} Fix the row.`,
       'table',
+      undefined,
+      'checkTable',
     );
   }
 }

@@ -1,6 +1,6 @@
 /**
  * Text descriptions of a resolution: where each E° came from (for SOURCE) and
- * the IUPAC cell diagram with activities (for DIAGRAM).
+ * the IUPAC cell diagram with activities (for CELLNOTATION).
  */
 import { type Resolved, type ResolvedHalf, halfE0V25, halfSlopeMvPerK } from '../table/resolve';
 import { describeOrigin } from '../table/potentialTable';

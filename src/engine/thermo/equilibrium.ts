@@ -95,8 +95,10 @@ export function equilibriumConstantFromLog10(log10K: number): number {
     const value = new Decimal(10).pow(new Decimal(log10K)).toExponential(4);
     throw new EngineError(
       'range',
-      `K = ${value} is outside the spreadsheet's number range (about 2.2e-308 to 1.8e308); use LOGK, which gives log10 K = ${log10K.toFixed(4)}.`,
-      'reaction_or_E0',
+      `K = ${value} is outside the spreadsheet's number range (about 2.2e-308 to 1.8e308); log10 K = ${log10K.toFixed(4)}.`,
+      'reaction_or_E',
+      undefined,
+      'logForm',
     );
   }
   return k;

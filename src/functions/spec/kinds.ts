@@ -8,14 +8,11 @@
 import { EngineError, STANDARD_TEMP_C, ZERO_CELSIUS_K } from '../../engine';
 import { isInputErrorText } from '../cellTypes';
 import { isBlank, readElectrons, readNumber, readText, readOptionalText } from '../args';
-import type { KindName, NumericDomain, ParamSpec } from './types';
+import type { KindName, NumericDomain, ParamSpec, PotentialV, TempC } from './types';
 
 export type { KindName } from './types';
 
-/** A temperature in °C, read and checked at the boundary (docs/design.md, "Argument kinds"). */
-export type TempC = number & { readonly __unit: 'degC' };
-/** A potential in V, read and checked at the boundary. */
-export type PotentialV = number & { readonly __unit: 'V' };
+export type { PotentialV, TempC } from './types';
 
 /** The aqueous range of the data behind the temperature-dependent functions, °C. */
 export const AQUEOUS_TEMP_RANGE_C = { min: 0, max: 100 } as const;

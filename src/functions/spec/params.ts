@@ -3,6 +3,7 @@
  * description and one place in the argument order (docs/design.md, "Argument names"):
  * chemistry arguments first, then `temp_C`, then `table`.
  */
+import { STANDARD_TEMP_C } from '../../engine';
 import type { ParamSpec } from './types';
 
 /** A reaction, couple or cell, one cell or a column of cases. */
@@ -57,7 +58,7 @@ export const TEMP_C: ParamSpec = {
   name: 'temp_C',
   kind: 'temperature',
   optional: true,
-  default: 25,
+  default: STANDARD_TEMP_C,
   description: 'Temperature in °C; one cell or a column of cases',
 };
 

@@ -10,8 +10,8 @@ import { asGrid } from '../args';
 import { at, caseColumn, caseCount, type CaseColumn } from '../broadcast';
 import { cellError, toCellError } from '../errorCodes';
 import { isPerCase, kindOf, nounOf, readFlag, readNumberOf, readTextOf, unitOf } from './kinds';
-import type { CallArgs, CaseArgs, FunctionSpec, ParamSpec } from './types';
-import { errorRowsOf, numberRow, readHeaders, readNumberList, readValueRows, tableCells, type TableCells } from './values';
+import type { CallArgs, CaseArgs, FunctionSpec, ParamSpec, PotentialV, TempC } from './types';
+import { inputErrorInRow, numberRow, readHeaders, readNumberList, readValueRows, tableCells, type TableCells } from './values';
 
 /** A number that is not finite never reaches a sheet: it becomes #NUM! with a message. */
 export function finiteCell(x: ResultCell, what: string): ResultCell {
@@ -29,8 +29,8 @@ class Prepared implements CallArgs {
   private readonly valueRows = new Map<string, Scalar[][] | null>();
   /** Per parameter: the read value of a one-cell column, read once for every case. */
   private readonly memo = new Map<string, Memo>();
-  errorRows: Map<number, EngineError> | null = null;
-  errorRowsBroadcast = false;
+  /** The values parameter whose error cells propagate (docs/design.md, "Errors"). */
+  valuesParam: { name: string; headerParam: string } | null = null;
 
   constructor(
     readonly spec: FunctionSpec,
@@ -50,8 +50,7 @@ class Prepared implements CallArgs {
         this.valueRows.set(p.name, rows);
         if (rows) {
           valueCases = { name: p.name, rows: rows.length };
-          this.errorRows = errorRowsOf(rows, headers, p.name);
-          this.errorRowsBroadcast = rows.length === 1;
+          this.valuesParam ??= { name: p.name, headerParam: hp };
         }
       } else if (shape === 'cell') {
         const c = caseColumn(asGrid(arg), p.name);
@@ -143,12 +142,23 @@ class Case implements CaseArgs {
   }
 
   num(name: string): number {
-    const x = this.optNum(name);
-    if (x === null) {
-      const p = this.call.param(name);
-      throw new EngineError('argument', `${name} is missing: give ${nounOf(p)}.`, name);
-    }
-    return x;
+    return this.given(name, this.optNum(name));
+  }
+
+  tempC(name = 'temp_C'): TempC {
+    if (this.call.param(name).kind !== 'temperature') throw new Error(`${name} is not a temperature parameter`);
+    return this.num(name) as TempC;
+  }
+
+  potentialV(name: string): PotentialV {
+    if (this.call.param(name).kind !== 'potential') throw new Error(`${name} is not a potential parameter`);
+    return this.num(name) as PotentialV;
+  }
+
+  /** A value that must be there: "X is missing: give …" where it is not. */
+  private given<T>(name: string, v: T | null): T {
+    if (v !== null) return v;
+    throw new EngineError('argument', `${name} is missing: give ${nounOf(this.call.param(name))}.`, name);
   }
 
   optText(name: string): string | null {
@@ -156,12 +166,7 @@ class Case implements CaseArgs {
   }
 
   text(name: string): string {
-    const t = this.optText(name);
-    if (t === null) {
-      const p = this.call.param(name);
-      throw new EngineError('argument', `${name} is missing: give ${nounOf(p)}.`, name);
-    }
-    return t;
+    return this.given(name, this.optText(name));
   }
 
   choice<T>(name: string): T {
@@ -214,19 +219,42 @@ function runPerCase(spec: FunctionSpec, call: Prepared): Result {
   return out;
 }
 
-/** Error cells in a values range propagate to the cases on their rows (docs/design.md, "Errors"). */
-function applyErrorRows(result: Result, call: Prepared): Result {
-  const errs = call.errorRows;
-  if (!errs || call.spec.result.kind !== 'perCase') return result;
-  const fill = (row: ResultCell[], e: EngineError) => row.map(() => toCellError(e));
-  if (call.errorRowsBroadcast) {
-    const e = errs.get(0)!;
-    return result.map((row) => fill(row, e));
+/**
+ * Error cells in a values range propagate to the cases that read them (docs/design.md,
+ * "Errors"): a case whose result holds an error and whose values row holds an error cell gives
+ * that cell's error instead, across its width. A row whose error cell the case does not read (a
+ * species the reaction ignores) computes as usual. Only erring cases are looked at, so a clean
+ * sweep costs one pass over its result.
+ *
+ * @example
+ * propagateInputErrors([[cellErr]], [['#N/A']], ['Cu2+'], 'values') // [[#N/A "values (Cu2+) holds …"]]
+ */
+export function propagateInputErrors(
+  result: Result,
+  rows: readonly (readonly Scalar[])[] | null,
+  headers: readonly string[],
+  valuesName: string,
+): Result {
+  if (!rows || rows.length === 0) return result;
+  for (let r = 0; r < result.length; r++) {
+    const row = result[r]!;
+    let erring = false;
+    for (let c = 0; c < row.length; c++) if (typeof row[c] === 'object') erring = true;
+    if (!erring) continue;
+    const src = rows.length === 1 ? rows[0] : rows[r];
+    const e = src ? inputErrorInRow(src, headers, valuesName) : null;
+    if (e) {
+      const cell = toCellError(e);
+      result[r] = row.map(() => cell);
+    }
   }
-  return result.map((row, r) => {
-    const e = errs.get(r);
-    return e ? fill(row, e) : row;
-  });
+  return result;
+}
+
+function applyErrorRows(result: Result, call: Prepared): Result {
+  const v = call.valuesParam;
+  if (!v || call.spec.result.kind !== 'perCase') return result;
+  return propagateInputErrors(result, call.rows(v.name), call.headers(v.headerParam), v.name);
 }
 
 /**
@@ -240,6 +268,8 @@ export function implementationOf(spec: FunctionSpec): (...args: Arg[]) => Result
   if (!spec.perCase === !spec.run) throw new Error(`${spec.id}: give exactly one of perCase and run`);
   return (...args: Arg[]): Result => {
     try {
+      const fast = spec.fast?.(args);
+      if (fast) return fast;
       const call = new Prepared(spec, byName, args);
       const result = spec.run ? spec.run(call) : runPerCase(spec, call);
       return applyErrorRows(result, call);

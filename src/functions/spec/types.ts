@@ -122,6 +122,11 @@ export interface ErrorNote {
   readonly code: ErrorCode;
 }
 
+/** A temperature in °C, read and checked at the boundary (docs/design.md, "Argument kinds"). */
+export type TempC = number & { readonly __unit: 'degC' };
+/** A potential in V, read and checked at the boundary. */
+export type PotentialV = number & { readonly __unit: 'V' };
+
 /** Reads typed arguments for one case (see reader.ts). */
 export interface CaseArgs {
   /** The case index (0-based). */
@@ -132,6 +137,10 @@ export interface CaseArgs {
   num(name: string): number;
   /** The same, null where blank and there is no default. */
   optNum(name: string): number | null;
+  /** A `temperature` parameter (default `temp_C`), checked once: °C, in its domain. */
+  tempC(name?: string): TempC;
+  /** A `potential` parameter, checked once: V, within ±10 V unless allowed. */
+  potentialV(name: string): PotentialV;
   /** Text (reaction, species, reference, choice text…), trimmed; the default where blank. */
   text(name: string): string;
   /** The same, null where blank and there is no default. */
@@ -168,16 +177,17 @@ export interface CallArgs {
 
 /** One worksheet function: its declaration and its computation. */
 export interface FunctionSpec {
-  /** Id in the ECHEM namespace, fixed once released, e.g. "POTENTIAL". */
+  /**
+   * `id`: the id in the ECHEM namespace, fixed once released, e.g. "POTENTIAL"; `family`: the
+   * docs group (and spec file), e.g. "Nernst"; `summary`: one sentence for the formula bar, what
+   * the function returns; `returns`: what the result holds, with its unit, e.g. "E in V vs SHE".
+   */
   readonly id: string;
-  /** The family (docs group, spec file), e.g. "Nernst". */
-  readonly family: string;
-  /** One sentence for the formula bar: what the function returns. */
-  readonly summary: string;
-  /** What the result holds, with its unit, e.g. "E in V vs SHE". */
-  readonly returns: string;
   readonly params: readonly ParamSpec[];
   readonly result: ResultShape;
+  readonly family: string;
+  readonly summary: string;
+  readonly returns: string;
   /** At least one; the first is the formula bar's example. */
   readonly examples: readonly ExampleSpec[];
   /** Longer notes for the docs page (conventions, where a default comes from). */
@@ -188,6 +198,12 @@ export interface FunctionSpec {
    * EngineError for a bad case: it becomes that case's error cell.
    */
   readonly perCase?: (a: CaseArgs, call: CallArgs) => ResultCell | ResultCell[];
-  /** The computation over all cases at once (sweeps with a fast path, listings). */
+  /** The computation over all cases at once (sweeps, listings). */
   readonly run?: (call: CallArgs) => Result;
+  /**
+   * Optional, before any argument is read: the same result as the computation for a call of a
+   * shape it recognises (a repeated sweep), or null. It must apply the same checks and the
+   * error policy itself (reader.ts `propagateInputErrors`).
+   */
+  readonly fast?: (args: readonly Arg[]) => Result | null;
 }

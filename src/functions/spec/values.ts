@@ -68,27 +68,20 @@ export function readValueRows(
 }
 
 /**
- * The rows of a values matrix that hold an error cell, with the error each propagates
- * (docs/design.md, "Errors"). Scans only for text cells, so a numeric matrix costs one pass.
+ * The error a values row propagates where one of its cells holds an error from its input cell
+ * (docs/design.md, "Errors"), or null.
  */
-export function errorRowsOf(
-  rows: readonly (readonly Scalar[])[],
+export function inputErrorInRow(
+  row: readonly Scalar[],
   headers: readonly string[],
   valuesName: string,
-): Map<number, EngineError> | null {
-  let out: Map<number, EngineError> | null = null;
-  for (let r = 0; r < rows.length; r++) {
-    const row = rows[r]!;
-    for (let c = 0; c < row.length; c++) {
-      const v = row[c];
-      if (typeof v === 'string' && isInputErrorText(v)) {
-        out ??= new Map();
-        out.set(r, inputErrorOf(`${valuesName} (${headers[c] ?? `column ${c + 1}`})`, String(v)));
-        break;
-      }
-    }
+): EngineError | null {
+  for (let c = 0; c < row.length; c++) {
+    const v = row[c];
+    if (typeof v === 'string' && isInputErrorText(v))
+      return inputErrorOf(`${valuesName} (${headers[c] ?? `column ${c + 1}`})`, v);
   }
-  return out;
+  return null;
 }
 
 /** A values row read as numbers in `unit`, each named by its header in messages. */

@@ -29,6 +29,9 @@ import { PHYSICAL_TEMP_DOMAIN, readPotentialV } from '../spec/kinds';
 import { N_FROM_REACTION, REACTION, REACTION_OR_E, TABLE, TEMP_C } from '../spec/params';
 import type { CallArgs, CaseArgs, FunctionSpec } from '../spec/types';
 
+/** What every Equilibrium function shares: its family, and one result row per case (unless it says otherwise). */
+const EQUILIBRIUM = { family: 'Equilibrium', result: { kind: 'perCase' } } as const;
+
 const SLOPE = 'derived by hand: RT ln10/(nF) with the SI 2019 exact R and F';
 const CU_ZN =
   'E°(Cu2+/Cu) = 0.3394 V from ΔfG°(Cu2+) = 65.49 kJ/mol (NBS 1982, from memory; OpenStax Appendix G and L print 65.49 and +0.34) and E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
@@ -66,7 +69,7 @@ function standardAndN(a: CaseArgs, call: CallArgs): { e0: number; n: number } {
       'n',
     );
   }
-  return { e0: standardPotentialV(form.resolved, a.num('temp_C')), n };
+  return { e0: standardPotentialV(form.resolved, a.tempC()), n };
 }
 
 /**
@@ -74,7 +77,7 @@ function standardAndN(a: CaseArgs, call: CallArgs): { e0: number; n: number } {
  * the species data for a reaction that is not a redox reaction, e.g. a solubility).
  */
 function log10K(a: CaseArgs, call: CallArgs): number {
-  const t = a.num('temp_C');
+  const t = a.tempC();
   const text = reactionText(a);
   if (text === null) {
     const { e0, n } = standardAndN(a, call);
@@ -102,12 +105,11 @@ const LOGK_PARAMS = [REACTION_OR_E, N_FROM_REACTION, TEMP_C, TABLE];
 
 const LOGK: FunctionSpec = {
   id: 'LOGK',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'log10 of the equilibrium constant, −ΔrG°/(RT ln 10) = nFE°/(RT ln 10), of a reaction (also a solubility or an ionisation, from the species data) or from E° in V and n; activities written in the reaction do not change K.',
   returns: 'log10 K, one row per case',
   params: LOGK_PARAMS,
-  result: { kind: 'perCase' },
   examples: [
     { args: [1.1, 2], expected: 37.187697, tolerance: 1e-5, source: 'derived by hand: nFE°/(RT ln10) with the SI 2019 exact R and F' },
   ],
@@ -116,12 +118,11 @@ const LOGK: FunctionSpec = {
 
 const EQCONST: FunctionSpec = {
   id: 'EQCONST',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'Equilibrium constant K = 10^(nFE°/(RT ln 10)) from a reaction or from E° in V and n; #NUM! where K leaves the number range (use LOGK).',
   returns: 'K (dimensionless), one row per case',
   params: LOGK_PARAMS,
-  result: { kind: 'perCase' },
   examples: [
     {
       args: ['Zn + Cu2+ -> Zn2+ + Cu'],
@@ -135,17 +136,16 @@ const EQCONST: FunctionSpec = {
 
 const GIBBS: FunctionSpec = {
   id: 'GIBBS',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n; of a reaction, ΔG° at temp_C, or ΔG at the activities written in it (e.g. "Zn | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu"), agreeing with POTENTIAL.',
   returns: 'ΔG in kJ/mol, one row per case',
   params: LOGK_PARAMS,
-  result: { kind: 'perCase' },
   examples: [
     { args: [0.434, 2], expected: -83.749268, tolerance: 1e-5, source: 'derived by hand: −nFE with the SI 2019 exact F' },
   ],
   perCase: (a, call) => {
-    const t = a.num('temp_C');
+    const t = a.tempC();
     const text = reactionText(a);
     if (text === null) {
       const { e0, n } = standardAndN(a, call);
@@ -168,11 +168,10 @@ const GIBBS: FunctionSpec = {
 
 const ELECTRONS: FunctionSpec = {
   id: 'ELECTRONS',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary: 'Number of electrons n transferred in the balanced half-reaction, cell or reaction.',
   returns: 'n, one row per case',
   params: [REACTION, TABLE],
-  result: { kind: 'perCase' },
   examples: [
     { args: ['Zn + Cu2+ -> Zn2+ + Cu'], expected: 2, tolerance: 0, source: 'derived by hand: Zn → Zn2+ gives 2 electrons' },
     { args: ['MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O'], expected: 5, tolerance: 0, source: 'derived by hand: Mn +7 → +2' },
@@ -198,7 +197,7 @@ const ELECTRONS: FunctionSpec = {
 
 const BALANCE: FunctionSpec = {
   id: 'BALANCE',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'Balanced reaction text from a skeleton redox equation, half-reaction, couple or cell; medium "acid" balances with H+ and H2O, "base" with OH- and H2O.',
   returns: 'Balanced reaction text, one row per case',
@@ -216,7 +215,6 @@ const BALANCE: FunctionSpec = {
     },
     TABLE,
   ],
-  result: { kind: 'perCase' },
   examples: [
     {
       args: ['MnO4- + Fe2+ -> Mn2+ + Fe3+', 'acid'],
@@ -237,7 +235,7 @@ const BALANCE: FunctionSpec = {
 
 const NERNSTSLOPE: FunctionSpec = {
   id: 'NERNSTSLOPE',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     'Nernst slope RT ln10/(nF) in V per decade of activity from the exact SI constants; a negative n gives the negative slope of an anion-responsive electrode.',
   returns: 'Slope in V per decade, one row per case',
@@ -252,14 +250,13 @@ const NERNSTSLOPE: FunctionSpec = {
       description: 'Electrons (charge of the sensed ion); signed: −1 for an anion-responsive electrode',
     },
   ],
-  result: { kind: 'perCase' },
   examples: [
     { args: [25], expected: 0.0591593, tolerance: 1e-7, source: SLOPE },
     { args: [25, -1], expected: -0.0591593, tolerance: 1e-7, source: SLOPE },
     { args: [37, 2], expected: 0.0307702, tolerance: 1e-7, source: SLOPE },
   ],
   perCase: (a) => {
-    const t = a.num('temp_C');
+    const t = a.tempC();
     const n = a.num('n');
     return Math.sign(n) * nernstSlopeV(t, Math.abs(n));
   },
@@ -288,7 +285,7 @@ const COMBINE: FunctionSpec = {
 
 const CONCCELL: FunctionSpec = {
   id: 'CONCCELL',
-  family: 'Equilibrium',
+  ...EQUILIBRIUM,
   summary:
     "EMF in V of a concentration cell: two like electrodes whose solutions differ in one species' activity (right minus left, as IUPAC writes cells).",
   returns: 'EMF in V, one row per case',
@@ -306,14 +303,13 @@ const CONCCELL: FunctionSpec = {
     TEMP_C,
     TABLE,
   ],
-  result: { kind: 'perCase' },
   examples: [
     { args: ['Cu2+/Cu', 0.001, 0.1], expected: 0.0591593, tolerance: 1e-7, source: `${SLOPE}: (RT ln10/2F)·log10(0.1/0.001)` },
   ],
   perCase: (a, call) => {
     const form = compiledReaction(a.text('reaction'), call.table());
     const plan = planConcentrationCell(form, a.optText('species'));
-    return concentrationCellEmfV(plan, a.num('value_left'), a.num('value_right'), a.num('temp_C'));
+    return concentrationCellEmfV(plan, a.num('value_left'), a.num('value_right'), a.tempC());
   },
 };
 

@@ -4,6 +4,7 @@
  */
 import {
   STANDARD_TEMP_C,
+  registerCache,
   bindSpecies,
   compiledReaction,
   describeDiagram,
@@ -15,10 +16,13 @@ import {
 import type { Arg, Result, ResultCell, Scalar } from '../cellTypes';
 import { asGrid } from '../args';
 import { cellError, toCellError } from '../errorCodes';
-import { finiteCell } from '../spec/reader';
+import { finiteCell, propagateInputErrors } from '../spec/reader';
 import { readTempC } from '../spec/kinds';
 import { ACTIVITIES, OPTIONAL_SPECIES_HEADER, REACTION, SPECIES_HEADER, TABLE, TEMP_C } from '../spec/params';
 import type { CallArgs, FunctionSpec } from '../spec/types';
+
+/** What every Nernst function shares: its family, and one result row per case (unless it says otherwise). */
+const NERNST = { family: 'Nernst', result: { kind: 'perCase' } } as const;
 
 const DERIVED = 'derived by hand: E = E° − (RT ln10/nF)·log10 Q with the SI 2019 exact R and F';
 const CU_E0 =
@@ -28,7 +32,22 @@ const ZN_E0 = 'E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
 type Quantity = 'potential' | 'log10Q';
 
 /** The last prepared single-reaction call: repeated calls skip compiling and binding. */
-let lastPrepared: { reaction: string; species: Scalar[]; table: Arg; binding: Binding } | null = null;
+let lastPrepared: { reaction: string; species: Scalar[]; headers: string[]; table: Arg; binding: Binding } | null = null;
+
+/**
+ * The one-entry cache above, in the engine's cache registry (name, clear, stats), so that the
+ * registry's one clear empties it too.
+ */
+export const LAST_NERNST_CALL_CACHE = {
+  name: 'functions.lastNernstCall',
+  clear(): void {
+    lastPrepared = null;
+  },
+  stats(): { name: string; entries: number; bytes: number } {
+    return { name: 'functions.lastNernstCall', entries: lastPrepared ? 1 : 0, bytes: 0 };
+  },
+};
+registerCache(LAST_NERNST_CALL_CACHE);
 
 function scalarOf(a: Arg): Scalar | undefined {
   if (!Array.isArray(a)) return a;
@@ -62,7 +81,8 @@ function fastNernst(args: readonly Arg[], quantity: Quantity): Result | null {
     return null;
   // the one temperature check, also on the fast path
   const tempC = readTempC(t, TEMP_C);
-  return sweepToColumn<ResultCell>(p.binding, values as Scalar[][], tempC, quantity, toCellError);
+  const result = sweepToColumn<ResultCell>(p.binding, values as Scalar[][], tempC, quantity, toCellError);
+  return propagateInputErrors(result, values as Scalar[][], p.headers, 'values');
 }
 
 function toColumn(res: { values: Float64Array; errors: ReadonlyMap<number, unknown> }, n: number): Result {
@@ -89,7 +109,7 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
     const reaction = call.raw('reaction');
     lastPrepared =
       sg && sg.length === 1 && typeof reaction === 'string' && text === reaction
-        ? { reaction, species: sg[0]!.slice(), table: call.raw('table'), binding: b }
+        ? { reaction, species: sg[0]!.slice(), headers, table: call.raw('table'), binding: b }
         : null;
     const temps = quantity === 'potential' ? call.column('temp_C') : null;
     if (!temps || temps.length === 1) return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
@@ -117,12 +137,11 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
 
 const POTENTIAL: FunctionSpec = {
   id: 'POTENTIAL',
-  family: 'Nernst',
+  ...NERNST,
   summary:
     'Electrode potential of a half-reaction, or EMF of a cell or reaction, in V vs SHE, by the Nernst equation at the activities and temperature given.',
   returns: 'E in V vs SHE, one row per case',
   params: [REACTION, OPTIONAL_SPECIES_HEADER, { ...ACTIVITIES, optional: true }, TEMP_C, TABLE],
-  result: { kind: 'perCase' },
   notes: [
     'E = E° − (RT ln10 / nF)·log10 Q. Pure solids and liquids and water are left out of Q; activities written inline in a cell diagram are used.',
     'A cell EMF is E(right) − E(left) for the cell as written; a negative value means the written reaction is not spontaneous.',
@@ -142,40 +161,38 @@ const POTENTIAL: FunctionSpec = {
       source: `E°(O2/H2O) = −ΔfG°(H2O, l)/(2F) = 237.129 kJ/mol / 2F = 1.228834 V (NBS 1982, from memory; OpenStax Appendix L prints 1.229); ${DERIVED}`,
     },
   ],
-  run: (call) => fastNernst(argsOf(call, 5), 'potential') ?? nernstCases(call, 'potential'),
+  fast: (args) => fastNernst(args, 'potential'),
+  run: (call) => nernstCases(call, 'potential'),
 };
-
-function argsOf(call: CallArgs, n: number): Arg[] {
-  const names = ['reaction', 'species', 'values', n === 5 ? 'temp_C' : 'table', 'table'].slice(0, n);
-  return names.map((name) => call.raw(name));
-}
 
 const STDPOTENTIAL: FunctionSpec = {
   id: 'STDPOTENTIAL',
-  family: 'Nernst',
+  ...NERNST,
   summary:
     "Standard potential E° in V vs SHE of a half-reaction, couple or cell at temp_C (with the table's dE°/dT; where it has none, E° at 25 °C).",
   returns: 'E° in V vs SHE, one row per case',
   params: [REACTION, TEMP_C, TABLE],
-  result: { kind: 'perCase' },
   examples: [
     { args: ['Cu2+/Cu'], expected: 0.339378, tolerance: 1e-6, source: CU_E0 },
     { args: ['Zn(s) | Zn2+(aq) || Cu2+(aq) | Cu(s)'], expected: 1.101178, tolerance: 1e-6, source: `${CU_E0}; ${ZN_E0}` },
   ],
-  perCase: (a, call) => standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.num('temp_C')),
+  perCase: (a, call) => standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.tempC()),
 };
+
+/** The parameters of QUOTIENT and LOGQ, and the zinc–copper case their examples share. */
+const QUOTIENT_PARAMS = [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE];
+const ZN_CU_CASE: Arg[] = ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]];
 
 const QUOTIENT: FunctionSpec = {
   id: 'QUOTIENT',
-  family: 'Nernst',
+  ...NERNST,
   summary:
     "Reaction quotient Q from the activities given (pure solids, liquids and water left out); #NUM! where Q leaves the number range (use LOGQ).",
   returns: 'Q (dimensionless), one row per case',
-  params: [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE],
-  result: { kind: 'perCase' },
+  params: QUOTIENT_PARAMS,
   examples: [
     {
-      args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
+      args: ZN_CU_CASE,
       expected: 10,
       tolerance: 1e-12,
       source: 'derived by hand: Q = a(Zn2+)/a(Cu2+) = 0.1/0.01',
@@ -198,29 +215,28 @@ const QUOTIENT: FunctionSpec = {
 
 const LOGQ: FunctionSpec = {
   id: 'LOGQ',
-  family: 'Nernst',
+  ...NERNST,
   summary: 'log10 of the reaction quotient Q, computed in log space so that it never overflows.',
   returns: 'log10 Q, one row per case',
-  params: [REACTION, SPECIES_HEADER, ACTIVITIES, TABLE],
-  result: { kind: 'perCase' },
+  params: QUOTIENT_PARAMS,
   examples: [
     {
-      args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
+      args: ZN_CU_CASE,
       expected: 1,
       tolerance: 1e-12,
       source: 'derived by hand: log10(0.1/0.01)',
     },
   ],
-  run: (call) => fastNernst(argsOf(call, 4), 'log10Q') ?? nernstCases(call, 'log10Q'),
+  fast: (args) => fastNernst(args, 'log10Q'),
+  run: (call) => nernstCases(call, 'log10Q'),
 };
 
 const CELLNOTATION: FunctionSpec = {
   id: 'CELLNOTATION',
-  family: 'Nernst',
+  ...NERNST,
   summary: 'The IUPAC cell notation of a reaction or cell, with the activities given written inline.',
   returns: 'Cell notation text, one row per case',
   params: [REACTION, OPTIONAL_SPECIES_HEADER, { ...ACTIVITIES, optional: true }, TABLE],
-  result: { kind: 'perCase' },
   examples: [
     {
       args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],

@@ -3,9 +3,12 @@ import { convertPotentialV } from '../../engine';
 import { TEMP_C } from '../spec/params';
 import type { FunctionSpec } from '../spec/types';
 
+/** What every References function shares: its family, and one result row per case (unless it says otherwise). */
+const REFERENCES = { family: 'References', result: { kind: 'perCase' } } as const;
+
 const VSREF: FunctionSpec = {
   id: 'VSREF',
-  family: 'References',
+  ...REFERENCES,
   summary:
     'A potential converted from one reference-electrode scale to another (SHE, SCE, Ag/AgCl in several KCl strengths, saturated Cu/CuSO4, Hg/Hg2SO4, Hg/HgO, RHE).',
   returns: 'The potential in V vs to_ref, one row per case',
@@ -16,7 +19,6 @@ const VSREF: FunctionSpec = {
     { name: 'pH', kind: 'pH', optional: true, defaultText: 'none (needed for RHE)', description: 'pH of the solution, for RHE' },
     TEMP_C,
   ],
-  result: { kind: 'perCase' },
   examples: [
     {
       args: [0, 'SCE', 'SHE'],
@@ -26,7 +28,7 @@ const VSREF: FunctionSpec = {
     },
   ],
   perCase: (a) =>
-    convertPotentialV(a.num('potential'), a.text('from_ref'), a.text('to_ref'), a.num('temp_C'), a.optNum('pH')),
+    convertPotentialV(a.potentialV('potential'), a.text('from_ref'), a.text('to_ref'), a.tempC(), a.optNum('pH')),
 };
 
 /** The reference-scale family. */

@@ -12,13 +12,15 @@ import { cellError } from '../errorCodes';
 import { REACTION, TABLE } from '../spec/params';
 import type { FunctionSpec } from '../spec/types';
 
+/** What every Table function shares: its family, and one result row per case (unless it says otherwise). */
+const TABLE_FAMILY = { family: 'Table', result: { kind: 'perCase' } } as const;
+
 const SOURCE: FunctionSpec = {
   id: 'SOURCE',
-  family: 'Table',
+  ...TABLE_FAMILY,
+  params: [REACTION, TABLE],
   summary: 'Which table rows (built-in or yours) gave E°, with their sources and any derivation.',
   returns: 'Provenance text, one row per case',
-  params: [REACTION, TABLE],
-  result: { kind: 'perCase' },
   examples: [
     {
       args: ['Cu2+/Cu'],

@@ -56,7 +56,7 @@ const ENTHALPY: FunctionSpec = {
   examples: [
     { args: ['H2 + 1/2 O2 -> H2O'], expected: -285.83, tolerance: 0.01, source: `ΔfH°(H2O, l) = −285.83 kJ/mol, ${NBS}` },
   ],
-  perCase: (a, call) => reactionEnthalpyKJ(a.text('reaction'), a.num('temp_C'), call.table()),
+  perCase: (a, call) => reactionEnthalpyKJ(a.text('reaction'), a.tempC(), call.table()),
 };
 
 const ENTROPY: FunctionSpec = {
@@ -74,7 +74,7 @@ const ENTROPY: FunctionSpec = {
       source: `derived by hand: S° H2O(l) 69.91 − H2(g) 130.684 − ½·O2(g) 205.138 J/(mol·K), ${NBS}`,
     },
   ],
-  perCase: (a, call) => reactionEntropyJK(a.text('reaction'), a.num('temp_C'), call.table()),
+  perCase: (a, call) => reactionEntropyJK(a.text('reaction'), a.tempC(), call.table()),
 };
 
 const THERMONEUTRAL: FunctionSpec = {
@@ -93,7 +93,7 @@ const THERMONEUTRAL: FunctionSpec = {
       source: `derived by hand: 285.83 kJ/mol / (2F), ΔfH°(H2O, l) from ${NBS}; about 1.48 V (common practice)`,
     },
   ],
-  perCase: (a) => thermoneutralV(a.text('reaction'), a.num('temp_C'), null),
+  perCase: (a) => thermoneutralV(a.text('reaction'), a.tempC(), null),
 };
 
 /** The thermodynamics family. */

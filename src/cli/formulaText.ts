@@ -1,0 +1,124 @@
+/**
+ * Formula text as a spreadsheet file stores it, made ready for HyperFormula.
+ *
+ * One pass over the text, outside string literals ("...", with "" for a quote) and quoted
+ * sheet names ('...'):
+ * - the prefixes files put before newer or add-in functions are dropped: `_xlfn.`, `_xlws.`
+ *   and `_xldudf_` (an add-in function; `_xldudf_ECHEM_POTENTIAL` is also read as
+ *   `ECHEM.POTENTIAL`);
+ * - number literals are written the way HyperFormula reads them: the exponent mark in
+ *   lower case (`1E-6` → `1e-6`, `2.5E+3` → `2.5e+3`, as spreadsheet programs save them)
+ *   and a leading zero before a bare decimal point (`.5` → `0.5`);
+ * - the logical constants TRUE and FALSE, which files store bare, are written as the
+ *   functions HyperFormula reads (`TRUE()`, `FALSE()`).
+ * Text inside string literals is never changed.
+ */
+
+const PREFIXES = ['_xlfn.', '_xlws.', '_xldudf_'];
+
+function isDigit(ch: string | undefined): boolean {
+  return ch !== undefined && ch >= '0' && ch <= '9';
+}
+
+/** Characters that continue a name, a cell reference or a number: a number cannot start after one. */
+function isNameChar(ch: string | undefined): boolean {
+  return ch !== undefined && /[A-Za-z0-9_.$\\]/.test(ch);
+}
+
+/**
+ * The formula with file prefixes dropped and number literals in HyperFormula's form.
+ *
+ * @example
+ * normalizeFormulaText('=ECHEM.POTENTIAL("Zn2+/Zn","Zn2+",1E-6)') // '=ECHEM.POTENTIAL("Zn2+/Zn","Zn2+",1e-6)'
+ */
+export function normalizeFormulaText(formula: string): string {
+  let out = '';
+  let i = 0;
+  const n = formula.length;
+  while (i < n) {
+    const ch = formula[i] as string;
+    if (ch === '"' || ch === "'") {
+      // A string literal or a quoted sheet name: copied as it is, doubled quotes included.
+      let j = i + 1;
+      while (j < n) {
+        if (formula[j] === ch) {
+          if (formula[j + 1] === ch) j += 2;
+          else break;
+        } else j++;
+      }
+      out += formula.slice(i, Math.min(n, j + 1));
+      i = j + 1;
+      continue;
+    }
+    if (ch === '_' && !isNameChar(formula[i - 1])) {
+      const lower = formula.slice(i, i + 8).toLowerCase();
+      const prefix = PREFIXES.find((p) => lower.startsWith(p));
+      if (prefix !== undefined) {
+        i += prefix.length;
+        if (prefix === '_xldudf_' && /^ECHEM_/i.test(formula.slice(i, i + 6))) {
+          out += `${formula.slice(i, i + 5)}.`;
+          i += 6;
+        }
+        continue;
+      }
+    }
+    if (/[A-Za-z]/.test(ch) && !isNameChar(formula[i - 1])) {
+      // A name, function or reference: copied whole, except the logical constants, which
+      // files store bare (TRUE) and HyperFormula reads as functions (TRUE()).
+      let j = i + 1;
+      while (isNameChar(formula[j])) j++;
+      const name = formula.slice(i, j);
+      const upper = name.toUpperCase();
+      const next = formula[j];
+      out += (upper === 'TRUE' || upper === 'FALSE') && next !== '(' && next !== '!' ? `${upper}()` : name;
+      i = j;
+      continue;
+    }
+    const startsNumber = isDigit(ch) || (ch === '.' && isDigit(formula[i + 1]));
+    if (startsNumber && !isNameChar(formula[i - 1])) {
+      let j = i;
+      while (isDigit(formula[j])) j++;
+      if (formula[j] === '.') {
+        j++;
+        while (isDigit(formula[j])) j++;
+      }
+      let mantissa = formula.slice(i, j);
+      let exponent = '';
+      if (
+        (formula[j] === 'e' || formula[j] === 'E') &&
+        (isDigit(formula[j + 1]) ||
+          ((formula[j + 1] === '+' || formula[j + 1] === '-') && isDigit(formula[j + 2])))
+      ) {
+        let k = j + 1;
+        if (formula[k] === '+' || formula[k] === '-') k++;
+        while (isDigit(formula[k])) k++;
+        exponent = `e${formula.slice(j + 1, k)}`;
+        j = k;
+      }
+      // A number directly followed by a name character is part of something else (e.g. "1A").
+      if (isNameChar(formula[j]) && formula[j] !== '.') {
+        out += formula.slice(i, j);
+        i = j;
+        continue;
+      }
+      if (mantissa.startsWith('.')) mantissa = `0${mantissa}`;
+      out += mantissa + exponent;
+      i = j;
+      continue;
+    }
+    out += ch;
+    i++;
+  }
+  return out;
+}
+
+/**
+ * Formula text as HyperFormula reads it: a leading "=", then {@link normalizeFormulaText}.
+ *
+ * @example
+ * formulaForEngine('_xlfn.STDEV.S(A1:A3)') // '=STDEV.S(A1:A3)'
+ */
+export function formulaForEngine(stored: string): string {
+  const body = stored.startsWith('=') ? stored.slice(1) : stored;
+  return `=${normalizeFormulaText(body)}`;
+}
