@@ -106,6 +106,46 @@ export {
 export * from './activity';
 export * from './references';
 
+// species data layer and reaction thermodynamics (issue 12)
+export {
+  type SpeciesThermoRecord,
+  type RegisteredSpecies,
+  type DuplicateSpecies,
+  STANDARD_SPECIES,
+  speciesRecord,
+  findSpeciesRecord,
+  listSpecies,
+  duplicateSpecies,
+  electronThermo,
+} from './data/species/index';
+export {
+  type ReactionThermo,
+  type ThermoEntry,
+  SPECIES_DATA_RANGE_C,
+  reactionThermo,
+  isComplete,
+  checkSpeciesTemperature,
+  cpFactorK,
+  gibbsAtJ,
+  entropyAtJK,
+  enthalpyAtJ,
+} from './thermo/reactionThermo';
+export { pKw } from './thermo/water';
+export { standardPotentialAt } from './thermo/sweep';
+export { type RowTemperature, rowE0V } from './table/potentialTable';
+export { halfCpModel } from './table/resolve';
+export {
+  type ReactionEnergy,
+  type FormationQuantity,
+  reactionEnergy,
+  reactionGibbsKJ,
+  hasInlineActivities,
+  parseFormationQuantity,
+  formationValue,
+  reactionEnthalpyKJ,
+  reactionEntropyJK,
+  thermoneutralV,
+} from './thermo/reactionEnergy';
 // runner and build (issue 10): the cache registry and the parser's limits
 export {
   registerCache,
@@ -227,3 +267,4 @@ export { METAL_DENSITIES_G_CM3 } from './data/metalDensities';
 export { ALLOYS, G102_VALENCES } from './data/alloys';
 export { ANODE_MATERIALS, ANODE_UTILISATION, DEFAULT_UTILISATION } from './data/anodes';
 export { LIMITING_IONIC_CONDUCTIVITY_S_CM2_MOL } from './data/conductivities';
+export { tableCycleProblems, CYCLE_TOLERANCE_V } from './table/cycles';

@@ -7,7 +7,15 @@
  */
 import { EngineError, quote } from './errors';
 import { kelvinFromCelsius, slopePerElectronAtKelvin, STANDARD_TEMP_C } from './constants';
-import { AMBIGUOUS_REFERENCE_NAMES, REFERENCE_ELECTRODE_ROWS } from './data/referenceElectrodes';
+import {
+  AMBIGUOUS_REFERENCE_NAMES,
+  REFERENCE_ELECTRODE_ROWS,
+  BATES_BOWER_COEFFS,
+  SEAWATER_CHLORIDE,
+  type ReferenceTemperatureModel,
+} from './data/referenceElectrodes';
+import { resolveReaction, standardPotentialV } from './table/resolve';
+import { defaultTable } from './table/potentialTable';
 
 /**
  * A reference electrode, as listed by {@link listReferences}. Frozen.
@@ -24,12 +32,109 @@ export interface ReferenceElectrode {
   aliases: readonly string[];
   /** Potential vs SHE at 25 °C in V (RHE: at pH 0). */
   potentialVvsSHE: number;
-  /** dE/dT near 25 °C in mV/K, or null where none is known (the 25 °C value is then used). */
+  /** dE/dT at 25 °C in mV/K from the temperature model, or null where none is known (conversion away from 25 °C is then an error). */
   tempCoeffMvPerK: number | null;
   /** The publication(s) the numbers come from; "(from memory)" where recalled. */
   source: string;
   /** True where the potential depends on pH (RHE). */
   needsPH: boolean;
+  /** How the potential depends on temperature. */
+  model: ReferenceTemperatureModel;
+}
+
+/** E°(AgCl/Ag) in V at t °C from the Bates & Bower (1954) fit (0–60 °C). */
+export function batesBowerE0V(tC: number): number {
+  const [a, b, c, d] = BATES_BOWER_COEFFS as [number, number, number, number];
+  return a + tC * (b + tC * (c + tC * d));
+}
+
+/**
+ * Ag/AgCl in seawater, V vs SHE: E°(AgCl/Ag)(t) of Bates & Bower − (RT ln10/F)·log10 a(Cl-),
+ * a(Cl-) = 0.5658 mol/kg × (S/35) × 0.67 (chloride of standard seawater and its activity
+ * coefficient, from memory).
+ *
+ * Domain: 0–40 °C, practical salinity 5–45. Precision: about ±3 mV (the activity coefficient).
+ * @throws EngineError (`argument`) outside the domain
+ * @example
+ * silverChlorideSeawaterV(25, 35) // 0.2473
+ */
+export function silverChlorideSeawaterV(tempC: number, salinity = 35): number {
+  const tK = kelvinFromCelsius(tempC);
+  inRange(tempC, [0, 40], 'Ag/AgCl in seawater');
+  if (!Number.isFinite(salinity) || salinity < 5 || salinity > 45) {
+    throw new EngineError(
+      'argument',
+      `salinity must be a practical salinity from 5 to 45 (open seawater is about 35); got ${String(salinity)}.`,
+      'salinity',
+    );
+  }
+  const a = SEAWATER_CHLORIDE.molalityAtS35 * (salinity / 35) * SEAWATER_CHLORIDE.gamma;
+  return batesBowerE0V(tempC) - slopePerElectronAtKelvin(tK) * Math.log10(a);
+}
+
+function inRange(tempC: number, range: readonly [number, number], what: string): void {
+  if (tempC < range[0] - 1e-9 || tempC > range[1] + 1e-9) {
+    throw new EngineError(
+      'argument',
+      `temp_C = ${tempC} °C is outside ${range[0]}–${range[1]} °C, the range of the temperature model of ${what}; give a temperature in that range.`,
+      'temp_C',
+    );
+  }
+}
+
+const coupleCache = new Map<string, ReturnType<typeof resolveReaction>>();
+
+function coupleE0V(halfReaction: string, tempC: number): number {
+  let r = coupleCache.get(halfReaction);
+  if (!r) {
+    r = resolveReaction(halfReaction, defaultTable());
+    coupleCache.set(halfReaction, r);
+  }
+  return standardPotentialV(r, tempC);
+}
+
+/** The model's potential vs SHE at a temperature (not at 25 °C for `unknown`). */
+function modelPotentialV(ref: { id: string; name: string; potentialVvsSHE: number; model: ReferenceTemperatureModel }, tempC: number): number {
+  const m = ref.model;
+  const e25 = ref.potentialVvsSHE;
+  const tK = tempC + 273.15;
+  switch (m.kind) {
+    case 'constant':
+    case 'rhe':
+      return e25;
+    case 'linear':
+      inRange(tempC, m.rangeC, ref.id);
+      return e25 + (m.mvPerK * (tempC - 25)) / 1000;
+    case 'polynomial': {
+      inRange(tempC, m.rangeC, ref.id);
+      let x = 0;
+      const d = tempC - m.t0C;
+      for (let i = m.coeffs.length - 1; i >= 0; i--) x = x * d + m.coeffs[i]!;
+      return x;
+    }
+    case 'couple':
+      inRange(tempC, m.rangeC, ref.id);
+      return coupleE0V(m.halfReaction, tempC) - (tK / 298.15) * (coupleE0V(m.halfReaction, 25) - e25);
+    case 'bates':
+      inRange(tempC, m.rangeC, ref.id);
+      return batesBowerE0V(tempC) - (tK / 298.15) * (batesBowerE0V(25) - e25);
+    case 'seawater':
+      return silverChlorideSeawaterV(tempC, m.salinity);
+    case 'unknown':
+      throw new EngineError(
+        'argument',
+        `${ref.id} (${ref.name}) has no known temperature coefficient, so its potential at ${tempC} °C is unknown and a conversion would correct only one side. Convert at 25 °C, or use an electrode with a published temperature dependence.`,
+        'temp_C',
+      );
+  }
+}
+
+function coefficientAt25(row: { id: string; name: string; potentialVvsSHE: number; model: ReferenceTemperatureModel; tempCoeffMvPerK: number | null }): number | null {
+  const m = row.model;
+  if (m.kind === 'unknown' || m.kind === 'rhe') return row.tempCoeffMvPerK;
+  if (m.kind === 'constant') return 0;
+  if (m.kind === 'linear') return m.mvPerK;
+  return ((modelPotentialV(row, 26) - modelPotentialV(row, 24)) / 2) * 1000;
 }
 
 const ELECTRODES: readonly ReferenceElectrode[] = Object.freeze(
@@ -39,9 +144,10 @@ const ELECTRODES: readonly ReferenceElectrode[] = Object.freeze(
       name: r.name,
       aliases: Object.freeze([...r.aliases]),
       potentialVvsSHE: r.potentialVvsSHE,
-      tempCoeffMvPerK: r.tempCoeffMvPerK,
+      tempCoeffMvPerK: coefficientAt25(r),
       source: r.source,
       needsPH: r.needsPH,
+      model: r.model,
     }),
   ),
 );
@@ -159,19 +265,22 @@ export function findReference(name: string, argName = 'reference'): ReferenceEle
 /**
  * The potential of a reference electrode vs SHE, in V, at a temperature (and pH for RHE).
  *
- * - Electrodes with a temperature coefficient: E(T) = E25 + coeff·(T − 25)/1000. The
- *   coefficients are values near 25 °C; far from 25 °C the linear law is an extrapolation.
- * - Electrodes without one (coefficient null): the 25 °C value at every temperature (see
- *   {@link referenceTemperatureNote}).
+ * - Each electrode's temperature model (its `model`): a published fit (SCE; Ag/AgCl from
+ *   Bates & Bower), a linear coefficient (Cu/CuSO4 +0.9 mV/K, common practice), or the
+ *   couple's E°(T) from the species data with the filling's activity term held (calomel in
+ *   KCl, Hg/Hg2SO4, Hg/HgO), each over its stated range (an argument error outside it).
+ * - Electrodes without a known coefficient: an argument error away from 25 °C (never a
+ *   silent half-correction of a conversion).
  * - RHE: E = −(RT ln10/F)·pH at the given temperature, p(H2) = 1 bar.
  *
  * Domain: temp_C > −273.15 and finite; pH any finite real (required for RHE, otherwise
  * ignored but still checked when given). Precision: float64; the result is as good as the
  * tabulated value (typically ±1 mV, see each electrode's source).
  *
- * @throws EngineError `argument` for a bad temperature, a non-finite pH, or RHE without pH
+ * @throws EngineError `argument` for a bad temperature, a non-finite pH, RHE without pH, a
+ *   temperature outside the model's range, or any temperature but 25 °C without a model
  * @example
- * referencePotentialV(findReference('SCE'), 35, null) // 0.2346
+ * referencePotentialV(findReference('SCE'), 35, null) // 0.23443
  * referencePotentialV(findReference('RHE'), 25, 7) // −0.414115…
  */
 export function referencePotentialV(ref: ReferenceElectrode, tempC: number, pH: number | null): number {
@@ -189,28 +298,26 @@ export function referencePotentialV(ref: ReferenceElectrode, tempC: number, pH: 
     }
     return ref.potentialVvsSHE - slopePerElectronAtKelvin(tempK) * pH;
   }
-  const coeff = ref.tempCoeffMvPerK;
-  if (coeff === null || tempC === STANDARD_TEMP_C) return ref.potentialVvsSHE;
-  return ref.potentialVvsSHE + (coeff * (tempC - STANDARD_TEMP_C)) / 1000;
+  if (tempC === STANDARD_TEMP_C) return ref.potentialVvsSHE;
+  return modelPotentialV(ref, tempC);
 }
 
 /**
- * A note for results at a temperature where an electrode has no temperature coefficient
- * (its 25 °C value was used), or null where there is nothing to say (25 °C, a known
- * coefficient, or the RHE whose pH term uses the temperature).
+ * A note for results at a temperature where an electrode has no temperature coefficient,
+ * or null where there is nothing to say. Since a conversion away from 25 °C with such an
+ * electrode is an error, the note only explains that error.
  *
  * Domain: finite temp_C. Allocates a string only when there is a note.
  *
  * @example
- * referenceTemperatureNote(findReference('CSE'), 15)
- * // 'CSE (Copper–copper sulfate, saturated CuSO4) has no known temperature coefficient; its 25 °C value 0.316 V vs SHE was used at 15 °C.'
+ * referenceTemperatureNote(findReference('SSCE'), 15) // '… has no known temperature coefficient …'
  * referenceTemperatureNote(findReference('SCE'), 15) // null
  */
 export function referenceTemperatureNote(ref: ReferenceElectrode, tempC: number): string | null {
-  if (ref.needsPH || ref.tempCoeffMvPerK !== null || tempC === STANDARD_TEMP_C) return null;
+  if (ref.needsPH || ref.model.kind !== 'unknown' || tempC === STANDARD_TEMP_C) return null;
   return (
     `${ref.id} (${ref.name}) has no known temperature coefficient; ` +
-    `its 25 °C value ${ref.potentialVvsSHE} V vs SHE was used at ${tempC} °C.`
+    `only its 25 °C value ${ref.potentialVvsSHE} V vs SHE is known, so it cannot be used at ${tempC} °C.`
   );
 }
 

@@ -20,7 +20,7 @@ function implementation(id: string): (...args: Arg[]) => Result {
 }
 
 /**
- * Electrode potential of a half-reaction, or EMF of a cell or reaction, in V vs SHE, by the Nernst equation at the activities and temperature given. Example: =ECHEM.POTENTIAL("Cu2+/Cu", "Cu2+", 0.01) gives 0.277841.
+ * Electrode potential of a half-reaction, or EMF of a cell or reaction, in V vs SHE, by the Nernst equation at the activities and temperature given. Example: =ECHEM.POTENTIAL("Cu2+/Cu", "Cu2+", 0.01) gives 0.280219.
  * @customfunction POTENTIAL
  * @helpurl https://localhost:3000/taskpane.html#ref-potential
  * @param reaction Half-reaction (a reduction), couple such as "Cu2+/Cu", cell diagram such as "Zn | Zn2+ || Cu2+ | Cu", or full reaction; one cell or a column of cases
@@ -35,7 +35,7 @@ export function POTENTIAL(reaction: any[][], species?: any[][], values?: any[][]
 }
 
 /**
- * Standard potential E° in V vs SHE of a half-reaction, couple or cell at temp_C (with the table's dE°/dT; where it has none, E° at 25 °C). Example: =ECHEM.STDPOTENTIAL("Cu2+/Cu") gives 0.337.
+ * Standard potential E° in V vs SHE of a half-reaction, couple or cell at temp_C (with the table's dE°/dT; where it has none, E° at 25 °C). Example: =ECHEM.STDPOTENTIAL("Cu2+/Cu") gives 0.339378.
  * @customfunction STDPOTENTIAL
  * @helpurl https://localhost:3000/taskpane.html#ref-stdpotential
  * @param reaction Half-reaction (a reduction), couple such as "Cu2+/Cu", cell diagram such as "Zn | Zn2+ || Cu2+ | Cu", or full reaction; one cell or a column of cases
@@ -90,7 +90,7 @@ export function CELLNOTATION(reaction: any[][], species?: any[][], values?: any[
 }
 
 /**
- * log10 of the equilibrium constant, nFE°/(RT ln 10), from a reaction (E° and n from the table) or from E° in V and n. Example: =ECHEM.LOGK(1.1, 2) gives 37.1877.
+ * log10 of the equilibrium constant, −ΔrG°/(RT ln 10) = nFE°/(RT ln 10), of a reaction (also a solubility or an ionisation, from the species data) or from E° in V and n; activities written in the reaction do not change K. Example: =ECHEM.LOGK(1.1, 2) gives 37.1877.
  * @customfunction LOGK
  * @helpurl https://localhost:3000/taskpane.html#ref-logk
  * @param reaction_or_E A reaction, couple or cell (E° and n from the table), or a potential in V (then give n); one cell or a column of cases
@@ -104,7 +104,7 @@ export function LOGK(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], tabl
 }
 
 /**
- * Equilibrium constant K = 10^(nFE°/(RT ln 10)) from a reaction or from E° in V and n; #NUM! where K leaves the number range (use LOGK). Example: =ECHEM.EQCONST("Zn + Cu2+ -> Zn2+ + Cu") gives 1.40323E+37.
+ * Equilibrium constant K = 10^(nFE°/(RT ln 10)) from a reaction or from E° in V and n; #NUM! where K leaves the number range (use LOGK). Example: =ECHEM.EQCONST("Zn + Cu2+ -> Zn2+ + Cu") gives 1.68858E+37.
  * @customfunction EQCONST
  * @helpurl https://localhost:3000/taskpane.html#ref-eqconst
  * @param reaction_or_E A reaction, couple or cell (E° and n from the table), or a potential in V (then give n); one cell or a column of cases
@@ -118,7 +118,7 @@ export function EQCONST(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], t
 }
 
 /**
- * Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n, or the standard ΔG° of a reaction. Example: =ECHEM.GIBBS(0.434, 2) gives -83.7493.
+ * Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n; of a reaction, ΔG° at temp_C, or ΔG at the activities written in it (e.g. "Zn | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu"), agreeing with POTENTIAL. Example: =ECHEM.GIBBS(0.434, 2) gives -83.7493.
  * @customfunction GIBBS
  * @helpurl https://localhost:3000/taskpane.html#ref-gibbs
  * @param reaction_or_E A reaction, couple or cell (E° and n from the table), or a potential in V (then give n); one cell or a column of cases
@@ -256,7 +256,7 @@ export function VSREF(potential: any[][], from_ref: any[][], to_ref: any[][], pH
 }
 
 /**
- * Which table rows (built-in or yours) gave E°, with their sources and any derivation. Example: =ECHEM.SOURCE("Cu2+/Cu") gives Cu2+ + 2 e- -> Cu: E° = 0.337 V from Cu2+ + 2 e- -> Cu, E° = 0.337 V, dE°/dT = 0.011 mV/K (built-in row 73: OpenStax Chemistry 2e, Appendix L; dE°/dT from memory, Bratsch, J. Phys. Chem. Ref. Data 18, 1 (1989)); at other temperatures E° moves by 0.011 mV/K.
+ * Which table rows (built-in or yours) gave E°, with their sources and any derivation. Example: =ECHEM.SOURCE("Cu2+/Cu") gives Cu2+ + 2 e- -> Cu: E° = 0.339378 V from Cu2+ + 2 e- -> Cu, E° = 0.33938 V, dE°/dT = 0.011 mV/K (built-in row 73: E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory); OpenStax Chemistry 2e, Appendix L prints 0.34 V); E°(T) by Gibbs–Helmholtz from the species data (ΔrS°, constant ΔrCp°; valid 0–100 °C), dE°/dT = 0.0107 mV/K at 25 °C; no Cp° for Cu2+: left out of ΔrCp°.
  * @customfunction SOURCE
  * @helpurl https://localhost:3000/taskpane.html#ref-source
  * @param reaction Half-reaction (a reduction), couple such as "Cu2+/Cu", cell diagram such as "Zn | Zn2+ || Cu2+ | Cu", or full reaction; one cell or a column of cases
@@ -268,7 +268,7 @@ export function SOURCE(reaction: any[][], table?: any[][]): any[][] {
 }
 
 /**
- * The built-in potentials table (or the rows a filter picks), spilled with a header row. Example: =ECHEM.LISTTABLE("Cu") gives {Half-reaction, E° (V vs SHE, 25 °C), dE°/dT (mV/K), Source; Cu2O(s) + H2O + 2 e- -> 2 Cu + 2 OH-, -0.36, , CRC Handbook of Chemistry and Physics, 92nd ed., Electrochemical Series (from memory); Cu2+ + e- -> Cu+, 0.153, , OpenStax Chemistry 2e, Appendix L; Cu2+ + 2 e- -> Cu, 0.337, 0.011, OpenStax Chemistry 2e, Appendix L; dE°/dT from memory, Bratsch, J. Phys. Chem. Ref. Data 18, 1 (1989); … (5 rows)}.
+ * The built-in potentials table (or the rows a filter picks), spilled with a header row. Example: =ECHEM.LISTTABLE("Cu") gives {Half-reaction, E° (V vs SHE, 25 °C), dE°/dT (mV/K), Source; Cu2O(s) + H2O + 2 e- -> 2 Cu + 2 OH-, -0.3557, -1.29, E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory); CRC Handbook of Chemistry and Physics, 92nd ed., Electrochemical Series (from memory) prints -0.36 V; Cu2+ + e- -> Cu+, 0.1607, 0.776, E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory); OpenStax Chemistry 2e, Appendix L prints 0.153 V; Cu2+ + 2 e- -> Cu, 0.3394, 0.011, E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory); OpenStax Chemistry 2e, Appendix L prints 0.34 V; … (5 rows)}.
  * @customfunction LISTTABLE
  * @helpurl https://localhost:3000/taskpane.html#ref-listtable
  * @param [filter] An element symbol (Fe), a species (Cu2+) or any text (default: the whole table)
@@ -279,7 +279,7 @@ export function LISTTABLE(filter?: any[][]): any[][] {
 }
 
 /**
- * The problems in your potentials table (unbalanced rows, bad numbers, duplicates), one per row, or OK. Example: =ECHEM.CHECKTABLE({"Cu2+ + 2 e- -> Cu",0.337}) gives OK.
+ * The problems in your potentials table (unbalanced rows, bad numbers, duplicates, thermodynamic cycles that disagree by more than 2 mV), one per row, or OK. Example: =ECHEM.CHECKTABLE({"Cu2+ + 2 e- -> Cu",0.337}) gives OK.
  * @customfunction CHECKTABLE
  * @helpurl https://localhost:3000/taskpane.html#ref-checktable
  * @param table Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source
@@ -593,6 +593,56 @@ export function MOLALITY(salt: any[][], molarity: any[][], density_g_cm3?: any[]
   return toExcel(implementation('MOLALITY'), salt, molarity, density_g_cm3, temp_C);
 }
 
+/**
+ * Standard formation data of a species at 298.15 K and 1 bar from the species data: ΔfG° or ΔfH° in kJ/mol, S° or Cp° in J/(mol·K), or the source. Example: =ECHEM.FORMATION("H2O(l)", "H") gives -285.83.
+ * @customfunction FORMATION
+ * @helpurl https://localhost:3000/taskpane.html#ref-formation
+ * @param species A species with its phase where it matters, e.g. "Cu2+", "H2O(l)", "PbSO4(s)"; one cell or a column of cases
+ * @param [quantity] "G" (ΔfG°, kJ/mol), "H" (ΔfH°, kJ/mol), "S" (S°, J/(mol·K)), "Cp" (J/(mol·K)) or "source"; one of "G", "H", "S", "Cp", "source" (default: "G")
+ * @returns The quantity (kJ/mol, J/(mol·K)) or the source text, one row per case
+ */
+export function FORMATION(species: any[][], quantity?: any[][]): any[][] {
+  return toExcel(implementation('FORMATION'), species, quantity);
+}
+
+/**
+ * Standard reaction enthalpy ΔrH° in kJ/mol at temp_C (Gibbs–Helmholtz with constant ΔCp° from the species data, or the table rows’ dE°/dT). Example: =ECHEM.ENTHALPY("H2 + 1/2 O2 -> H2O") gives -285.83.
+ * @customfunction ENTHALPY
+ * @helpurl https://localhost:3000/taskpane.html#ref-enthalpy
+ * @param reaction A reaction (also one that is not a redox reaction, e.g. "PbSO4(s) -> Pb2+ + SO4^2-"), half-reaction, couple or cell; one cell or a column of cases
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
+ * @returns ΔrH° in kJ/mol, one row per case
+ */
+export function ENTHALPY(reaction: any[][], temp_C?: any[][], table?: any[][]): any[][] {
+  return toExcel(implementation('ENTHALPY'), reaction, temp_C, table);
+}
+
+/**
+ * Standard reaction entropy ΔrS° in J/(mol·K) at temp_C, from the species data or the table rows’ dE°/dT. Example: =ECHEM.ENTROPY("H2 + 1/2 O2 -> H2O") gives -163.343.
+ * @customfunction ENTROPY
+ * @helpurl https://localhost:3000/taskpane.html#ref-entropy
+ * @param reaction A reaction (also one that is not a redox reaction, e.g. "PbSO4(s) -> Pb2+ + SO4^2-"), half-reaction, couple or cell; one cell or a column of cases
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @param [table] Your potentials range: half-reaction | E° (V) | dE°/dT (mV/K) | source (default: the built-in table)
+ * @returns ΔrS° in J/(mol·K), one row per case
+ */
+export function ENTROPY(reaction: any[][], temp_C?: any[][], table?: any[][]): any[][] {
+  return toExcel(implementation('ENTROPY'), reaction, temp_C, table);
+}
+
+/**
+ * Thermoneutral voltage ΔrH°/(nF) in V of a redox reaction as written (positive for an electrolysis such as "H2O -> H2 + 1/2 O2"), for electrolysers and fuel cells. Example: =ECHEM.THERMONEUTRAL("H2O -> H2 + 1/2 O2") gives 1.48121.
+ * @customfunction THERMONEUTRAL
+ * @helpurl https://localhost:3000/taskpane.html#ref-thermoneutral
+ * @param reaction A reaction (also one that is not a redox reaction, e.g. "PbSO4(s) -> Pb2+ + SO4^2-"), half-reaction, couple or cell; one cell or a column of cases
+ * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
+ * @returns V, one row per case
+ */
+export function THERMONEUTRAL(reaction: any[][], temp_C?: any[][]): any[][] {
+  return toExcel(implementation('THERMONEUTRAL'), reaction, temp_C);
+}
+
 // Excel finds each function by its id. Guarded so that the page also loads outside Excel.
 if (typeof CustomFunctions !== 'undefined') {
   CustomFunctions.associate('POTENTIAL', POTENTIAL);
@@ -636,4 +686,8 @@ if (typeof CustomFunctions !== 'undefined') {
   CustomFunctions.associate('MEANACTCOEF', MEANACTCOEF);
   CustomFunctions.associate('WATERACTIVITY', WATERACTIVITY);
   CustomFunctions.associate('MOLALITY', MOLALITY);
+  CustomFunctions.associate('FORMATION', FORMATION);
+  CustomFunctions.associate('ENTHALPY', ENTHALPY);
+  CustomFunctions.associate('ENTROPY', ENTROPY);
+  CustomFunctions.associate('THERMONEUTRAL', THERMONEUTRAL);
 }

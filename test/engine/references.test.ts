@@ -9,12 +9,14 @@ import {
   normaliseReferenceName,
   referencePotentialV,
   referenceTemperatureNote,
+  batesBowerE0V,
+  silverChlorideSeawaterV,
 } from '../../src/engine/references';
 import { nernstSlopeV } from '../../src/engine/constants';
+import { EngineError } from '../../src/engine/errors';
 import { engineErrorOf } from '../support';
 
 /** Runs `f` and returns the EngineError it throws (fails the test otherwise). */
-
 describe('built-in reference potentials at 25 °C', () => {
   // prettier-ignore
   const published: [string, number, string][] = [
@@ -33,6 +35,8 @@ describe('built-in reference potentials at 25 °C', () => {
     ['Hg/Hg2SO4-sat-K2SO4', 0.64, 'from memory: printed values 0.64–0.65, 0.640 used'],
     ['Hg/HgO-0.1M-NaOH', 0.165, 'Int. J. Corrosion 2010, art. 756950, Table 2 (seen)'],
     ['Hg/HgO-1M-NaOH', 0.14, 'Bard & Faulkner (from memory)'],
+    ['Ag/AgCl-seawater', 0.2473, 'Bates & Bower E° with a(Cl-) of standard seawater (from memory); about +0.25 V (common practice)'],
+    ['Zn-seawater', -0.7827, 'Ag/AgCl seawater − 1.030 V (DNV-RP-B401, from memory)'],
   ];
 
   it.each(published)('%s = %d V vs SHE (%s)', (id, value) => {
@@ -77,9 +81,12 @@ describe('conversions between scales', () => {
   });
 
   it('composes (A→B→C = A→C) and inverts (A→B→A = identity) for every pair', () => {
-    const ids = listReferences().map((r) => r.id);
     const e = -0.4321;
-    for (const temp of [25, 45]) {
+    for (const temp of [25, 35]) {
+      // at 35 °C only the electrodes with a known temperature dependence (the others are an error there)
+      const ids = listReferences()
+        .filter((r) => temp === 25 || r.model.kind !== 'unknown')
+        .map((r) => r.id);
       for (const a of ids) {
         for (const b of ids) {
           const ab = convertPotentialV(e, a, b, temp, 3.2);
@@ -131,23 +138,94 @@ describe('reversible hydrogen electrode', () => {
 });
 
 describe('temperature', () => {
-  it('applies the SCE coefficient at 35 °C: 0.2412 − 0.66·10/1000 (Bard & Faulkner, from memory)', () => {
-    expect(referencePotentialV(findReference('SCE'), 35, null)).toBeCloseTo(0.2346, 12);
-    expect(convertPotentialV(0, 'SCE', 'SHE', 35)).toBeCloseTo(0.2346, 12);
+  // SCE fit (from memory, Bard & Faulkner App. C): E = 0.2412 − 6.61e-4·x − 1.75e-6·x² − 9.0e-10·x³, x = t − 25
+  const sceByHand = (t: number) => {
+    const x = t - 25;
+    return 0.2412 - 6.61e-4 * x - 1.75e-6 * x * x - 9.0e-10 * x * x * x;
+  };
+
+  it.each([[0], [10], [35], [50], [60]])('SCE at %d °C follows the published fit (from memory)', (t) => {
+    expect(referencePotentialV(findReference('SCE'), t, null)).toBeCloseTo(sceByHand(t), 12);
+    expect(convertPotentialV(0, 'SCE', 'SHE', t)).toBeCloseTo(sceByHand(t), 12);
+  });
+
+  it('SCE at 50 °C: the fit lies 1.1 mV below the straight −0.66 mV/K line (curvature)', () => {
+    const linear = 0.2412 - 0.66e-3 * 25;
+    expect((linear - referencePotentialV(findReference('SCE'), 50, null)) * 1000).toBeCloseTo(1.1, 1);
+  });
+
+  it('SCE about −0.66 mV/K near 25 °C (Bard & Faulkner, from memory)', () => {
+    expect(findReference('SCE').tempCoeffMvPerK).toBeCloseTo(-0.66, 2);
+  });
+
+  // Bates & Bower, J. Res. NBS 53, 283 (1954), E°(AgCl/Ag), seen
+  it.each([
+    [5, 0.23413],
+    [10, 0.23142],
+    [15, 0.22857],
+    [20, 0.22557],
+    [25, 0.22234],
+    [30, 0.21904],
+    [35, 0.21566],
+    [45, 0.20835],
+    [50, 0.20449],
+    [55, 0.20056],
+    [60, 0.19649],
+  ])('the Bates & Bower fit of E°(AgCl/Ag) at %d °C is within 0.5 mV of their table (%d V)', (t, bb) => {
+    expect(Math.abs(batesBowerE0V(t) - bb)).toBeLessThanOrEqual(0.5e-3);
+  });
+
+  it('Ag/AgCl in a KCl filling moves with E°(AgCl/Ag)(t) at constant chloride activity (derived)', () => {
+    // 3 M KCl, 0.210 V at 25 °C (IJC, seen): log a(Cl-) = (E°25 − 0.210)/S25, held
+    const sl = (t: number) => nernstSlopeV(t);
+    const logA = (batesBowerE0V(25) - 0.21) / sl(25);
+    for (const t of [5, 40, 60])
+      expect(referencePotentialV(findReference('Ag/AgCl 3M KCl'), t, null)).toBeCloseTo(batesBowerE0V(t) - sl(t) * logA, 12);
   });
 
   it('applies the Ag/AgCl sat. KCl coefficient at 15 °C: 0.197 + 1.0·10/1000 (from memory)', () => {
     expect(referencePotentialV(findReference('Ag/AgCl sat KCl'), 15, null)).toBeCloseTo(0.207, 12);
   });
 
-  it('uses the 25 °C value where no coefficient is known, and says so', () => {
-    const cse = findReference('CSE');
-    expect(referencePotentialV(cse, 40, null)).toBe(0.316); // IJC Table 2 (seen)
-    expect(referenceTemperatureNote(cse, 40)).toMatch(
-      /no known temperature coefficient.*25 °C value 0\.316 V.*40 °C/,
-    );
-    expect(referenceTemperatureNote(cse, 25)).toBeNull();
+  it('Cu/CuSO4 moves by about +0.9 mV/K (common practice): 18 mV lower at 5 °C', () => {
+    expect(referencePotentialV(findReference('CSE'), 5, null)).toBeCloseTo(0.316 - 0.018, 12);
+    expect(findReference('CSE').tempCoeffMvPerK).toBe(0.9);
+  });
+
+  it('corrects both sides of a conversion: CSE → SCE at 10 °C', () => {
+    const e = convertPotentialV(-0.85, 'CSE', 'SCE', 10);
+    expect(e).toBeCloseTo(-0.85 + (0.316 - 0.9e-3 * 15) - sceByHand(10), 12);
+  });
+
+  it('an electrode without a known coefficient is an error away from 25 °C, naming it', () => {
+    for (const id of ['SSCE', 'Hg/Hg2SO4-sat-K2SO4', 'Zn seawater']) {
+      const err = engineErrorOf(() => convertPotentialV(0, id, 'SHE', 40));
+      expect(err.kind).toBe('argument');
+      expect(err.message).toContain('no known temperature coefficient');
+      expect(referenceTemperatureNote(findReference(id), 40)).toMatch(/no known temperature coefficient/);
+    }
+    expect(convertPotentialV(0, 'SSCE', 'SHE', 25)).toBe(0.236);
     expect(referenceTemperatureNote(findReference('SCE'), 40)).toBeNull();
+  });
+
+  it('outside a fit’s range is an error naming the range', () => {
+    const err = engineErrorOf(() => convertPotentialV(0, 'SCE', 'SHE', 80));
+    expect(err.kind).toBe('argument');
+    expect(err.message).toContain('0–60 °C');
+  });
+
+  it('Ag/AgCl in seawater: about +0.25 V vs SHE at 25 °C, S = 35 (common practice), lower in fresher water', () => {
+    expect(referencePotentialV(findReference('Ag/AgCl seawater'), 25, null)).toBeCloseTo(0.25, 2);
+    // a(Cl-) = 0.5658·0.67 (from memory): E = E°(BB) − S25·log10 a, derived by hand
+    expect(silverChlorideSeawaterV(25, 35)).toBeCloseTo(batesBowerE0V(25) - nernstSlopeV(25) * Math.log10(0.5658 * 0.67), 12);
+    expect(silverChlorideSeawaterV(25, 20)).toBeGreaterThan(silverChlorideSeawaterV(25, 35));
+    expect(engineErrorOf(() => silverChlorideSeawaterV(25, 60)).argument).toBe('salinity');
+  });
+
+  it('Zn seawater is about 1.03 V below Ag/AgCl seawater (DNV-RP-B401, from memory)', () => {
+    expect(convertPotentialV(0, 'Zn seawater', 'Ag/AgCl seawater')).toBeCloseTo(-1.03, 3);
+    // −0.80 V vs Ag/AgCl seawater (a protection criterion for steel in seawater, common practice) is +0.23 V vs Zn
+    expect(convertPotentialV(-0.8, 'Ag/AgCl seawater', 'Zn seawater')).toBeCloseTo(0.23, 3);
   });
 
   it('keeps SHE at 0 at every temperature (IUPAC Gold Book, by definition)', () => {
@@ -249,7 +327,16 @@ describe('bad numbers', () => {
     for (const a of ids)
       for (const b of ids)
         for (const t of [-273, 0, 25, 1000])
-          for (const pH of [-2, 7, 16])
-            expect(Number.isFinite(convertPotentialV(1e3, a, b, t, pH))).toBe(true);
+          for (const pH of [-2, 7, 16]) {
+            // a finite value, or an EngineError that says why (a temperature outside a model's
+            // range, or no known coefficient): never NaN; at 25 °C always a value
+            let outcome: string;
+            try {
+              outcome = Number.isFinite(convertPotentialV(1e3, a, b, t, pH)) ? 'finite' : 'not finite';
+            } catch (e) {
+              outcome = e instanceof EngineError ? (t === 25 ? 'error at 25 °C' : 'finite') : 'thrown';
+            }
+            expect(outcome).toBe('finite');
+          }
   });
 });

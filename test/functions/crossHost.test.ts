@@ -17,6 +17,9 @@ import '../../src/functions/functions';
 import { HF_CONFIG, registerEchemFunctions } from '../../src/cli/echemPlugin';
 import { callFunction, type Arg } from '../../src/functions/catalogue';
 
+/** E°(Cu2+/Cu) of the built-in row: ΔfG°(Cu2+) = 65.49 kJ/mol / 2F (NBS 1982, from memory; OpenStax Appendix L prints +0.34). */
+const E_CU = 65.49e3 / (2 * 96485.33212331001);
+
 registerEchemFunctions();
 
 /** An error cell: how Excel passes it, and a formula that gives it in HyperFormula. */
@@ -123,13 +126,13 @@ describe('an error in an input cell gives the same result in Excel and in the ru
   test('the erring case alone shows the error; the others compute', () => {
     const r = viaExcel(CASES[0]!);
     expect(r).toHaveLength(3);
-    // a = 0.01: E = 0.337 − (RT ln10/2F)·2 (E° from OpenStax Chemistry 2e, Appendix L; SI 2019 R, F)
-    expect(r[0]![0]).toBeCloseTo(0.2778407, 6);
+    // a = 0.01: E = E° − (RT ln10/2F)·2 (E° = 65.49 kJ/mol / 2F, NBS 1982 from memory; SI 2019 R, F)
+    expect(r[0]![0]).toBeCloseTo(0.2802187, 6);
     expect(r[1]![0]).toEqual({
       code: '#N/A',
       message: 'values (Cu2+) holds the error #N/A from its cell: fix that cell (or the formula that gives it) first.',
     });
-    expect(r[2]![0]).toBe(0.337);
+    expect(r[2]![0]).toBeCloseTo(E_CU, 12);
   });
 
   test('a repeated sweep (the fast path) propagates an error cell the same way', () => {
@@ -147,7 +150,7 @@ describe('an error in an input cell gives the same result in Excel and in the ru
   test('an error cell under a species the reaction does not read is not read', () => {
     // extra species are ignored (docs/design.md, "Conventions"): a(Cu2+) = 0.01 → 0.337 − RT ln10/F
     const r = callFunction('POTENTIAL', ['Cu2+/Cu', [['Cu2+', 'Zn2+']], [[0.01, '#N/A']]]);
-    expect(r[0]![0] as number).toBeCloseTo(0.2778407, 6);
+    expect(r[0]![0] as number).toBeCloseTo(0.2802187, 6); // 65.49 kJ/mol / 2F (NBS 1982, from memory) − S25
   });
 
   test('a table row with an error does not break lookups of other rows', () => {

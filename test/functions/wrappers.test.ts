@@ -13,6 +13,9 @@ import { CATALOGUE, type Result } from '../../src/functions/catalogue';
 import { argFromExcel, resultToExcel, toExcel } from '../../src/functions/excelErrors';
 import { F as F_SI, s } from '../support';
 
+/** E°(Cu2+/Cu) of the built-in row: ΔfG°(Cu2+) = 65.49 kJ/mol / 2F (NBS 1982, from memory; OpenStax Appendix L prints +0.34). */
+const E_CU = 65.49e3 / (2 * 96485.33212331001);
+
 type Cell = number | string | StubError;
 const call = (fn: (...a: any[]) => any[][], ...args: unknown[]): Cell[][] => fn(...args) as Cell[][]; // eslint-disable-line @typescript-eslint/no-explicit-any
 const c = (v: unknown) => [[v]];
@@ -68,13 +71,13 @@ describe('published values', () => {
     expect(num(call(F.POTENTIAL, c('Zn + Cu2+ -> Zn2+ + Cu')))).toBeCloseTo(v, 12);
   });
 
-  it('STDPOTENTIAL of Cu2+/Cu is 0.337 V (OpenStax Chemistry 2e, Appendix L)', () => {
-    expect(num(call(F.STDPOTENTIAL, c('Cu2+/Cu')))).toBe(0.337);
+  it('STDPOTENTIAL of Cu2+/Cu is 65.49 kJ/mol / 2F = 0.3394 V (NBS 1982, from memory; OpenStax prints +0.34)', () => {
+    expect(num(call(F.STDPOTENTIAL, c('Cu2+/Cu')))).toBeCloseTo(E_CU, 12);
   });
 
-  it('POTENTIAL follows Nernst: Cu2+/Cu at a(Cu2+) = 0.01 is E° − (slope/2)·2 = 0.27784 V', () => {
+  it('POTENTIAL follows Nernst: Cu2+/Cu at a(Cu2+) = 0.01 is E° − (slope/2)·2 = 0.28022 V', () => {
     const v = num(call(F.POTENTIAL, c('Cu2+/Cu'), c('Cu2+'), c(0.01)));
-    expect(v).toBeCloseTo(0.337 - slopeAt(25), 12);
+    expect(v).toBeCloseTo(E_CU - slopeAt(25), 12);
     expect(num(call(F.POTENTIAL, c('Cu2+ + 2 e- -> Cu'), c('Cu2+'), c(0.01)))).toBeCloseTo(v, 12);
   });
 
@@ -144,7 +147,7 @@ describe('published values', () => {
     const t = call(F.LISTTABLE, c('Cu'));
     expect(t.length).toBeGreaterThan(2);
     expect(t[0]!).toHaveLength(4);
-    expect(t.find((r) => r[0] === 'Cu2+ + 2 e- -> Cu')?.[1]).toBe(0.337);
+    expect(t.find((r) => r[0] === 'Cu2+ + 2 e- -> Cu')?.[1]).toBe(0.3394); // the row shows E° to 0.1 mV
     expect(call(F.LISTTABLE).length).toBeGreaterThan(60);
     expect(call(F.CHECKTABLE, [['Cu2+ + 2 e- -> Cu', 0.34, '', 'my lab']])).toEqual([['OK']]);
     const problems = call(F.CHECKTABLE, [
@@ -157,7 +160,7 @@ describe('published values', () => {
 });
 
 describe('defaults, omitted arguments and empty cells', () => {
-  const E25 = 0.337 - slopeAt(25);
+  const E25 = E_CU - slopeAt(25);
 
   it('temp_C omitted, null, undefined or an empty cell ("") is 25 °C', () => {
     const args = [c('Cu2+/Cu'), c('Cu2+'), c(0.01)];
@@ -174,8 +177,8 @@ describe('defaults, omitted arguments and empty cells', () => {
   });
 
   it('no species and no values is the standard state', () => {
-    expect(num(call(F.POTENTIAL, c('Cu2+/Cu'), null, null))).toBe(0.337);
-    expect(num(call(F.POTENTIAL, c('Cu2+/Cu'), c(''), c('')))).toBe(0.337);
+    expect(num(call(F.POTENTIAL, c('Cu2+/Cu'), null, null))).toBeCloseTo(E_CU, 12);
+    expect(num(call(F.POTENTIAL, c('Cu2+/Cu'), c(''), c('')))).toBeCloseTo(E_CU, 12);
   });
 
   it('an empty table ("", 0 or null) means the built-in table; a given table takes precedence', () => {
@@ -197,7 +200,10 @@ describe('defaults, omitted arguments and empty cells', () => {
   });
 
   it('keeps a 1×1 result a 1×1 grid', () => {
-    expect(call(F.STDPOTENTIAL, c('Cu2+/Cu'))).toEqual([[0.337]]);
+    const r = call(F.STDPOTENTIAL, c('Cu2+/Cu'));
+    expect(r).toHaveLength(1);
+    expect(r[0]).toHaveLength(1);
+    expect(r[0]![0]).toBeCloseTo(E_CU, 12);
   });
 });
 
@@ -219,9 +225,9 @@ describe('errors', () => {
   it('a bad case errs in its own cell of the spill; the other cases compute', () => {
     const r = call(F.POTENTIAL, c('Cu2+/Cu'), c('Cu2+'), [[1], [0.1], [-1], ['x'], [0.01]]);
     expect(r).toHaveLength(5);
-    expect(r[0]![0]).toBeCloseTo(0.337, 12);
-    expect(r[1]![0]).toBeCloseTo(0.337 - slopeAt(25) / 2, 12);
-    expect(r[4]![0]).toBeCloseTo(0.337 - slopeAt(25), 12);
+    expect(r[0]![0]).toBeCloseTo(E_CU, 12);
+    expect(r[1]![0]).toBeCloseTo(E_CU - slopeAt(25) / 2, 12);
+    expect(r[4]![0]).toBeCloseTo(E_CU - slopeAt(25), 12);
     for (const i of [2, 3]) {
       expect(r[i]![0]).toBeInstanceOf(StubError);
       expect((r[i]![0] as StubError).code).toBe('#VALUE!');

@@ -113,7 +113,7 @@ const UNBALANCED_CU_ROW: Arg = [['Cu2+ + e- -> Cu', 0.3]];
 /** A user table with the half-reaction column only (no E°). */
 const CU_ROW_WITHOUT_E0: Arg = [['Cu2+ + 2 e- -> Cu']];
 const UNKNOWN = 'Tc2+/Tc';
-const AMBIGUOUS = 'MnO4-/MnO2';
+const AMBIGUOUS = 'Br2/Br-'; // Br2(l) and Br2(aq) (MnO4-/MnO2 is one couple in acid and base through Kw)
 const NOT_AN_ELEMENT = 'Xx2+/Xx';
 
 const MISSING_REACTION = /reaction is missing: give a/;
@@ -1358,6 +1358,12 @@ const HAND_CASES: readonly BadInputCase[] = [
     says: 'what does not balance',
   },
   ...reactionCases('CELLNOTATION', (r) => [r, null, null, null]),
+  ...reactionCases('ENTHALPY', (r) => [r, null, null]),
+  ...tempCases('ENTHALPY', ['H2 + 1/2 O2 -> H2O', 25, null], 1),
+  ...reactionCases('ENTROPY', (r) => [r, null, null]),
+  ...tempCases('ENTROPY', ['H2 + 1/2 O2 -> H2O', 25, null], 1),
+  ...reactionCases('THERMONEUTRAL', (r) => [r, null], { table: false }),
+  ...tempCases('THERMONEUTRAL', ['H2O -> H2 + 1/2 O2', 25], 1),
   {
     fn: 'CELLNOTATION',
     argument: 'values',

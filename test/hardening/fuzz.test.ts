@@ -535,6 +535,7 @@ const PLAUSIBLE: Record<string, fc.Arbitrary<Arg>> = {
   primary: fc.oneof(rowOf(speciesName), speciesName) as fc.Arbitrary<Arg>,
   activities: fc.array(fc.array(positive, { minLength: 1, maxLength: 3 }), { minLength: 1, maxLength: 4 }) as fc.Arbitrary<Arg>,
   selectivities: fc.oneof(rowOf(positive), positive) as fc.Arbitrary<Arg>,
+  quantity: cellOrColumn(fc.oneof(fc.constantFrom('G', 'H', 'S', 'Cp', 'source', '', null), mutatedText)),
 };
 
 /** Arguments for a function: each parameter plausible (3 in 4) or anything, sometimes one too many. */

@@ -11,6 +11,15 @@ import { formatReaction, type Reaction } from '../notation/reaction';
 import { checkBalance } from '../balance/balance';
 import { BUILTIN_POTENTIALS } from '../data/potentials';
 import { type StoichMap, reactionMap, electronsOf, proportionality, scaleMap } from './halfReaction';
+import { toNumber } from '../rational';
+import {
+  reactionThermo,
+  isComplete,
+  potentialModel,
+  checkSpeciesTemperature,
+  cpFactorK,
+  T0_K,
+} from '../thermo/reactionThermo';
 
 /** Where a row came from. `row` is 1-based within the user's range (header included). */
 export type RowOrigin =
@@ -30,6 +39,48 @@ export interface TableRow {
   readonly dE0dTmVperK: number | null;
   readonly source: string;
   readonly origin: RowOrigin;
+  /** how E° moves with temperature */
+  readonly temperature: RowTemperature;
+  /** E° at 25 °C from the species data (V), or null where a species has no data */
+  readonly speciesE0V: number | null;
+}
+
+/**
+ * A row's E°(T) = e0V + slopeVPerK·(T − 298.15 K) + cpVPerK·cpFactorK(T).
+ * `basis`: `species` where the slope and ΔCp° come from the species data (valid
+ * 0–100 °C), `row` where the row's own dE°/dT is used (linear), `none` where E° is taken
+ * as its 25 °C value at every temperature.
+ */
+export interface RowTemperature {
+  readonly slopeVPerK: number;
+  readonly cpVPerK: number;
+  readonly basis: 'species' | 'row' | 'none';
+  /** species without Cp° (their heat capacity is left out of ΔrCp°) */
+  readonly cpMissing: readonly string[];
+  /** species without S° (then the basis is not `species`) */
+  readonly entropyMissing: readonly string[];
+}
+
+/**
+ * E° of a table row at a temperature (V).
+ *
+ * @throws EngineError (`argument`) outside 0–100 °C for a row whose temperature dependence comes from the species data
+ * @example
+ * rowE0V(builtinTable()[0], 25)
+ */
+export function rowE0V(r: TableRow, tempC: number): number {
+  const t = r.temperature;
+  if (tempC === 25 || t.basis === 'none') return r.e0V;
+  if (t.basis === 'row') return r.e0V + t.slopeVPerK * (tempC - 25);
+  const tK = checkSpeciesTemperature(tempC);
+  return r.e0V + t.slopeVPerK * (tK - T0_K) + t.cpVPerK * cpFactorK(tK);
+}
+
+function speciesModel(map: StoichMap, n: number) {
+  const entries = Array.from(map.values()).map((v) => ({ species: v.species, nu: toNumber(v.nu) }));
+  const th = reactionThermo(entries);
+  if (!isComplete(th)) return null;
+  return { th, model: potentialModel(th, n) };
 }
 
 /** A problem found in a user's table. */
@@ -97,16 +148,46 @@ function makeRow(
       `${quote(text)} is written as an oxidation; write it as a reduction (electrons on the left).`,
     );
   }
+  const electrons = Number(e.num) / Number(e.den);
+  const sp = speciesModel(map, electrons);
+  let temperature: RowTemperature;
+  let value = e0V;
+  let slopeMv = dE0dTmVperK;
+  const cpMissing = sp ? sp.th.cpMissing : [];
+  const entropyMissing = sp ? sp.th.entropyMissing : [];
+  const fromSpecies = (): RowTemperature => ({
+    slopeVPerK: sp!.model.slopeVPerK!,
+    cpVPerK: sp!.model.cpVPerK,
+    basis: 'species',
+    cpMissing,
+    entropyMissing,
+  });
+  const fromRow = (mv: number | null): RowTemperature =>
+    mv === null
+      ? { slopeVPerK: 0, cpVPerK: 0, basis: 'none', cpMissing, entropyMissing }
+      : { slopeVPerK: mv * 1e-3, cpVPerK: 0, basis: 'row', cpMissing, entropyMissing };
+  if (origin.kind === 'builtin' && sp) {
+    // built-in rows: E° and its temperature dependence from the species data
+    value = sp.model.e0V;
+    if (sp.model.slopeVPerK !== null) {
+      temperature = fromSpecies();
+      slopeMv = sp.model.slopeVPerK * 1e3;
+    } else temperature = fromRow(dE0dTmVperK);
+  } else if (dE0dTmVperK !== null) temperature = fromRow(dE0dTmVperK);
+  else if (sp && sp.model.slopeVPerK !== null) temperature = fromSpecies();
+  else temperature = fromRow(null);
   return {
     text,
     reaction: n.reaction,
     map,
     perElectron: scaleMap(map, div({ num: 1n, den: 1n }, e)),
-    n: Number(e.num) / Number(e.den),
-    e0V,
-    dE0dTmVperK,
+    n: electrons,
+    e0V: value,
+    dE0dTmVperK: slopeMv,
     source,
     origin,
+    temperature,
+    speciesE0V: sp ? sp.model.e0V : null,
   };
 }
 

@@ -22,7 +22,13 @@ import { type CellDiagram, type CellPhase, type CellSpecies } from '../notation/
 import { type Couple } from '../notation/couple';
 import { INERT_ELECTRODES } from '../notation/elements';
 import { assertBalanced } from '../balance/balance';
-import { type PotentialTable, type TableRow, describeOrigin, conflictingDuplicates } from './potentialTable';
+import {
+  type PotentialTable,
+  type TableRow,
+  describeOrigin,
+  conflictingDuplicates,
+  rowE0V,
+} from './potentialTable';
 import {
   type StoichMap,
   MEDIUM_KEYS,
@@ -85,25 +91,39 @@ export function halfE0V25(h: ResolvedHalf): number {
 }
 
 /**
- * E° at a temperature: each row's E° moved linearly by its dE°/dT about 25 °C;
- * rows without a dE°/dT keep their 25 °C value.
+ * E° at a temperature (V): Σ weight·E°(row, T), each row's E°(T) from the species data
+ * (built-in rows, and user rows without dE°/dT whose species are all known), from the
+ * row's own dE°/dT, or its 25 °C value (see `RowTemperature`).
+ *
+ * @throws EngineError (`argument`) outside 0–100 °C where a row's E°(T) rests on the species data
  */
 export function halfE0V(h: ResolvedHalf, tempC: number): number {
+  if (tempC === 25) return halfE0V25(h);
   let e = 0;
-  const dT = tempC - 25;
-  for (const s of h.shares) e += s.weight * (s.row.e0V + (s.row.dE0dTmVperK ?? 0) * dT * 1e-3);
+  for (const s of h.shares) e += s.weight * rowE0V(s.row, tempC);
   return e;
 }
 
-/** dE°/dT in mV/K of a resolved half, and whether every row had one. */
+/** dE°/dT in mV/K at 25 °C of a resolved half, and whether every row had a temperature model. */
 export function halfSlopeMvPerK(h: ResolvedHalf): { slope: number; complete: boolean } {
   let slope = 0;
   let complete = true;
   for (const s of h.shares) {
-    if (s.row.dE0dTmVperK === null) complete = false;
-    else slope += s.weight * s.row.dE0dTmVperK;
+    if (s.row.temperature.basis === 'none') complete = false;
+    else slope += s.weight * s.row.temperature.slopeVPerK * 1e3;
   }
   return { slope, complete };
+}
+
+/** The heat-capacity term of a resolved half: E° gains cpVPerK·cpFactorK(T); and whether any row rests on the species data. */
+export function halfCpModel(h: ResolvedHalf): { cpVPerK: number; species: boolean } {
+  let cp = 0;
+  let species = false;
+  for (const s of h.shares) {
+    cp += s.weight * s.row.temperature.cpVPerK;
+    if (s.row.temperature.basis === 'species') species = true;
+  }
+  return { cpVPerK: cp, species };
 }
 
 // ---------------------------------------------------------------------------
@@ -188,7 +208,7 @@ function derivedCandidates(rows: readonly TableRow[], accept: (m: StoichMap) => 
         const factor = toNumber(b) < 0 ? -toNumber(b) : toNumber(b);
         const derivation =
           `derived by Gibbs-energy additivity: (${r1.text}) ${verb} ${factor === 1 ? '' : `${fmtFactor(b)} × `}(${r2.text}); ` +
-          `n·E° adds: E° = (${r1.n}·${r1.e0V} ${sign(b) > 0 ? '+' : '−'} ${fmtNum(factor * r2.n)}·${r2.e0V}) / ${fmtNum(n)}`;
+          `n·E° adds: E° = (${r1.n}·${fmtE0(r1.e0V)} ${sign(b) > 0 ? '+' : '−'} ${fmtNum(factor * r2.n)}·${fmtE0(r2.e0V)}) / ${fmtNum(n)}`;
         out.push({ map: m, n, shares, derivation, perElectron: scaleMap(m, div(ONE, e)) });
       }
     }
@@ -205,6 +225,9 @@ function derivedCandidates(rows: readonly TableRow[], accept: (m: StoichMap) => 
 function fmtFactor(b: Rational): string {
   const a = sign(b) < 0 ? neg(b) : b;
   return a.den === 1n ? a.num.toString() : `${a.num.toString()}/${a.den.toString()}`;
+}
+function fmtE0(x: number): string {
+  return String(Number(x.toFixed(5)));
 }
 function fmtNum(x: number): string {
   return Number.isInteger(x) ? String(x) : String(Number(x.toPrecision(12)));
@@ -285,6 +308,9 @@ function resolveHalfMap(
   const perE = scaleMap(target, div(ONE, e));
   refuseBroken(table, (m) => proportionality(perE, m) !== null, text);
   const direct = table.rows.filter((r) => proportionality(perE, r.perElectron) !== null).map(fromRow);
+  const accept = (m: StoichMap) => proportionality(perE, scaleMap(m, div(ONE, electronsOf(m)))) !== null;
+  const fromUser = derivedFromUserRows(table, direct, nonHOElements(target), accept, text);
+  if (fromUser) return toHalf(fromUser, target, inline, table);
   const chosen = pickOne(direct, text);
   if (chosen) return toHalf(chosen, target, inline, table);
   const rows = relevantRows(table, nonHOElements(target));
@@ -295,6 +321,26 @@ function resolveHalfMap(
   const d = pickOne(derived, text);
   if (d) return toHalf(d, target, inline, table);
   throw notFound(text);
+}
+
+/**
+ * Where the user passed a table and no user row gives the half-reaction directly, a
+ * half-reaction derived from the user's own rows beats a built-in row of the same couple
+ * (a user's data set is not mixed silently with the built-in one).
+ */
+function derivedFromUserRows(
+  table: PotentialTable,
+  direct: readonly Candidate[],
+  elements: ReadonlySet<string>,
+  accept: (m: StoichMap) => boolean,
+  text: string,
+): Candidate | null {
+  if (table.userRows.length < 2) return null;
+  if (direct.some((c) => c.shares.every((s) => s.row.origin.kind === 'user'))) return null;
+  const userRows = table.rows.filter((r) => r.origin.kind === 'user');
+  const rows = relevantRows({ ...table, rows: userRows }, elements);
+  if (rows.length < 2) return null;
+  return pickOne(derivedCandidates(rows, accept), text);
 }
 
 /**
@@ -326,12 +372,32 @@ function notFound(text: string): EngineError {
   );
 }
 
+/**
+ * Two built-in candidates that differ only by water ionisation (H2O -> H+ + OH-) are the
+ * acid and base forms of one couple: one species data layer makes them agree at every pH
+ * (a pH value sets a(OH-) through Kw), so the acid form is taken.
+ */
+function acidOfPair(pool: readonly Candidate[]): Candidate | null {
+  if (pool.length !== 2) return null;
+  if (!pool.every((c) => c.shares.every((s) => s.row.origin.kind === 'builtin'))) return null;
+  const [a, b] = pool as [Candidate, Candidate];
+  const d = combineMaps(a.perElectron, ONE, b.perElectron, neg(ONE));
+  for (const k of d.keys()) if (k !== 'H|1' && k !== 'OH|-1' && k !== 'H2O|0') return null;
+  const h = d.get('H|1');
+  const oh = d.get('OH|-1');
+  if (!h || !oh || toNumber(h.nu) !== toNumber(oh.nu)) return null;
+  // a consumes H+ where b produces OH-: a is the acid form when its H+ coefficient is lower
+  return toNumber(h.nu) < 0 ? a : b;
+}
+
 function pickOne(cs: Candidate[], text: string): Candidate | null {
   if (cs.length === 0) return null;
   // user rows take precedence
   const user = cs.filter((c) => c.shares.every((s) => s.row.origin.kind === 'user'));
   const pool = user.length > 0 ? user : cs;
   if (pool.length === 1) return pool[0]!;
+  const acid = acidOfPair(pool);
+  if (acid) return acid;
   throw new EngineError(
     'ambiguous',
     `${quote(text)} matches ${pool.length} half-reactions: ${describeCandidates(pool)}. Write the half-reaction in full (with phases, and H+ or OH- as it applies) to choose one.`,
@@ -381,12 +447,21 @@ function resolveCouple(c: Couple, text: string, table: PotentialTable): Resolved
   const fit = (m: StoichMap) => coupleFit(c, m);
   refuseBroken(table, (m) => fit(m) !== null, text);
   const user = bestFit(table.userRows.filter((r) => table.rows.includes(r)).map(fromRow), fit);
-  const direct = user.length > 0 ? user : bestFit(table.rows.map(fromRow), fit);
-  const chosen = pickOne(direct, text);
-  if (chosen) return toHalf(chosen, null, c.activities ?? new Map(), table);
   const els = new Set<string>();
   for (const s of [...c.oxidized, ...c.reduced])
     for (const el of elementsOf(s).keys()) if (el !== 'H' && el !== 'O') els.add(el);
+  if (user.length === 0 && table.userRows.length >= 2) {
+    const userRows = table.rows.filter((r) => r.origin.kind === 'user');
+    const fromUser = bestFit(
+      derivedCandidates(relevantRows({ ...table, rows: userRows }, els), (m) => fit(m) !== null),
+      fit,
+    );
+    const u = pickOne(fromUser, text);
+    if (u) return toHalf(u, null, c.activities ?? new Map(), table);
+  }
+  const direct = user.length > 0 ? user : bestFit(table.rows.map(fromRow), fit);
+  const chosen = pickOne(direct, text);
+  if (chosen) return toHalf(chosen, null, c.activities ?? new Map(), table);
   const derived = bestFit(
     derivedCandidates(relevantRows(table, els), (m) => fit(m) !== null),
     fit,

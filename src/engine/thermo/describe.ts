@@ -7,9 +7,45 @@ import { describeOrigin } from '../table/potentialTable';
 import { formatReaction, withActivity } from '../notation/reaction';
 import { type Species, formatSpecies, phaseOf, elementsOf } from '../notation/species';
 import { type Binding } from './nernstForm';
+import { pKw } from './water';
 
 function fmtV(x: number): string {
   return `${Number(x.toFixed(6))} V`;
+}
+
+function fmtE(x: number): string {
+  return String(Number(x.toFixed(5)));
+}
+
+/** How a half's E° moves with temperature, for SOURCE. */
+function temperatureNote(h: ResolvedHalf): string {
+  const bases = new Set(h.shares.map((s) => s.row.temperature.basis));
+  const slope = halfSlopeMvPerK(h);
+  const cpMissing = new Set<string>();
+  const sMissing = new Set<string>();
+  for (const s of h.shares) {
+    s.row.temperature.cpMissing.forEach((x) => cpMissing.add(x));
+    if (s.row.temperature.basis !== 'species') s.row.temperature.entropyMissing.forEach((x) => sMissing.add(x));
+  }
+  const parts: string[] = [];
+  if (bases.has('species')) {
+    parts.push(
+      `E°(T) by Gibbs–Helmholtz from the species data (ΔrS°, constant ΔrCp°; valid 0–100 °C), dE°/dT = ${Number(slope.slope.toFixed(4))} mV/K at 25 °C`,
+    );
+    parts.push(
+      cpMissing.size === 0
+        ? 'ΔrCp° from the Cp° of every species'
+        : `no Cp° for ${[...cpMissing].join(', ')}: left out of ΔrCp°`,
+    );
+  }
+  if (bases.has('row')) parts.push('the dE°/dT of your table row is used (linear)');
+  if (bases.has('none'))
+    parts.push(
+      sMissing.size > 0
+        ? `no S° for ${[...sMissing].join(', ')} and no dE°/dT: E°(25 °C) is used at every temperature`
+        : 'no dE°/dT and species not all in the species data: E°(25 °C) is used at every temperature',
+    );
+  return `; ${parts.join('; ')}`;
 }
 
 function describeHalf(h: ResolvedHalf): string {
@@ -17,16 +53,10 @@ function describeHalf(h: ResolvedHalf): string {
   const rows = h.shares
     .map(
       (s) =>
-        `${s.row.text}, E° = ${s.row.e0V} V${s.row.dE0dTmVperK !== null ? `, dE°/dT = ${s.row.dE0dTmVperK} mV/K` : ''} (${describeOrigin(s.row.origin)}: ${s.row.source})`,
+        `${s.row.text}, E° = ${fmtE(s.row.e0V)} V${s.row.dE0dTmVperK !== null ? `, dE°/dT = ${Number(s.row.dE0dTmVperK.toFixed(3))} mV/K` : ''} (${describeOrigin(s.row.origin)}: ${s.row.source})`,
     )
     .join('; ');
-  const slope = halfSlopeMvPerK(h);
-  const temp = slope.complete
-    ? `; at other temperatures E° moves by ${Number(slope.slope.toFixed(4))} mV/K`
-    : h.shares.some((s) => s.row.dE0dTmVperK !== null)
-      ? '; dE°/dT is missing for some rows: those keep their 25 °C E° at other temperatures'
-      : '; no dE°/dT in the table: E°(25 °C) is used at every temperature';
-  return `${formatReaction(h.reaction)}: E° = ${fmtV(e0)} from ${rows}${h.derivation ? `; ${h.derivation}` : ''}${temp}`;
+  return `${formatReaction(h.reaction)}: E° = ${fmtV(e0)} from ${rows}${h.derivation ? `; ${h.derivation}` : ''}${temperatureNote(h)}`;
 }
 
 /**
@@ -110,7 +140,12 @@ export function describeDiagram(
         const c = binding.column[i]!;
         if (c >= 0) {
           const v = row[c];
-          if (typeof v === 'number') return binding.isPH[i] === 1 ? Math.pow(10, -v) : v;
+          if (typeof v === 'number')
+            return binding.isPH[i] === 1
+              ? Math.pow(10, -v)
+              : binding.isPH[i] === 2
+                ? Math.pow(10, v - pKw(25))
+                : v;
         }
         if (t.inline !== undefined) return t.inline;
       }

@@ -19,6 +19,7 @@ import {
 } from '../notation/species';
 import { type Resolved, type ResolvedHalf, standardPotentialV } from '../table/resolve';
 import { slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
+import { pKw } from './water';
 import { splitSpeciesHeader } from '../notation/speciesHeader';
 
 /** One species' place in the Nernst equation. */
@@ -130,8 +131,10 @@ export interface Binding {
   readonly form: NernstForm;
   /** column index per term, or −1 (then `fixedLog` holds its contribution) */
   readonly column: Int32Array;
-  /** 1 where the column is a pH (log10 a = −pH) */
+  /** 1 where the column is a pH giving a(H+) (log10 a = −pH); 2 where it gives a(OH-) (log10 a = pH − pKw(T)) */
   readonly isPH: Uint8Array;
+  /** Σ w of the OH- terms set by a pH column: Σ w·log10 a gains −ohFromPH·pKw(T) */
+  readonly ohFromPH: number;
   readonly weight: Float64Array;
   /** Σ w·log10 a of the terms with fixed activities (inline or unit) */
   readonly fixedLog: number;
@@ -199,6 +202,7 @@ function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Bind
   const gas = new Uint8Array(form.terms.length);
   const labels: string[] = [];
   let fixedLog = 0;
+  let ohFromPH = 0;
   form.terms.forEach((t, i) => {
     weight[i] = t.weight;
     gas[i] = t.gas ? 1 : 0;
@@ -208,33 +212,40 @@ function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Bind
       parsed.findIndex(
         (h) =>
           h.kind === kind &&
-          h.key === t.key &&
+          // a pH header serves H+ and, through Kw, OH-
+          (kind === 'pH' || h.key === t.key) &&
           h.side === side &&
           // a header with a written phase binds only to that phase (Cl2(aq) is not Cl2(g))
           !(h.species?.phase && termPhase && h.species.phase !== termPhase),
       );
     let col = -1;
     let ph = false;
+    const byPH = t.key === 'H|1' || t.key === 'OH|-1';
     if (t.side) {
       col = find('species', t.side);
-      if (col < 0 && t.key === 'H|1') {
+      if (col < 0 && byPH) {
         col = find('pH', t.side);
         ph = col >= 0;
       }
     }
     if (col < 0) {
       col = find('species', null);
-      if (col < 0 && t.key === 'H|1') {
+      if (col < 0 && byPH) {
         col = find('pH', null);
         ph = col >= 0;
       }
-      if (t.key === 'H|1' && !ph && col >= 0 && find('pH', null) >= 0) {
-        throw new EngineError('argument', 'species gives both H+ and pH; give one of them.', 'species');
+      if (byPH && !ph && col >= 0 && find('pH', null) >= 0) {
+        throw new EngineError(
+          'argument',
+          `species gives both ${t.key === 'H|1' ? 'H+' : 'OH-'} and pH; give one of them.`,
+          'species',
+        );
       }
     }
     if (col >= 0) {
       column[i] = col;
-      isPH[i] = ph ? 1 : 0;
+      isPH[i] = ph ? (t.key === 'H|1' ? 1 : 2) : 0;
+      if (ph && t.key === 'OH|-1') ohFromPH += t.weight;
       labels[i] = parsed[col]!.text.trim();
       return;
     }
@@ -247,14 +258,14 @@ function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Bind
     const sideHint = t.side
       ? ` (or "${t.side}:${formatSpecies(t.species, false)}" for this electrode only)`
       : '';
-    const phHint = t.key === 'H|1' ? ' or a "pH" column' : '';
+    const phHint = t.key === 'H|1' || t.key === 'OH|-1' ? ' or a "pH" column' : '';
     throw new EngineError(
       'argument',
       `The reaction needs a value for ${formatSpecies(t.species, false)}: add "${formatSpecies(t.species, false)}"${sideHint}${phHint} to species with ${what} in values.`,
       'species',
     );
   });
-  return { form, column, isPH, weight, fixedLog, labels, gas };
+  return { form, column, isPH, weight, fixedLog, labels, gas, ohFromPH };
 }
 
 /**
@@ -270,7 +281,9 @@ export function weightedLogActivity(b: Binding, row: ArrayLike<unknown>): number
     if (c < 0) continue;
     const v = row[c];
     if (typeof v !== 'number' || !Number.isFinite(v)) throw badValue(b, i, v);
-    if (b.isPH[i] === 1) sum -= b.weight[i]! * v;
+    const ph = b.isPH[i]!;
+    if (ph === 1) sum -= b.weight[i]! * v;
+    else if (ph === 2) sum += b.weight[i]! * v;
     else {
       if (!(v > 0)) throw badValue(b, i, v);
       sum += b.weight[i]! * Math.log10(v);
@@ -281,7 +294,7 @@ export function weightedLogActivity(b: Binding, row: ArrayLike<unknown>): number
 
 function badValue(b: Binding, i: number, v: unknown): EngineError {
   const label = b.labels[i]!;
-  if (b.isPH[i] === 1)
+  if (b.isPH[i] !== 0)
     return new EngineError('argument', `pH must be a number; got ${describe(v)}.`, 'values');
   const what = b.gas[i] === 1 ? 'partial pressure (bar)' : 'activity';
   const shown = describe(v);
@@ -307,7 +320,8 @@ function describe(v: unknown): string {
 export function potentialV(b: Binding, row: ArrayLike<unknown>, tempC: number): number {
   const tempK = kelvinFromCelsius(tempC);
   const s = slopePerElectronAtKelvin(tempK);
-  const e = standardPotentialV(b.form.resolved, tempC) - s * weightedLogActivity(b, row);
+  const oh = b.ohFromPH === 0 ? 0 : -b.ohFromPH * pKw(tempC);
+  const e = standardPotentialV(b.form.resolved, tempC) - s * (weightedLogActivity(b, row) + oh);
   if (!Number.isFinite(e))
     throw new EngineError('range', 'E is beyond the number range; check the values.', 'values');
   return e;
@@ -315,5 +329,6 @@ export function potentialV(b: Binding, row: ArrayLike<unknown>, tempC: number): 
 
 /** log10 Q for one case. */
 export function log10Quotient(b: Binding, row: ArrayLike<unknown>): number {
-  return b.form.n * weightedLogActivity(b, row);
+  const oh = b.ohFromPH === 0 ? 0 : -b.ohFromPH * pKw(25);
+  return b.form.n * (weightedLogActivity(b, row) + oh);
 }

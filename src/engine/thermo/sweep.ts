@@ -5,13 +5,42 @@
  */
 import { EngineError } from '../errors';
 import { ZERO_CELSIUS_K, MAX_TEMP_C, slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
-import { type Resolved, halfE0V25, halfSlopeMvPerK } from '../table/resolve';
+import { type Resolved, halfE0V25, halfSlopeMvPerK, halfCpModel } from '../table/resolve';
+import { checkSpeciesTemperature, cpFactorK, SPECIES_DATA_RANGE_C } from './reactionThermo';
+import { pKw } from './water';
 import { type Binding, weightedLogActivity } from './nernstForm';
 
-/** E°(T) = e0V25 + slopeVPerK·(T − 25 °C), exactly as the table's linear dE°/dT gives it. */
+/**
+ * E°(T) = e0V25 + slopeVPerK·(T − 25 °C) + cpVPerK·cpFactorK(T): the rows' dE°/dT and,
+ * for rows from the species data, the constant-ΔCp° term (then `speciesRange`: valid
+ * 0–100 °C).
+ */
 export interface LinearStandardPotential {
   readonly e0V25: number;
   readonly slopeVPerK: number;
+  readonly cpVPerK: number;
+  readonly speciesRange: boolean;
+}
+
+/**
+ * E°(T) of a temperature model (V).
+ *
+ * @throws EngineError (`argument`) outside 0–100 °C where the model rests on the species data
+ * @example
+ * standardPotentialAt(linearStandardPotential(r), 60)
+ */
+export function standardPotentialAt(lin: LinearStandardPotential, tempC: number): number {
+  if (tempC === 25) return lin.e0V25;
+  if (lin.speciesRange) {
+    const tK = checkSpeciesTemperature(tempC);
+    return lin.e0V25 + lin.slopeVPerK * (tempC - 25) + lin.cpVPerK * cpFactorK(tK);
+  }
+  return lin.e0V25 + lin.slopeVPerK * (tempC - 25);
+}
+
+/** The pH-set OH- term: −Σw(OH- from pH)·pKw(T), zero where no OH- activity comes from a pH. */
+function ohOffset(b: Binding, tempC: number): number {
+  return b.ohFromPH === 0 ? 0 : -b.ohFromPH * pKw(tempC);
 }
 
 /**
@@ -32,11 +61,22 @@ export function linearStandardPotential(r: Resolved): LinearStandardPotential {
 const linearCache = new WeakMap<Resolved, LinearStandardPotential>();
 
 function computeLinear(r: Resolved): LinearStandardPotential {
-  if (r.kind === 'half')
-    return { e0V25: halfE0V25(r.half), slopeVPerK: halfSlopeMvPerK(r.half).slope * 1e-3 };
+  if (r.kind === 'half') {
+    const cp = halfCpModel(r.half);
+    return {
+      e0V25: halfE0V25(r.half),
+      slopeVPerK: halfSlopeMvPerK(r.half).slope * 1e-3,
+      cpVPerK: cp.cpVPerK,
+      speciesRange: cp.species,
+    };
+  }
+  const cr = halfCpModel(r.right);
+  const cl = halfCpModel(r.left);
   return {
     e0V25: halfE0V25(r.right) - halfE0V25(r.left),
     slopeVPerK: (halfSlopeMvPerK(r.right).slope - halfSlopeMvPerK(r.left).slope) * 1e-3,
+    cpVPerK: cr.cpVPerK - cl.cpVPerK,
+    speciesRange: cr.species || cl.species,
   };
 }
 
@@ -74,24 +114,32 @@ export function sweepCases(
   const fixedT = typeof tempC === 'number';
   let fixedE0 = 0;
   let fixedS = 0;
+  let fixedOH = 0;
   if (fixedT) {
     const tK = kelvinFromCelsius(tempC);
-    fixedE0 = lin.e0V25 + lin.slopeVPerK * (tempC - 25);
+    fixedE0 = standardPotentialAt(lin, tempC);
     fixedS = slopePerElectronAtKelvin(tK);
+    fixedOH = ohOffset(b, tempC);
   }
+  const logOH = b.ohFromPH === 0 ? 0 : ohOffset(b, 25);
   const empty: unknown[] = [];
   for (let i = 0; i < caseCount; i++) {
     try {
       const row = rows.length === 1 ? rows[0]! : (rows[i] ?? empty);
       const sum = weightedLogActivity(b, row);
       let x: number;
-      if (quantity === 'log10Q') x = n * sum;
-      else if (fixedT) x = fixedE0 - fixedS * sum;
+      if (quantity === 'log10Q') x = n * (sum + logOH);
+      else if (fixedT) x = fixedE0 - fixedS * (sum + fixedOH);
       else {
         const t = (tempC as (i: number) => number)(i);
         const tK = t + ZERO_CELSIUS_K;
         if (!(tK > 0) || !(t <= MAX_TEMP_C)) kelvinFromCelsius(t);
-        x = lin.e0V25 + lin.slopeVPerK * (t - 25) - slopePerElectronAtKelvin(tK) * sum;
+        let e0 = lin.e0V25 + lin.slopeVPerK * (t - 25);
+        if (lin.speciesRange) {
+          if (!(t >= SPECIES_DATA_RANGE_C.min && t <= SPECIES_DATA_RANGE_C.max)) checkSpeciesTemperature(t);
+          if (lin.cpVPerK !== 0) e0 += lin.cpVPerK * cpFactorK(tK);
+        }
+        x = e0 - slopePerElectronAtKelvin(tK) * (b.ohFromPH === 0 ? sum : sum + ohOffset(b, t));
       }
       if (!Number.isFinite(x))
         throw new EngineError('range', 'The result is beyond the number range; check the values.', 'values');
@@ -123,16 +171,18 @@ export function sweepToColumn<E>(
   const out: (number | E)[][] = new Array<(number | E)[]>(caseCount);
   const lin = linearStandardPotential(b.form.resolved);
   const tK = kelvinFromCelsius(tempC);
-  const e0 = lin.e0V25 + lin.slopeVPerK * (tempC - 25);
+  const e0 = standardPotentialAt(lin, tempC);
   const s = slopePerElectronAtKelvin(tK);
   const n = b.form.n;
   const potential = quantity === 'potential';
+  // an OH- activity set by a pH column: log10 a(OH-) = pH − pKw(T) (log Q at 25 °C)
+  const oh = ohOffset(b, potential ? tempC : 25);
   // With two value columns of opposite, equal weights (a cell or a redox couple, the common
   // case) Σ w·log10 a = w·log10(a1/a2): one logarithm per case instead of two.
   const pair = ratioPair(b);
   const general = (row: ArrayLike<unknown>): number | E => {
     try {
-      const sum = weightedLogActivity(b, row);
+      const sum = weightedLogActivity(b, row) + oh;
       const x = potential ? e0 - s * sum : n * sum;
       return Number.isFinite(x)
         ? x
@@ -171,7 +221,7 @@ function ratioPair(b: Binding): { c1: number; c2: number; w: number } | null {
   for (let i = 0; i < b.column.length; i++) {
     const c = b.column[i]!;
     if (c < 0) continue;
-    if (b.isPH[i] === 1) return null;
+    if (b.isPH[i] !== 0) return null;
     found.push({ c, w: b.weight[i]! });
     if (found.length > 2) return null;
   }

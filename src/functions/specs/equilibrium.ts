@@ -20,6 +20,9 @@ import {
   parseNotation,
   planConcentrationCell,
   standardPotentialV,
+  reactionEnergy,
+  reactionGibbsKJ,
+  hasInlineActivities,
 } from '../../engine';
 import { parseNumberText } from '../args';
 import { PHYSICAL_TEMP_DOMAIN, readPotentialV } from '../spec/kinds';
@@ -30,7 +33,15 @@ import type { CallArgs, CaseArgs, FunctionSpec } from '../spec/types';
 const EQUILIBRIUM = { family: 'Equilibrium', result: { kind: 'perCase' } } as const;
 
 const SLOPE = 'derived by hand: RT ln10/(nF) with the SI 2019 exact R and F';
-const CU_ZN = 'E°(Cu2+/Cu) = 0.337 V and E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
+const CU_ZN =
+  'E°(Cu2+/Cu) = 0.3394 V from ΔfG°(Cu2+) = 65.49 kJ/mol (NBS 1982, from memory; OpenStax Appendix G and L print 65.49 and +0.34) and E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
+
+/** The reaction text of a case, or null where the case gives a potential. */
+function reactionText(a: CaseArgs): string | null {
+  const raw = a.cell(REACTION_OR_E.name);
+  if (typeof raw === 'number' || (typeof raw === 'string' && parseNumberText(raw) !== null)) return null;
+  return a.text(REACTION_OR_E.name);
+}
 
 /** (E°, n) from a reaction text (E° and n from the table) or from a potential with n. */
 function standardAndN(a: CaseArgs, call: CallArgs): { e0: number; n: number } {
@@ -61,10 +72,33 @@ function standardAndN(a: CaseArgs, call: CallArgs): { e0: number; n: number } {
   return { e0: standardPotentialV(form.resolved, a.tempC()), n };
 }
 
+/**
+ * log10 K: from a potential with n, or from the reaction's ΔrG°(T) (through the table, or
+ * the species data for a reaction that is not a redox reaction, e.g. a solubility).
+ */
 function log10K(a: CaseArgs, call: CallArgs): number {
   const t = a.tempC();
-  const { e0, n } = standardAndN(a, call);
-  return log10EquilibriumConstant(e0, n, t);
+  const text = reactionText(a);
+  if (text === null) {
+    const { e0, n } = standardAndN(a, call);
+    return log10EquilibriumConstant(e0, n, t);
+  }
+  const e = reactionEnergy(text, t, call.table());
+  checkGivenN(a, text, e.n);
+  return e.log10K;
+}
+
+function checkGivenN(a: CaseArgs, text: string, n: number): void {
+  const given = a.optNum('n');
+  if (given !== null && Math.abs(given - n) > 1e-9) {
+    throw new EngineError(
+      'argument',
+      n === 0
+        ? `${text} is not a redox reaction, so n does not apply; leave n empty.`
+        : `n = ${given} does not match the ${n} electron${n === 1 ? '' : 's'} of ${text} as written; leave n empty, or scale the reaction's coefficients.`,
+      'n',
+    );
+  }
 }
 
 const LOGK_PARAMS = [REACTION_OR_E, N_FROM_REACTION, TEMP_C, TABLE];
@@ -73,7 +107,7 @@ const LOGK: FunctionSpec = {
   id: 'LOGK',
   ...EQUILIBRIUM,
   summary:
-    'log10 of the equilibrium constant, nFE°/(RT ln 10), from a reaction (E° and n from the table) or from E° in V and n.',
+    'log10 of the equilibrium constant, −ΔrG°/(RT ln 10) = nFE°/(RT ln 10), of a reaction (also a solubility or an ionisation, from the species data) or from E° in V and n; activities written in the reaction do not change K.',
   returns: 'log10 K, one row per case',
   params: LOGK_PARAMS,
   examples: [
@@ -92,9 +126,9 @@ const EQCONST: FunctionSpec = {
   examples: [
     {
       args: ['Zn + Cu2+ -> Zn2+ + Cu'],
-      expected: 1.40323e37,
+      expected: 1.68858e37,
       tolerance: 1e33,
-      source: `${CU_ZN}; derived by hand: 10^(2·1.0988 V·F/(RT ln10))`,
+      source: `${CU_ZN}; derived by hand: 10^(2·1.1012 V·F/(RT ln10))`,
     },
   ],
   perCase: (a, call) => equilibriumConstantFromLog10(log10K(a, call)),
@@ -103,16 +137,32 @@ const EQCONST: FunctionSpec = {
 const GIBBS: FunctionSpec = {
   id: 'GIBBS',
   ...EQUILIBRIUM,
-  summary: 'Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n, or the standard ΔG° of a reaction.',
+  summary:
+    'Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n; of a reaction, ΔG° at temp_C, or ΔG at the activities written in it (e.g. "Zn | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu"), agreeing with POTENTIAL.',
   returns: 'ΔG in kJ/mol, one row per case',
   params: LOGK_PARAMS,
   examples: [
     { args: [0.434, 2], expected: -83.749268, tolerance: 1e-5, source: 'derived by hand: −nFE with the SI 2019 exact F' },
   ],
   perCase: (a, call) => {
-    a.tempC();
-    const { e0, n } = standardAndN(a, call);
-    return gibbsEnergyKJ(e0, n);
+    const t = a.tempC();
+    const text = reactionText(a);
+    if (text === null) {
+      const { e0, n } = standardAndN(a, call);
+      return gibbsEnergyKJ(e0, n);
+    }
+    let r;
+    try {
+      r = compiledReaction(text, call.table()).resolved;
+    } catch (e) {
+      // a reaction the table cannot split (no redox couple): ΔrG° from the species data
+      if (!(e instanceof EngineError) || e.kind !== 'notFound') throw e;
+      const en = reactionEnergy(text, t, call.table());
+      checkGivenN(a, text, en.n);
+      return en.gibbsKJ;
+    }
+    checkGivenN(a, text, electronCount(r));
+    return reactionGibbsKJ(r, t, { atActivities: hasInlineActivities(r) });
   },
 };
 

@@ -14,3 +14,4 @@ export { FARADAY_SPECS } from './faraday';
 export { CORROSION_SPECS } from './corrosion';
 export { KINETICS_SPECS } from './kinetics';
 export { MEASUREMENT_SPECS } from './measurement';
+export { THERMO_SPECS } from './thermo';

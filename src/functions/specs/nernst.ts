@@ -25,7 +25,8 @@ import type { CallArgs, FunctionSpec } from '../spec/types';
 const NERNST = { family: 'Nernst', result: { kind: 'perCase' } } as const;
 
 const DERIVED = 'derived by hand: E = E° − (RT ln10/nF)·log10 Q with the SI 2019 exact R and F';
-const CU_E0 = 'E°(Cu2+/Cu) = 0.337 V, OpenStax Chemistry 2e, Appendix L';
+const CU_E0 =
+  'E°(Cu2+/Cu) = ΔfG°(Cu2+)/(2F) = 65.49 kJ/mol / 2F = 0.339378 V (NBS 1982, from memory; OpenStax Chemistry 2e, Appendix G prints 65.49, Appendix L +0.34)';
 const ZN_E0 = 'E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
 
 type Quantity = 'potential' | 'log10Q';
@@ -146,18 +147,18 @@ const POTENTIAL: FunctionSpec = {
     'A cell EMF is E(right) − E(left) for the cell as written; a negative value means the written reaction is not spontaneous.',
   ],
   examples: [
-    { args: ['Cu2+/Cu', 'Cu2+', 0.01], expected: 0.2778407, tolerance: 1e-6, source: `${CU_E0}; ${DERIVED}` },
+    { args: ['Cu2+/Cu', 'Cu2+', 0.01], expected: 0.2802187, tolerance: 1e-6, source: `${CU_E0}; ${DERIVED}` },
     {
       args: ['Zn + Cu2+ -> Zn2+ + Cu', [['Zn2+', 'Cu2+']], [[0.1, 0.01]]],
-      expected: 1.0692203,
+      expected: 1.0715983,
       tolerance: 1e-6,
       source: `${CU_E0}; ${ZN_E0}; ${DERIVED}`,
     },
     {
       args: ['O2(g) + 4 H+ + 4 e- -> 2 H2O', [['O2', 'pH']], [[0.21, 7]]],
-      expected: 0.8048603,
+      expected: 0.8046947,
       tolerance: 1e-6,
-      source: `E°(O2/H2O) = 1.229 V, OpenStax Chemistry 2e, Appendix L; ${DERIVED}`,
+      source: `E°(O2/H2O) = −ΔfG°(H2O, l)/(2F) = 237.129 kJ/mol / 2F = 1.228834 V (NBS 1982, from memory; OpenStax Appendix L prints 1.229); ${DERIVED}`,
     },
   ],
   fast: (args) => fastNernst(args, 'potential'),
@@ -172,8 +173,8 @@ const STDPOTENTIAL: FunctionSpec = {
   returns: 'E° in V vs SHE, one row per case',
   params: [REACTION, TEMP_C, TABLE],
   examples: [
-    { args: ['Cu2+/Cu'], expected: 0.337, tolerance: 1e-12, source: CU_E0 },
-    { args: ['Zn(s) | Zn2+(aq) || Cu2+(aq) | Cu(s)'], expected: 1.0988, tolerance: 1e-12, source: `${CU_E0}; ${ZN_E0}` },
+    { args: ['Cu2+/Cu'], expected: 0.339378, tolerance: 1e-6, source: CU_E0 },
+    { args: ['Zn(s) | Zn2+(aq) || Cu2+(aq) | Cu(s)'], expected: 1.101178, tolerance: 1e-6, source: `${CU_E0}; ${ZN_E0}` },
   ],
   perCase: (a, call) => standardPotentialV(compiledReaction(a.text('reaction'), call.table()).resolved, a.tempC()),
 };

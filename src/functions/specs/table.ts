@@ -1,5 +1,12 @@
 /** The potentials table: provenance, listing and checking (docs/functions/). */
-import { BUILTIN_POTENTIALS, compiledReaction, describeSource, filterPotentials, tableFor } from '../../engine';
+import {
+  BUILTIN_POTENTIALS,
+  compiledReaction,
+  describeSource,
+  filterPotentials,
+  tableFor,
+  tableCycleProblems,
+} from '../../engine';
 import type { Result } from '../cellTypes';
 import { cellError } from '../errorCodes';
 import { REACTION, TABLE } from '../spec/params';
@@ -15,7 +22,11 @@ const SOURCE: FunctionSpec = {
   summary: 'Which table rows (built-in or yours) gave E°, with their sources and any derivation.',
   returns: 'Provenance text, one row per case',
   examples: [
-    { args: ['Cu2+/Cu'], expected: 'OpenStax Chemistry 2e, Appendix L', source: 'the source named in the built-in row' },
+    {
+      args: ['Cu2+/Cu'],
+      expected: 'OpenStax Chemistry 2e, Appendix L',
+      source: 'the source named in the built-in row',
+    },
   ],
   perCase: (a, call) => describeSource(compiledReaction(a.text('reaction'), call.table()).resolved),
 };
@@ -59,11 +70,18 @@ const LISTTABLE: FunctionSpec = {
 const CHECKTABLE: FunctionSpec = {
   id: 'CHECKTABLE',
   family: 'Table',
-  summary: 'The problems in your potentials table (unbalanced rows, bad numbers, duplicates), one per row, or OK.',
+  summary:
+    'The problems in your potentials table (unbalanced rows, bad numbers, duplicates, thermodynamic cycles that disagree by more than 2 mV), one per row, or OK.',
   returns: 'OK, or one problem per row',
   params: [{ ...TABLE, optional: false, defaultText: undefined }],
   result: { kind: 'list', heightFrom: 'table' },
-  examples: [{ args: [[['Cu2+ + 2 e- -> Cu', 0.337]]], expected: 'OK', source: 'a balanced row with a number (by inspection)' }],
+  examples: [
+    {
+      args: [[['Cu2+ + 2 e- -> Cu', 0.337]]],
+      expected: 'OK',
+      source: 'a balanced row with a number (by inspection)',
+    },
+  ],
   run: (call) => {
     const cells = call.table();
     if (!cells)
@@ -76,8 +94,10 @@ const CHECKTABLE: FunctionSpec = {
         ],
       ];
     const t = tableFor(cells).table;
-    if (t.problems.length === 0) return [['OK']];
-    return t.problems.map((p) => [p.message]);
+    // row problems, then thermodynamic cycles among the rows that disagree by more than 2 mV
+    const problems = [...t.problems, ...tableCycleProblems(t)].sort((x, y) => x.row - y.row);
+    if (problems.length === 0) return [['OK']];
+    return problems.map((p) => [p.message]);
   },
 };
 

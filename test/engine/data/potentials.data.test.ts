@@ -270,67 +270,158 @@ describe('BUILTIN_POTENTIALS: notation and balance', () => {
 });
 
 describe('BUILTIN_POTENTIALS: values against their publications', () => {
-  // [half-reaction, E° / V, allowed deviation / V]
-  const published: ReadonlyArray<readonly [string, number, number]> = [
-    ['Li+ + e- -> Li', -3.04, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['K+ + e- -> K', -2.931, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Na+ + e- -> Na', -2.71, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Mg2+ + 2 e- -> Mg', -2.372, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Al3+ + 3 e- -> Al', -1.662, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['2 H2O + 2 e- -> H2(g) + 2 OH-', -0.8277, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Cd(OH)2(s) + 2 e- -> Cd + 2 OH-', -0.812, 1e-9], // CRC Handbook, 54th ed., p. D-120 (seen)
-    ['Zn2+ + 2 e- -> Zn', -0.7618, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Cr3+ + 3 e- -> Cr', -0.744, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Fe2+ + 2 e- -> Fe', -0.447, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['PbSO4(s) + 2 e- -> Pb + SO4^2-', -0.3505, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Co2+ + 2 e- -> Co', -0.28, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Ni2+ + 2 e- -> Ni', -0.257, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Sn2+ + 2 e- -> Sn', -0.1375, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Pb2+ + 2 e- -> Pb', -0.1262, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['2 H+ + 2 e- -> H2(g)', 0, 0], // IUPAC Gold Book, standard hydrogen electrode (seen)
-    ['AgBr(s) + e- -> Ag + Br-', 0.07133, 1e-9], // CRC Handbook, 92nd ed., Electrochemical Series (seen)
-    ['Sn4+ + 2 e- -> Sn2+', 0.151, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Cu2+ + e- -> Cu+', 0.153, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['AgCl(s) + e- -> Ag + Cl-', 0.22233, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['AgCl(s) + e- -> Ag + Cl-', 0.22234, 2e-5], // Bates & Bower, J. Res. NBS 53, 283 (1954), 25 °C (seen)
-    ['Hg2Cl2(s) + 2 e- -> 2 Hg(l) + 2 Cl-', 0.26808, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Cu2+ + 2 e- -> Cu', 0.337, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['O2(g) + 2 H2O + 4 e- -> 4 OH-', 0.401, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['NiO2(s) + 2 H2O + 2 e- -> Ni(OH)2(s) + 2 OH-', 0.49, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Cu+ + e- -> Cu', 0.521, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['I2(s) + 2 e- -> 2 I-', 0.5355, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['MnO4- + 2 H2O + 3 e- -> MnO2(s) + 4 OH-', 0.595, 1e-9], // CRC Handbook, 92nd ed. (from memory)
-    ['O2(g) + 2 H+ + 2 e- -> H2O2', 0.695, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Fe3+ + e- -> Fe2+', 0.771, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Fe3+ + e- -> Fe2+', 0.77, 2e-3], // CRC Handbook, 54th ed., p. D-120 (seen)
-    ['Hg2^2+ + 2 e- -> 2 Hg(l)', 0.7973, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Ag+ + e- -> Ag', 0.7996, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen); CRC 92nd ed. agrees (seen)
-    ['Hg2+ + 2 e- -> Hg(l)', 0.851, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['NO3- + 4 H+ + 3 e- -> NO(g) + 2 H2O', 0.957, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Br2(l) + 2 e- -> 2 Br-', 1.065, 1e-9], // CRC Handbook, 54th ed., p. D-120 (seen)
-    ['Br2(aq) + 2 e- -> 2 Br-', 1.0873, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['O2(g) + 4 H+ + 4 e- -> 2 H2O', 1.229, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Cr2O7^2- + 14 H+ + 6 e- -> 2 Cr3+ + 7 H2O', 1.232, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Cl2(g) + 2 e- -> 2 Cl-', 1.35827, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Au3+ + 3 e- -> Au', 1.498, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O', 1.507, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['Ce4+ + e- -> Ce3+', 1.61, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['MnO4- + 4 H+ + 3 e- -> MnO2(s) + 2 H2O', 1.679, 1e-9], // CRC Handbook, 92nd ed. (from memory)
-    ['PbO2(s) + SO4^2- + 4 H+ + 2 e- -> PbSO4(s) + 2 H2O', 1.69, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['PbO2(s) + SO4^2- + 4 H+ + 2 e- -> PbSO4(s) + 2 H2O', 1.685, 6e-3], // CRC Handbook, 54th ed. (seen)
-    ['H2O2 + 2 H+ + 2 e- -> 2 H2O', 1.776, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
-    ['F2(g) + 2 e- -> 2 F-', 2.866, 1e-9], // OpenStax Chemistry 2e, Appendix L (seen)
+  // What OpenStax Chemistry 2e, Appendix L prints (read in the stored copy,
+  // openstax/osbooks-chemistry-bundle modules/m68870/index.cnxml), for every row that cites it.
+  const osxPrints: ReadonlyArray<readonly [string, number]> = [
+    ['H2(g) + 2 e- -> 2 H-', -2.23], // printed as ½ H2 + e- -> H-
+    ['2 H2O + 2 e- -> H2(g) + 2 OH-', -0.8277],
+    ['2 H+ + 2 e- -> H2(g)', 0],
+    ['Li+ + e- -> Li', -3.04],
+    ['Be2+ + 2 e- -> Be', -1.847],
+    ['NO3- + H2O + 2 e- -> NO2- + 2 OH-', 0.1],
+    ['NO3- + 3 H+ + 2 e- -> HNO2 + H2O', 0.92],
+    ['NO3- + 4 H+ + 3 e- -> NO(g) + 2 H2O', 0.957],
+    ['O2(g) + 2 H2O + 4 e- -> 4 OH-', 0.401],
+    ['O2(g) + 2 H+ + 2 e- -> H2O2', 0.695],
+    ['HO2- + H2O + 2 e- -> 3 OH-', 0.878],
+    ['O2(g) + 4 H+ + 4 e- -> 2 H2O', 1.229],
+    ['H2O2 + 2 H+ + 2 e- -> 2 H2O', 1.776],
+    ['F2(g) + 2 e- -> 2 F-', 2.866],
+    ['Na+ + e- -> Na', -2.71],
+    ['Mg2+ + 2 e- -> Mg', -2.372],
+    ['Al3+ + 3 e- -> Al', -1.662],
+    ['S(s) + 2 e- -> S2-', -0.47627],
+    ['S(s) + 2 H+ + 2 e- -> H2S(aq)', 0.142],
+    ['ClO- + H2O + 2 e- -> Cl- + 2 OH-', 0.89],
+    ['ClO4- + 2 H+ + 2 e- -> ClO3- + H2O', 1.189],
+    ['ClO3- + 3 H+ + 2 e- -> HClO2 + H2O', 1.21],
+    ['Cl2(g) + 2 e- -> 2 Cl-', 1.35827],
+    ['HClO + H+ + 2 e- -> Cl- + H2O', 1.482],
+    ['2 HClO + 2 H+ + 2 e- -> Cl2(g) + 2 H2O', 1.611], // printed per ½ Cl2
+    ['K+ + e- -> K', -2.931],
+    ['Ca2+ + 2 e- -> Ca', -2.868],
+    ['Ti2+ + 2 e- -> Ti', -1.63],
+    ['V2+ + 2 e- -> V', -1.19],
+    ['Cr2+ + 2 e- -> Cr', -0.913],
+    ['Cr3+ + 3 e- -> Cr', -0.744],
+    ['Cr3+ + e- -> Cr2+', -0.407],
+    ['CrO4^2- + 4 H2O + 3 e- -> Cr(OH)3(s) + 5 OH-', -0.13],
+    ['Cr2O7^2- + 14 H+ + 6 e- -> 2 Cr3+ + 7 H2O', 1.232],
+    ['Mn2+ + 2 e- -> Mn', -1.185],
+    ['MnO4- + 2 H2O + 3 e- -> MnO2(s) + 4 OH-', 0.558],
+    ['MnO2(s) + 4 H+ + 2 e- -> Mn2+ + 2 H2O', 1.23],
+    ['MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O', 1.507],
+    ['Fe2+ + 2 e- -> Fe', -0.447],
+    ['Fe3+ + e- -> Fe2+', 0.771],
+    ['[Fe(CN)6]^3- + e- -> [Fe(CN)6]^4-', 0.36],
+    ['Co2+ + 2 e- -> Co', -0.28],
+    ['Ni2+ + 2 e- -> Ni', -0.257],
+    ['NiO2(s) + 2 H2O + 2 e- -> Ni(OH)2(s) + 2 OH-', 0.49],
+    ['NiO2(s) + 4 H+ + 2 e- -> Ni2+ + 2 H2O', 1.593],
+    ['Cu2+ + e- -> Cu+', 0.153],
+    ['Cu2+ + 2 e- -> Cu', 0.34],
+    ['Cu+ + e- -> Cu', 0.521],
+    ['Zn(OH)2(s) + 2 e- -> Zn + 2 OH-', -1.245],
+    ['Zn2+ + 2 e- -> Zn', -0.7618],
+    ['Ga3+ + 3 e- -> Ga', -0.549],
+    ['Br2(aq) + 2 e- -> 2 Br-', 1.0873],
+    ['Rb+ + e- -> Rb', -2.98],
+    ['Sr2+ + 2 e- -> Sr', -2.89],
+    ['Pd2+ + 2 e- -> Pd', 0.987],
+    ['Ag2CrO4(s) + 2 e- -> 2 Ag + CrO4^2-', 0.45],
+    ['[Ag(NH3)2]+ + e- -> Ag + 2 NH3(aq)', 0.373],
+    ['Ag+ + e- -> Ag', 0.7996],
+    ['AgCl(s) + e- -> Ag + Cl-', 0.22233],
+    ['Cd2+ + 2 e- -> Cd', -0.403],
+    ['In3+ + 3 e- -> In', -0.3382],
+    ['Sn2+ + 2 e- -> Sn', -0.1375],
+    ['Sn4+ + 2 e- -> Sn2+', 0.151],
+    ['I2(s) + 2 e- -> 2 I-', 0.5355],
+    ['Ba2+ + 2 e- -> Ba', -2.912],
+    ['La3+ + 3 e- -> La', -2.52],
+    ['Ce3+ + 3 e- -> Ce', -2.483],
+    ['Ce4+ + e- -> Ce3+', 1.61],
+    ['[PtCl4]^2- + 2 e- -> Pt + 4 Cl-', 0.755],
+    ['Pt2+ + 2 e- -> Pt', 1.2],
+    ['Au3+ + 3 e- -> Au', 1.498],
+    ['Au+ + e- -> Au', 1.692],
+    ['Hg2Cl2(s) + 2 e- -> 2 Hg(l) + 2 Cl-', 0.26808],
+    ['Hg2^2+ + 2 e- -> 2 Hg(l)', 0.7973],
+    ['Hg2+ + 2 e- -> Hg(l)', 0.851],
+    ['2 Hg2+ + 2 e- -> Hg2^2+', 0.92],
+    ['PbSO4(s) + 2 e- -> Pb + SO4^2-', -0.3505],
+    ['Pb2+ + 2 e- -> Pb', -0.1262],
+    ['PbO2(s) + SO4^2- + 4 H+ + 2 e- -> PbSO4(s) + 2 H2O', 1.69],
   ];
 
-  it('checks at least 20 published values', () => {
-    expect(published.length).toBeGreaterThanOrEqual(20);
+  it.each(osxPrints)('%s cites OpenStax Appendix L with the value it prints (%d V)', (h, v) => {
+    const r = row(h);
+    expect(r.published.source).toBe('OpenStax Chemistry 2e, Appendix L');
+    expect(r.published.e0V).toBe(v);
+    expect(r.source).toContain(`OpenStax Chemistry 2e, Appendix L prints ${String(v)} V`);
   });
 
-  it.each(published)('%s: E° = %d V', (h, e0, tol) => {
-    expect(Math.abs(row(h).e0V - e0)).toBeLessThanOrEqual(tol);
+  it('every row that cites OpenStax Appendix L is in the list above', () => {
+    const cited = rows.filter((r) => r.published.source.startsWith('OpenStax')).map((r) => r.halfReaction);
+    expect(cited.sort()).toEqual(osxPrints.map(([h]) => h).sort());
+  });
+
+  // Other publications, as read (seen) or recalled (from memory).
+  const others: ReadonlyArray<readonly [string, number, string]> = [
+    ['Cd(OH)2(s) + 2 e- -> Cd + 2 OH-', -0.812, 'CRC Handbook of Chemistry and Physics, 54th ed., p. D-120'], // seen
+    ['Br2(l) + 2 e- -> 2 Br-', 1.065, 'CRC Handbook of Chemistry and Physics, 54th ed., p. D-120'], // seen
+    ['AgBr(s) + e- -> Ag + Br-', 0.07133, 'CRC Handbook of Chemistry and Physics, 92nd ed., Electrochemical Series'], // seen
+  ];
+  it.each(others)('%s cites %d V as printed', (h, v, src) => {
+    expect(row(h).published).toEqual({ e0V: v, source: src });
+  });
+
+  // The row's E° comes from the species data; where it departs from the published value by
+  // more than 25 mV the row is named here with its disagreement (mV), so that a new
+  // disagreement fails. The printed values of one couple differ between handbooks by as much.
+  const knownLarge: ReadonlyMap<string, number> = new Map([
+    ['Ce4+ + e- -> Ce3+', 133], // OSX 1.61 is a formal potential; NBS ΔfG° give 1.74 (CRC 92nd ed.: 1.72, from memory)
+    ['Cr2O7^2- + 14 H+ + 6 e- -> 2 Cr3+ + 7 H2O', 132], // NBS ΔfG° give 1.36; OSX prints 1.232, CRC 54th ed. 1.33 (seen)
+    ['Be2+ + 2 e- -> Be', 121],
+    ['Ce3+ + 3 e- -> Ce', 161],
+    ['La3+ + 3 e- -> La', 158],
+    ['NO3- + H2O + 2 e- -> NO2- + 2 OH-', 109],
+    ['S2O8^2- + 2 e- -> 2 SO4^2-', 71],
+    ['Pd2+ + 2 e- -> Pd', 73],
+    ['NiO2(s) + 4 H+ + 2 e- -> Ni2+ + 2 H2O', 123],
+    ['[PtCl4]^2- + 2 e- -> Pt + 4 Cl-', 55],
+    ['ClO3- + 3 H+ + 2 e- -> HClO2 + H2O', 53],
+    ['HNO2 + H+ + e- -> NO(g) + H2O', 54],
+    ['S4O6^2- + 2 e- -> 2 S2O3^2-', 39],
+    ['ClO4- + 2 H+ + 2 e- -> ClO3- + H2O', 37],
+    ['Ag2S(s) + 2 e- -> 2 Ag + S2-', 36],
+    ['MnO4- + e- -> MnO4^2-', 35],
+    ['MnO4- + 2 H2O + 3 e- -> MnO2(s) + 4 OH-', 36],
+    ['Ni(OH)2(s) + 2 e- -> Ni + 2 OH-', 33],
+    ['S(s) + 2 e- -> S2-', 32],
+    ['2 BrO3- + 12 H+ + 10 e- -> Br2(l) + 6 H2O', 32],
+    ['NO3- + 2 H+ + e- -> NO2(g) + H2O', 31],
+    ['Co3+ + e- -> Co2+', 29],
+    ['Tl3+ + 2 e- -> Tl+', 29],
+    ['ZnO2^2- + 2 H2O + 2 e- -> Zn + 4 OH-', 26],
+  ]);
+
+  it.each(rows.map((r) => [r.halfReaction, r] as const))('%s: E° within its stated distance of the published value', (h, r) => {
+    const mv = Math.abs(r.e0V - r.published.e0V) * 1000;
+    expect(mv).toBeLessThanOrEqual((knownLarge.get(h) ?? 25) + 0.5);
+  });
+
+  it('the worst disagreement is the one the notes name', () => {
+    const worst = rows
+      .map((r) => ({ h: r.halfReaction, mv: Math.abs(r.e0V - r.published.e0V) * 1000 }))
+      .sort((a, b) => b.mv - a.mv)[0]!;
+    expect(worst.h).toBe('Ce3+ + 3 e- -> Ce');
+    expect(worst.mv).toBeLessThan(162);
   });
 
   // [half-reaction, dE°/dT / (mV/K)]; all from memory (Bratsch 1989) except where marked.
+  // The rows' coefficients come from S° of the species data; tolerance 0.015 mV/K (rounding
+  // of S° and of the published coefficients).
   const coefficients: ReadonlyArray<readonly [string, number]> = [
     ['Li+ + e- -> Li', -0.51], // Bratsch, J. Phys. Chem. Ref. Data 18, 1 (1989) (from memory)
     ['K+ + e- -> K', -1.07], // Bratsch 1989 (from memory)
@@ -346,7 +437,7 @@ describe('BUILTIN_POTENTIALS: values against their publications', () => {
   ];
 
   it.each(coefficients)('%s: dE°/dT = %d mV/K', (h, slope) => {
-    expect(row(h).dE0dTmVperK).toBe(slope);
+    expect(Math.abs((row(h).dE0dTmVperK ?? NaN) - slope)).toBeLessThanOrEqual(0.015);
   });
 
   it('AgCl/Ag dE°/dT matches the Bates & Bower 20-30 °C slope', () => {
@@ -354,16 +445,8 @@ describe('BUILTIN_POTENTIALS: values against their publications', () => {
     const slopeMvPerK = ((0.21904 - 0.22557) / 10) * 1000;
     const tabulated = row('AgCl(s) + e- -> Ag + Cl-').dE0dTmVperK;
     expect(tabulated).not.toBeNull();
+    // the 20-30 °C chord includes curvature (ΔCp°): within 0.01 mV/K
     expect(Math.abs((tabulated ?? NaN) - slopeMvPerK)).toBeLessThan(0.01);
-  });
-
-  it('rows OpenStax gives cite OpenStax', () => {
-    for (const [h] of published) {
-      const r = row(h);
-      if (r.source.startsWith('OpenStax')) expect(r.source).toMatch(/^OpenStax Chemistry 2e, Appendix L/);
-    }
-    expect(row('Ce4+ + e- -> Ce3+').source).toMatch(/^OpenStax/);
-    expect(row('Br2(l) + 2 e- -> 2 Br-').source).toMatch(/CRC Handbook of Chemistry and Physics, 54th ed/);
   });
 });
 
