@@ -41,7 +41,7 @@
 import { EngineError, quote } from '../errors';
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, ZERO_CELSIUS_K } from '../constants';
 import { elementsOf, parseSpecies, phaseOf } from '../notation/species';
-import { EPH_SPECIES } from '../data/species/ephSpecies';
+import { findSpeciesRecord } from '../data/species/index';
 import type { SpeciesThermoRecord } from '../data/species/types';
 import { EPH_ELEMENTS, type EphElement } from './elements';
 
@@ -53,8 +53,6 @@ export type SpeciesGibbs = (speciesText: string, tempC: number) => number;
 
 /** The reference temperature of the records, K. */
 const T0_K = 298.15;
-
-const RECORDS = new Map<string, SpeciesThermoRecord>(EPH_SPECIES.map((r) => [r.species, r]));
 
 /** The elements' reference states, for formation entropies and heat capacities. */
 const ELEMENT_STATE: Readonly<Record<string, { species: string; per: number }>> = {
@@ -73,28 +71,23 @@ interface FormationTerms {
 /** A species' record by its text ("Fe2+", "Fe2O3(s)", "H2(g)"); throws where there is none. */
 export type SpeciesRecordLookup = (speciesText: string) => SpeciesThermoRecord;
 
-function ephRecord(speciesText: string): SpeciesThermoRecord {
-  const r = RECORDS.get(speciesText);
-  if (!r) {
-    throw new EngineError(
-      'notFound',
-      `No thermodynamic record for ${quote(speciesText)} in the E–pH species data.`,
-      'species',
-    );
-  }
-  return r;
+/** The species data layer's record of a species written as in the element sets ("Fe2+", "Fe2O3(s)"). */
+function registryRecord(speciesText: string): SpeciesThermoRecord {
+  return findSpeciesRecord(speciesText, 'species');
 }
 
 /**
- * A {@link SpeciesGibbs} built on any record lookup (the E–pH records by default; the species
- * data layer's `findSpeciesRecord` once merged): Gibbs–Helmholtz with a constant heat capacity
+ * A {@link SpeciesGibbs} built on any record lookup (by default the species data layer's
+ * registry, `findSpeciesRecord`, the one data set of the potentials table): Gibbs–Helmholtz with a constant heat capacity
  * of formation,
  * ΔfG°(T) = ΔfG° − (T − T0)·ΔfS° + ΔfCp°·[(T − T0) − T ln(T/T0)], T0 = 298.15 K.
  *
  * ΔfS° and ΔfCp° are those of the formation from the elements (H2(g), O2(g), the metal(s)) and,
  * for an ion, the electrons of the SHE convention (S°(e-) = ½S°(H2), Cp°(e-) = ½Cp°(H2),
  * ΔfG°(e-) = 0). ΔfS° from the absolute S°; where a record has no S°, (ΔfH° − ΔfG°)/T0; where
- * it has neither, 0 (ΔfG° keeps its 25 °C value). A species without Cp° contributes none, so
+ * it has neither, 0 (ΔfG° keeps its 25 °C value: the E–pH counterpart of the potentials
+ * table's rule that a row with a species without S° keeps its 25 °C E°; the reaction
+ * functions (ΔG, K, ΔH, ΔS off 25 °C) refuse such a reaction instead). A species without Cp° contributes none, so
  * that Σν·ΔfG°(T) over a reaction is the reaction's own Gibbs–Helmholtz expression with
  * ΔrS° = Σν·S° and ΔrCp° = Σν·Cp° (element and electron terms cancel).
  *
@@ -137,7 +130,8 @@ export function makeSpeciesGibbs(lookup: SpeciesRecordLookup): SpeciesGibbs {
 }
 
 /**
- * The default {@link SpeciesGibbs}: {@link makeSpeciesGibbs} on the records of EPH_SPECIES.
+ * The default {@link SpeciesGibbs}: {@link makeSpeciesGibbs} on the species data layer's
+ * registry (the standard list and the E–pH list, one record per species).
  * Domain 0–100 °C (checked by callers).
  *
  * @throws EngineError (`notFound`) for a species without a record
@@ -145,7 +139,7 @@ export function makeSpeciesGibbs(lookup: SpeciesRecordLookup): SpeciesGibbs {
  * defaultSpeciesGibbs('H2O(l)', 25) // −237.129
  * defaultSpeciesGibbs('H2O(l)', 60) // ≈ −231.41
  */
-export const defaultSpeciesGibbs: SpeciesGibbs = makeSpeciesGibbs(ephRecord);
+export const defaultSpeciesGibbs: SpeciesGibbs = makeSpeciesGibbs(registryRecord);
 
 /** Whether a species is the metal, a dissolved species or a solid other than the metal. */
 export type EphPhaseKind = 'metal' | 'dissolved' | 'solid';
@@ -350,7 +344,7 @@ const PLANE_CACHE_LIMIT = 256;
  *
  * Domain: activity in (0, 1]; temp_C 0–100. Precision: float64 from the data's ΔfG°.
  *
- * @param gibbs the ΔfG°(T) source (default: the records of EPH_SPECIES)
+ * @param gibbs the ΔfG°(T) source (default: the species data layer's registry)
  * @throws EngineError for an unknown element or an argument out of range
  * @example
  * ephPlanes('Fe', 1e-6, 25).planes.length // 9

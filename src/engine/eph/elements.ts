@@ -2,7 +2,8 @@
  * The species set of each element's E–pH diagram: which metal, ions, oxides, hydroxides,
  * oxyanions and hydroxo complexes compete for predominance, and why these.
  *
- * Every species named here has a record in EPH_SPECIES (src/engine/data/species/ephSpecies.ts)
+ * Every species named here has a record in the species data layer's registry
+ * (src/engine/data/species/: the standard list, or EPH_SPECIES for the E–pH-only species)
  * with its source; a test checks that each one contains the element and only H and O besides.
  */
 
