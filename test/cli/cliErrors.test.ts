@@ -8,41 +8,11 @@ import * as path from 'node:path';
 import ExcelJS from 'exceljs';
 import { BUILTIN_POTENTIALS } from '../../src/engine/index';
 import { CP_TEMPLATE, TEMPLATE_DIR } from '../../src/cli/templateLayout';
-import { nernst, ROOT, runCli, runMain, tempDir } from './helpers';
+import { nernst, parseCsv, ROOT, runCli, runMain, tempDir } from './helpers';
 import type { RunResult } from './helpers';
 
 const dir = tempDir('cli');
 const template = path.join(TEMPLATE_DIR, CP_TEMPLATE.file);
-
-/** Parses CSV (RFC 4180: quoted fields, doubled quotes, CRLF). */
-function parseCsv(text: string): string[][] {
-  const rows: string[][] = [];
-  let row: string[] = [];
-  let field = '';
-  let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i] as string;
-    if (quoted) {
-      if (ch === '"' && text[i + 1] === '"') {
-        field += '"';
-        i++;
-      } else if (ch === '"') quoted = false;
-      else field += ch;
-    } else if (ch === '"') quoted = true;
-    else if (ch === ',') {
-      row.push(field);
-      field = '';
-    } else if (ch === '\n' || ch === '\r') {
-      if (ch === '\r' && text[i + 1] === '\n') i++;
-      row.push(field);
-      rows.push(row);
-      row = [];
-      field = '';
-    } else field += ch;
-  }
-  if (field !== '' || row.length > 0) rows.push([...row, field]);
-  return rows;
-}
 
 async function workbookWithErrors(file: string): Promise<void> {
   const wb = new ExcelJS.Workbook();

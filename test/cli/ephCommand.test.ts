@@ -6,7 +6,7 @@ import * as fs from 'node:fs';
 import * as path from 'node:path';
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
 import { main } from '../../src/cli/main';
-import { captureIo, F, tempDir } from './helpers';
+import { captureIo, F, parseCsv, tempDir } from './helpers';
 
 const dir = tempDir('eph');
 const parser = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '@' });
@@ -35,11 +35,11 @@ describe('potentia eph', () => {
   test('--csv - prints the lines with a header; Zn/Zn2+ as derived by hand', async () => {
     const io = captureIo();
     expect(await main(['eph', 'zn', '--csv', '-'], io)).toBe(0);
-    const rows = io
-      .stdout()
-      .trim()
-      .split(/\r\n/)
-      .map((l) => l.split(','));
+    const text = io.stdout();
+    // RFC 4180: every record ends with CRLF, also on standard output (no bare LF, no lone CR)
+    expect(text.endsWith('\r\n')).toBe(true);
+    expect(text.split('\r\n').some((l) => /[\r\n]/.test(l))).toBe(false);
+    const rows = parseCsv(text);
     expect(rows[0]).toEqual(['species A', 'species B', 'pH1', 'E1 (V vs SHE)', 'pH2', 'E2 (V vs SHE)']);
     const zn = rows.find((r) => r[0] === 'Zn(s)' && r[1] === 'Zn2+');
     expect(Math.abs(Number(zn?.[3]) - znLine(-6))).toBeLessThan(2e-6);

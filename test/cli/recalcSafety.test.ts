@@ -218,6 +218,17 @@ describe('terminal safety', () => {
     expect(r.stdout).toBe('A[2JB\n');
   });
 
+  test('a lone carriage return (it could hide a line) is removed; a CRLF line end (RFC 4180 CSV) is kept', async () => {
+    const r = await runMain(['eval', '="visible"&CHAR(13)&"hidden"']);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toBe('visiblehidden\n');
+    const csv = await runMain(['table', '--csv']);
+    expect(csv.code).toBe(0);
+    expect(csv.stdout.startsWith('half-reaction')).toBe(true);
+    expect(csv.stdout.split('\r\n').length).toBeGreaterThan(10);
+    expect(csv.stdout.split('\r\n').some((l) => /[\r\n]/.test(l))).toBe(false);
+  });
+
   test('control characters in text echoed by an error message are stripped', async () => {
     const r = await runMain(['eval', '=ECHEM.STDPOTENTIAL("Cu2+"&CHAR(27)&"]0;pwned"&CHAR(7)&"/Cu")']);
     expect(r.code).toBe(1);
