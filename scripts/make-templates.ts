@@ -321,7 +321,7 @@ function cellSweep(): ExcelJS.Workbook {
   potentialsSheet(
     wb,
     ['Zn2+ + 2 e- -> Zn', 'Cu2+ + 2 e- -> Cu', '2 H+ + 2 e- -> H2(g)'],
-    'E° at another temperature uses the dE°/dT column; edit it, or leave it blank to use the 25 °C value.',
+    'E° at another temperature uses the dE°/dT column; edit it, enter 0 for a constant E°, or leave it blank to take it from the species entropies.',
   );
   notesSheet(wb, [
     'Cell-voltage sweep',

@@ -31,15 +31,16 @@ async function writeWorkbook(file: string): Promise<void> {
   const zc = wb.addWorksheet('ZnCu');
   const fe = wb.addWorksheet('Iron');
   const pot = wb.addWorksheet('Potentials');
-  // A user's own rows, without dE°/dT (E° constant, as in the plain formulas).
-  // E° from OpenStax Chemistry 2e, Appendix L (seen).
+  // A user's own rows with dE°/dT = 0: E° constant, the same chemistry as the plain formulas
+  // (an empty dE°/dT cell would take the slope from the species entropies instead).
+  // E° from OpenStax Chemistry 2e, Appendix L (seen; it prints +0.34 V for Cu2+/Cu).
   pot.addRow(['half-reaction', 'E° (V)', 'dE°/dT (mV/K)', 'source']);
-  pot.addRow(['Zn2+ + 2 e- -> Zn', -0.7618, null, 'OpenStax Chemistry 2e, Appendix L']);
-  pot.addRow(['Cu2+ + 2 e- -> Cu', 0.337, null, 'OpenStax Chemistry 2e, Appendix L']);
-  pot.addRow(['Fe3+ + e- -> Fe2+', 0.771, null, 'OpenStax Chemistry 2e, Appendix L']);
+  pot.addRow(['Zn2+ + 2 e- -> Zn', -0.7618, 0, 'OpenStax Chemistry 2e, Appendix L']);
+  pot.addRow(['Cu2+ + 2 e- -> Cu', 0.34, 0, 'OpenStax Chemistry 2e, Appendix L']);
+  pot.addRow(['Fe3+ + e- -> Fe2+', 0.771, 0, 'OpenStax Chemistry 2e, Appendix L']);
 
   zc.addRow(['Zn2+', 'Cu2+', 'temp_C', 'ECHEM per row', 'plain', 'ECHEM spilled', null, 'E0']);
-  zc.getCell('I1').value = { formula: '0.337-(-0.7618)' } as ExcelJS.CellFormulaValue;
+  zc.getCell('I1').value = { formula: '0.34-(-0.7618)' } as ExcelJS.CellFormulaValue;
   zc.getCell('H2').value = 'n';
   zc.getCell('I2').value = 2;
   fe.addRow(['Fe3+', 'Fe2+', 'temp_C', 'ECHEM per row', 'plain']);
@@ -100,7 +101,7 @@ test('plain Nernst arithmetic and the ECHEM formulas agree over a sweep, to 1e-9
     expect(Math.abs(n(fe, `D${r}`) - plainFe)).toBeLessThan(1e-9);
     largest = Math.max(largest, Math.abs(n(fe, `D${r}`) - plainFe));
     // And both against the equation by hand: E° from OpenStax Appendix L (seen), SI exact constants.
-    expect(n(zc, `D${r}`)).toBeCloseTo(nernst(0.337 + 0.7618, 2, a / b, t), 12);
+    expect(n(zc, `D${r}`)).toBeCloseTo(nernst(0.34 + 0.7618, 2, a / b, t), 12);
     expect(n(fe, `D${r}`)).toBeCloseTo(nernst(0.771, 1, b / a, t), 12);
   }
   // R = 8.314462618 in the plain formulas differs from the exact value in the 11th digit,

@@ -11,7 +11,7 @@ import type { Arg, Grid, Result, Scalar } from '../../src/functions/catalogue';
 import { evaluateFormulas } from '../../src/cli/evalCommand';
 import { recalcCommand } from '../../src/cli/recalcCommand';
 import { CAL_TEMPLATE, CP_TEMPLATE, SWEEP_TEMPLATE, TEMPLATE_DIR } from '../../src/cli/templateLayout';
-import { captureIo, nernst, tempDir, thermalVoltage } from './helpers';
+import { captureIo, F, nernst, tempDir, thermalVoltage } from './helpers';
 
 const LN10 = Math.log(10);
 const dir = tempDir('templates');
@@ -61,6 +61,14 @@ function potentialsGrid(wb: ExcelJS.Workbook): Grid {
   return grid;
 }
 
+/** The Potentials sheet's half-reaction, E° and dE°/dT columns as an inline array literal. */
+function inlineTable(wb: ExcelJS.Workbook): string {
+  const rows = potentialsGrid(wb)
+    .filter((r) => typeof r[0] === 'string' && r[0] !== '')
+    .map((r) => [r[0], r[1], r[2]].map((v) => (typeof v === 'string' ? `"${v}"` : v === null ? '""' : String(v))).join(','));
+  return `{${rows.join(';')}}`;
+}
+
 /** Recalculates a template into the temp folder; returns input and output workbooks. */
 async function recalcTemplate(file: string): Promise<{ input: ExcelJS.Workbook; output: ExcelJS.Workbook }> {
   const source = path.join(TEMPLATE_DIR, file);
@@ -86,10 +94,11 @@ describe('cathodic-protection check template', () => {
 
   // Reference electrodes vs SHE at 25 °C: Ag/AgCl sat. KCl 0.197 V and saturated Cu/CuSO4
   // 0.316 V (Int. J. Corrosion 2010, art. 756950, Table 2 (seen)); Ag/AgCl sat. KCl about
-  // −1.0 mV/K (from memory); no temperature coefficient is tabulated for Cu/CuSO4.
+  // −1.0 mV/K (from memory); saturated Cu/CuSO4 about +0.9 mV/K (common practice). Both
+  // sides of a conversion are corrected for temperature.
   function referenceV(name: string, tC: number): number {
     if (name.startsWith('Ag/AgCl')) return 0.197 - 1.0e-3 * (tC - 25);
-    if (name === 'CSE') return 0.316;
+    if (name === 'CSE') return 0.316 + 0.9e-3 * (tC - 25);
     throw new Error(`unexpected reference ${name}`);
   }
 
@@ -122,9 +131,15 @@ describe('cathodic-protection check template', () => {
     const ws = output.getWorksheet(CP_TEMPLATE.sheet) as ExcelJS.Worksheet;
     const g = CP_TEMPLATE.couple;
     const t = num(ws, g.temp);
-    // E°(Fe2+/Fe) −0.447 V, E°(Zn2+/Zn) −0.7618 V (OpenStax Chemistry 2e, Appendix L (seen));
-    // dE°/dT of Zn2+/Zn +0.119 mV/K (from memory); none tabulated for Fe2+/Fe.
-    const e0 = -0.447 - (-0.7618 + 0.119e-3 * (t - 25));
+    // E°(Fe2+/Fe) −0.447 V, E°(Zn2+/Zn) −0.7618 V (OpenStax Chemistry 2e, Appendix L (seen)),
+    // as the template's Potentials sheet carries them (its formulas pass it as `table`).
+    // dE°/dT = ΔrS°/(nF) from the NBS 1982 entropies (Wagman et al., from memory) and the SHE
+    // convention S°(e-) = ½·S°(H2, g) = 65.342 J/(mol·K), as the sheet shows it (0.001 mV/K):
+    //   Zn2+/Zn: (41.63 + 112.1 − 2·65.342)/(2F) = +0.1194 mV/K -> +0.119
+    //   Fe2+/Fe: (27.28 + 137.7 − 2·65.342)/(2F) = +0.1777 mV/K -> +0.178
+    expect(Math.abs((41.63 + 112.1 - 2 * 65.342) / (2 * F) - 0.119e-3)).toBeLessThan(0.5e-6);
+    expect(Math.abs((27.28 + 137.7 - 2 * 65.342) / (2 * F) - 0.178e-3)).toBeLessThan(0.5e-6);
+    const e0 = -0.447 + 0.178e-3 * (t - 25) - (-0.7618 + 0.119e-3 * (t - 25));
     expect(num(ws, g.e0)).toBeCloseTo(e0, 12);
     // Zn + Fe2+ -> Zn2+ + Fe, n = 2, Q = a(Zn2+)/a(Fe2+) = 1e-4/1e-6.
     const emf = nernst(e0, 2, 1e-4 / 1e-6, t);
@@ -177,9 +192,12 @@ describe('cell-voltage sweep template', () => {
       const t = num(ws, `${c.temp}${r}`);
       values.push([zn, cu]);
       temps.push([t]);
-      // E°(Cu2+/Cu) 0.337 V, E°(Zn2+/Zn) −0.7618 V (OpenStax Chemistry 2e, Appendix L (seen));
-      // dE°/dT +0.011 and +0.119 mV/K (from memory, as in the table's rows).
-      const e0 = 0.337 + 0.011e-3 * (t - 25) - (-0.7618 + 0.119e-3 * (t - 25));
+      // E°(Zn2+/Zn) −0.7618 V (OpenStax Chemistry 2e, Appendix L (seen)). E°(Cu2+/Cu) as the
+      // template's Potentials sheet carries it from the species data: ΔfG°(Cu2+) = 65.49 kJ/mol
+      // (NBS 1982, from memory) / 2F = 0.33938 V, shown as 0.3394 V; OpenStax prints +0.34 V
+      // (checked below within 1 mV). dE°/dT +0.011 and +0.119 mV/K: ΔrS°/(2F) from the NBS
+      // entropies, (33.15 + 99.6 − 130.684)/(2F) and (41.63 + 112.1 − 130.684)/(2F).
+      const e0 = 0.3394 + 0.011e-3 * (t - 25) - (-0.7618 + 0.119e-3 * (t - 25));
       expect(num(ws, `${c.e0}${r}`)).toBeCloseTo(e0, 12);
       expect(num(ws, `${c.emf}${r}`)).toBeCloseTo(nernst(e0, 2, zn / cu, t), 12);
       // The plain-arithmetic column of the sheet agrees to far better than 1e-9 V.
@@ -187,6 +205,10 @@ describe('cell-voltage sweep template', () => {
     }
     // A Daniell-type zinc–copper cell gives about 1.10 V at unit activities (common practice).
     expect(num(ws, `${c.emf}${SWEEP_TEMPLATE.firstRow}`)).toBeCloseTo(1.1, 2);
+    // The sheet's E°(Cu2+/Cu) against the printed value: 65.49 kJ/mol/(2F) = 0.33938 V vs
+    // OpenStax Chemistry 2e, Appendix L, +0.34 V (seen); they agree within 1 mV.
+    expect(Math.abs(65.49e3 / (2 * F) - 0.3394)).toBeLessThan(0.5e-4);
+    expect(Math.abs(0.3394 - 0.34)).toBeLessThan(0.001);
 
     const direct = catalogue(
       'POTENTIAL',
@@ -273,8 +295,12 @@ describe('electrode calibration template', () => {
     for (let k = 0; k < CAL_TEMPLATE.temps; k++) {
       const r = CAL_TEMPLATE.summaryFirstRow + k;
       const t = num(ws, `${s.temp}${r}`);
-      // The table row: 0.22233 V (OpenStax Appendix L (seen)), −0.65 mV/K (BB slope, derived).
-      const e0 = 0.22233 - 0.65e-3 * (t - 25);
+      // The table row as the species data give it: ΔfG°(AgCl) set from Bates & Bower's
+      // 0.22234 V, shown to 0.1 mV as 0.2223 V (OpenStax Appendix L prints 0.22233 V (seen));
+      // dE°/dT = ΔrS°/F = (42.55 + 56.5 − 96.2 − 65.342)/F = −0.6477 mV/K (NBS 1982 S°, from
+      // memory), shown as −0.648 mV/K; Bates & Bower's own slope is about −0.65 mV/K.
+      expect(Math.abs((42.55 + 56.5 - 96.2 - 65.342) / F + 0.648e-3)).toBeLessThan(0.5e-6);
+      const e0 = 0.2223 - 0.648e-3 * (t - 25);
       expect(num(ws, `${s.refE0}${r}`)).toBeCloseTo(e0, 12);
       const published = bb[t];
       if (published !== undefined)
@@ -288,7 +314,8 @@ describe('electrode calibration template', () => {
 describe("potentia eval on the templates' formulas", () => {
   test('the same formulas with the inputs inline give the recalculated cells, digit for digit', async () => {
     const cp = (await recalcTemplate(CP_TEMPLATE.file)).output.getWorksheet(CP_TEMPLATE.sheet);
-    const sweep = (await recalcTemplate(SWEEP_TEMPLATE.file)).output.getWorksheet(SWEEP_TEMPLATE.sheet);
+    const sweepBook = (await recalcTemplate(SWEEP_TEMPLATE.file)).output;
+    const sweep = sweepBook.getWorksheet(SWEEP_TEMPLATE.sheet);
     const cal = (await recalcTemplate(CAL_TEMPLATE.file)).output.getWorksheet(CAL_TEMPLATE.sheet);
     if (!cp || !sweep || !cal) throw new Error('template sheet missing');
     const c = CP_TEMPLATE.col;
@@ -298,7 +325,8 @@ describe("potentia eval on the templates' formulas", () => {
     const k = CAL_TEMPLATE.summaryFirstRow + 2;
     const [vsCse, emf, ideal] = evaluateFormulas([
       `=ECHEM.VSREF(${num(cp, `${c.reading}${r}`)}/1000, "${String(val(cp, `${c.electrode}${r}`))}", "CSE", , ${num(cp, `${c.temp}${r}`)})`,
-      `=ECHEM.POTENTIAL("${String(val(sweep, SWEEP_TEMPLATE.cellText))}", {"Zn2+","Cu2+"}, {${num(sweep, `${w.zinc}${q}`)},${num(sweep, `${w.copper}${q}`)}}, ${num(sweep, `${w.temp}${q}`)})`,
+      // the sheet passes its Potentials table as `table`: inline here too, so both use one E°
+      `=ECHEM.POTENTIAL("${String(val(sweep, SWEEP_TEMPLATE.cellText))}", {"Zn2+","Cu2+"}, {${num(sweep, `${w.zinc}${q}`)},${num(sweep, `${w.copper}${q}`)}}, ${num(sweep, `${w.temp}${q}`)}, ${inlineTable(sweepBook)})`,
       `=-1000*ECHEM.NERNSTSLOPE(${num(cal, `${CAL_TEMPLATE.summaryCol.temp}${k}`)})`,
     ]);
     expect(vsCse).toBe(num(cp, `${c.vsCse}${r}`));

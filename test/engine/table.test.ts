@@ -16,10 +16,11 @@ import {
   parseNotation,
   readUserTable,
   resolveReaction,
+  rowE0V,
   standardPotentialV,
   type PotentialTable,
 } from '../../src/engine';
-import { engineErrorOf } from '../support';
+import { engineErrorOf, F } from '../support';
 
 
 const e0 = (text: string, table: PotentialTable): number =>
@@ -165,7 +166,7 @@ describe('user table read from a spreadsheet range', () => {
         { kind: 'user', row: 16 },
         'Sn2+ + 2 e- -> Sn',
         -0.1364,
-        null,
+        0, // '0' as text: an explicit zero slope (constant E°), not an empty cell
         'CRC Handbook 54th ed. p. D-120 (seen)',
       ],
       [{ kind: 'user', row: 21 }, 'Ag+ + e- -> Ag', 0.7996, -0.989, 'CRC Handbook 92nd ed. (seen)'],
@@ -288,16 +289,39 @@ describe('user table: header, blank rows and cells', () => {
     expect(e0('Zn2+/Zn', t)).toBe(-0.7618); // OSX App. L (seen)
   });
 
-  test('dE°/dT: a number, numeric text, or empty / 0 for none', () => {
+  test('dE°/dT: a number (0 included), numeric text, or empty for none given', () => {
     // dE°/dT values from memory: Bratsch, J. Phys. Chem. Ref. Data 18, 1 (1989)
     const t = readUserTable([
-      ['Cu2+ + 2 e- -> Cu', 0.337, 0.011],
+      ['Cu2+ + 2 e- -> Cu', 0.34, 0.011],
       ['Ag+ + e- -> Ag', 0.7996, '-0.989'],
       ['Zn2+ + 2 e- -> Zn', -0.7618, 0],
       ['Fe3+ + e- -> Fe2+', 0.771, ''],
+      ['Sn2+ + 2 e- -> Sn', -0.1375, '0'],
     ]);
     expect(t.problems).toEqual([]);
-    expect(t.userRows.map((r) => r.dE0dTmVperK)).toEqual([0.011, -0.989, null, null]);
+    expect(t.userRows.map((r) => r.dE0dTmVperK)).toEqual([0.011, -0.989, 0, null, 0]);
+  });
+
+  test('an explicit 0 in dE°/dT forces a constant E°; an empty cell takes the slope from the species entropies', () => {
+    // E° as the user types them: OpenStax Chemistry 2e, Appendix L (seen)
+    const t = readUserTable([
+      ['Zn2+ + 2 e- -> Zn', -0.7618, 0],
+      ['Fe3+ + e- -> Fe2+', 0.771, null],
+    ]);
+    const [zn, fe] = t.userRows;
+    expect(zn!.temperature.basis).toBe('row');
+    for (const tC of [0, 60, 100]) expect(rowE0V(zn!, tC)).toBe(-0.7618);
+    // Fe3+ + e- -> Fe2+ from the NBS 1982 S° (Wagman et al., from memory) and the SHE convention
+    // S°(e-) = ½·S°(H2, g) = 65.342, Cp°(e-) = 14.412 J/(mol·K); Fe2+ and Fe3+ have no Cp°:
+    // ΔrS° = −137.7 + 315.9 − 65.342 = 112.858 J/(mol·K), ΔrCp° = −14.412 J/(mol·K),
+    // E°(T) = E°(25 °C) + ΔrS°/F·(T − T0) − ΔrCp°/F·[(T − T0) − T ln(T/T0)]
+    expect(fe!.temperature.basis).toBe('species');
+    const T0 = 298.15;
+    const T = 333.15;
+    const byHand = 0.771 + (112.858 / F) * (T - T0) - (-14.412 / F) * (T - T0 - T * Math.log(T / T0));
+    expect(rowE0V(fe!, 60)).toBeCloseTo(byHand, 9);
+    // about +1.17 mV/K over 35 K (the heat-capacity term adds −0.3 mV)
+    expect(Math.abs(rowE0V(fe!, 60) - 0.771 - 35 * 1.17e-3)).toBeLessThan(0.001);
   });
 });
 

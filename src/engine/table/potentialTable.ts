@@ -248,7 +248,10 @@ function looksLikeHeader(row: readonly Cell[]): boolean {
 /**
  * Read a user's table from a range: columns half-reaction | E° (V) | dE°/dT (mV/K, optional) | source (optional).
  * A header row is recognised and skipped; blank rows (all cells empty, "" or 0) are skipped.
- * An empty dE°/dT cell (empty, "" or 0) means none: the 25 °C value is used at every temperature.
+ * dE°/dT: a number (0 included) is used as given, so 0 forces a constant E°; an empty cell
+ * (empty or "") means none given: the temperature dependence then comes from the species
+ * entropies where all the row's species are known (SOURCE says so), else the 25 °C value is
+ * used at every temperature.
  *
  * @example
  * readUserTable([['Half-reaction', 'E0'], ['Fe3+ + e- -> Fe2+', 0.68]]).rows[0].e0V // 0.68
@@ -298,7 +301,7 @@ export function readUserTable(cells: readonly (readonly Cell[])[] | null | undef
       });
       return;
     }
-    let slope = cellNumber(row[2]);
+    const slope = cellNumber(row[2]);
     if (slope !== null && Number.isNaN(slope)) {
       problems.push({
         row: rowNo,
@@ -306,7 +309,6 @@ export function readUserTable(cells: readonly (readonly Cell[])[] | null | undef
       });
       return;
     }
-    if (slope === 0) slope = null;
     const srcCell = row[3];
     const source = typeof srcCell === 'string' && srcCell.trim() !== '' ? srcCell.trim() : 'user table';
     try {
