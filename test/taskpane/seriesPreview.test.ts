@@ -4,13 +4,22 @@
  *
  * Sources: RT ln10/F = 59.15935 mV at 25 °C and 64.1199 mV at 50 °C, derived from the SI
  * 2019 exact constants (F = N_A·e, R = N_A·k). E° values: OpenStax Chemistry 2e, Appendix L
- * (Cu2+/Cu +0.337 V, Zn2+/Zn −0.7618 V, O2/H2O +1.229 V, O2/OH- +0.401 V, MnO4-/Mn2+ +1.507 V).
+ * (seen: Cu2+/Cu +0.34 V, Zn2+/Zn −0.7618 V, O2/H2O +1.229 V, O2/OH- +0.401 V, MnO4-/Mn2+
+ * +1.507 V). The built-in E° of Cu2+/Cu and O2/H2O come from the species data (NBS 1982,
+ * Wagman et al., from memory): ΔfG°(Cu2+) = 65.49 kJ/mol gives 65.49/(2F) = 0.33938 V, and
+ * ΔfG°(H2O, l) = −237.129 kJ/mol gives 2·237.129/(4F) = 1.22883 V; each is checked exactly
+ * against that derivation and against the printed value within 1 mV.
  */
 import { nernstSlope, potentialArgs, previewValues, seriesSlope } from '../../src/taskpane/seriesPreview';
 import { planSweep, readSweepForm, type SweepForm, type SweepInput } from '../../src/taskpane/sweepPlan';
+import { F } from '../support';
 
 const SLOPE_25 = 0.05915935; // V per decade, derived from the SI exact constants
 const SLOPE_50 = 0.0641199; // V per decade at 50 °C, derived likewise
+/** E°(Cu2+/Cu) from ΔfG°(Cu2+) = 65.49 kJ/mol (NBS 1982, from memory): 0.33938 V. */
+const E0_CU_SPECIES = 65.49e3 / (2 * F);
+/** E°(O2/H2O) from ΔfG°(H2O, l) = −237.129 kJ/mol (NBS 1982, from memory): 1.22883 V. */
+const E0_O2_SPECIES = (2 * 237.129e3) / (4 * F);
 
 function form(over: Partial<SweepForm> = {}): SweepForm {
   return {
@@ -38,13 +47,15 @@ function slopeOf(i: SweepInput): number | undefined {
 }
 
 describe('preview through the catalogue, and slopes (published checks)', () => {
-  test('Cu2+/Cu: E° = +0.337 V at unit activity; 0.05916/2 V per decade at 25 °C', () => {
+  test('Cu2+/Cu: E° = +0.34 V (species data 0.33938 V) at unit activity; 0.05916/2 V per decade at 25 °C', () => {
     const i = input({ points: '7' });
     const values = previewValues(i, planSweep(i), null);
     expect(values).toHaveLength(7);
     const e = values.map((v) => (v.ok ? v.e : NaN));
-    expect(e[6]).toBeCloseTo(0.337, 12); // OpenStax Appendix L
-    expect(e[4]).toBeCloseTo(0.337 - SLOPE_25, 6); // a = 0.01: 0.27784 V
+    expect(e[6]).toBeCloseTo(E0_CU_SPECIES, 12); // species data, derived above
+    // species-data E° 0.33938 V vs OpenStax Appendix L +0.34 V (printed to 10 mV): within 1 mV
+    expect(Math.abs((e[6] as number) - 0.34)).toBeLessThan(0.001);
+    expect(e[4]).toBeCloseTo(E0_CU_SPECIES - SLOPE_25, 6); // a = 0.01: 0.28022 V
     for (let k = 1; k < 7; k++) expect((e[k] as number) - (e[k - 1] as number)).toBeCloseTo(SLOPE_25 / 2, 7);
     expect(slopeOf(i)).toBeCloseTo(SLOPE_25 / 2, 7);
     expect(seriesSlope(i, planSweep(i), values)?.per).toBe('V per decade');
@@ -60,7 +71,9 @@ describe('preview through the catalogue, and slopes (published checks)', () => {
       species: [{ name: 'O2(g)', value: '1' }],
     });
     const e = previewValues(i, planSweep(i), null).map((v) => (v.ok ? v.e : NaN));
-    expect(e[0]).toBeCloseTo(1.229, 12); // OpenStax Appendix L
+    expect(e[0]).toBeCloseTo(E0_O2_SPECIES, 12); // species data, derived above
+    // species-data E° 1.22883 V vs OpenStax Appendix L +1.229 V: within 0.2 mV
+    expect(Math.abs((e[0] as number) - 1.229)).toBeLessThan(0.0002);
     expect(e[14]).toBeCloseTo(0.401, 2); // OpenStax: O2 + 2 H2O + 4 e- -> 4 OH-, +0.401 V (within 1 mV)
     expect(Math.abs((e[14] as number) - 0.401)).toBeLessThan(0.001);
     expect(slopeOf(i)).toBeCloseTo(-SLOPE_25, 7);
@@ -114,7 +127,10 @@ describe('preview through the catalogue, and slopes (published checks)', () => {
       ],
     });
     const e = previewValues(i, planSweep(i), null).map((v) => (v.ok ? v.e : NaN));
-    expect(e[2]).toBeCloseTo(0.337 + 0.7618, 10); // OpenStax E° values; "about 1.10 V"
+    // E°(Cu2+/Cu) from the species data (derived above), E°(Zn2+/Zn) −0.7618 V (OpenStax, which
+    // the species data take as measured): 1.10118 V; with OpenStax's +0.34 V, 1.1018 V
+    expect(e[2]).toBeCloseTo(E0_CU_SPECIES + 0.7618, 10);
+    expect(Math.abs((e[2] as number) - (0.34 + 0.7618))).toBeLessThan(0.001); // "about 1.10 V"
     expect((e[2] as number) - (e[0] as number)).toBeCloseTo(SLOPE_25, 7);
     expect(slopeOf(i)).toBeCloseTo(SLOPE_25 / 2, 7);
   });
@@ -138,7 +154,7 @@ describe('the preview uses the same function and arguments as the sheet', () => 
   });
 
   test("the user's table takes precedence: a made-up E° of 0.5 V for Cu2+/Cu moves every case", () => {
-    // Fictional table row (E° = 0.500 V instead of OpenStax's 0.337 V); blank rows below it are room to grow.
+    // Fictional table row (E° = 0.500 V instead of OpenStax's +0.34 V); blank rows below it are room to grow.
     const table = [
       ['Cu2+ + 2 e- -> Cu', 0.5, '', 'made-up test row'],
       ['', '', '', ''],
@@ -148,9 +164,12 @@ describe('the preview uses the same function and arguments as the sheet', () => 
     const layout = planSweep(i);
     const mine = previewValues(i, layout, table).map((v) => (v.ok ? v.e : NaN));
     const builtin = previewValues(i, layout, null).map((v) => (v.ok ? v.e : NaN));
+    // a(Cu2+) = 1e-6, 1e-3, 1: E = 0.5 + (s/2)·log10 a with the user's E°, by hand
+    [-6, -3, 0].forEach((log10a, k) => expect(mine[k]).toBeCloseTo(0.5 + (SLOPE_25 / 2) * log10a, 7));
     expect(mine[2]).toBeCloseTo(0.5, 12);
+    // every case moves by the difference from the built-in E° (species data, derived above)
     for (let k = 0; k < 3; k++)
-      expect((mine[k] as number) - (builtin[k] as number)).toBeCloseTo(0.5 - 0.337, 12);
+      expect((mine[k] as number) - (builtin[k] as number)).toBeCloseTo(0.5 - E0_CU_SPECIES, 12);
   });
 
   test('ECHEM.NERNSTSLOPE gives RT ln10/(nF): 59.159 mV at 25 °C for n = 1, half that for n = 2', () => {
