@@ -13,7 +13,7 @@
  * starts; `npm start -- --env http` asks for plain http on purpose).
  *
  * One engine in the page: the task pane is built with `dependOn: 'functions'`, so taskpane.js
- * holds only the pane's own modules and uses the engine, the catalogue and decimal.js of
+ * holds only the pane's own modules and uses the engine and the catalogue of
  * functions.js (loaded first by the page, which is the shared runtime).
  *
  * Build settings (`--env NAME=VALUE`):
