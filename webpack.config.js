@@ -246,8 +246,14 @@ module.exports = async (env = {}, argv = {}) => {
               onlyCompileBundledFiles: true,
               // ES modules let webpack drop unused engine code; the type check is `npm run typecheck`.
               compilerOptions: { module: 'es2020', moduleResolution: 'bundler', sourceMap: !production },
-              // the specs' documentation text stays out of the bundle (scripts/build/stripSpecDocs.js)
-              getCustomTransformers: () => ({ before: [require('./scripts/build/stripSpecDocs').stripSpecDocs] }),
+              // the specs' documentation text stays out of the bundle (scripts/build/stripSpecDocs.js);
+              // arrays of records are written as key lists and tuples (scripts/build/compactRecords.js)
+              getCustomTransformers: () => ({
+                before: [
+                  require('./scripts/build/stripSpecDocs').stripSpecDocs,
+                  require('./scripts/build/compactRecords').compactRecords,
+                ],
+              }),
             },
           },
         },
