@@ -37,6 +37,7 @@ export const ROWS: readonly { halfReaction: string; e0V: number; published: { e0
 export const ORDER = [{ a: next(), b: next() }, { a: next(), b: next() }, { a: next(), b: next() }];
 const x = 1;
 export const SHORT = [{ x, 'y-z': [1, 2] }, { x, 'y-z': [] }, { x: 2, 'y-z': null }];
+export const VARIED = [{ a: 1, b: 2 }, { a: next() }, { b: undefined, c: next() }, { a: 5, c: 6 }, {}];
 export const MIXED = [{ a: 1, b: 2 }, { b: 2, a: 1 }, { a: 1, b: 2 }];
 export const SPREAD = [{ a: 1, b: 2 }, { ...{ a: 1 }, b: 2 }, { a: 1, b: 2 }];
 export const TWO = [{ a: 1, b: 2 }, { a: 3, b: 4 }];
@@ -51,6 +52,7 @@ describe('compactRecords', () => {
   test('rewrites the arrays of records, and only those', () => {
     expect(compact).toContain('__records(["halfReaction", "e0V", "published"]');
     expect(compact).not.toContain('halfReaction: ');
+    expect(compact).toContain('__records(["a", "b", "c"], [[1, 2], [next()], [, undefined, next()], [5, , 6], []])');
     for (const left of ['MIXED = [{', 'SPREAD = [{', 'TWO = [{', 'ONE_KEY = [{', 'FN = [{'])
       expect(compact).toContain(left);
   });
@@ -61,7 +63,7 @@ describe('compactRecords', () => {
     // FN holds functions, which are new objects in each run
     expect(Object.keys(b)).toEqual(Object.keys(a));
     for (const name of Object.keys(a).filter((k) => k !== 'FN')) expect(b[name]).toEqual(a[name]);
-    for (const name of ['ROWS', 'ORDER', 'SHORT']) {
+    for (const name of ['ROWS', 'ORDER', 'SHORT', 'VARIED']) {
       const rowsA = a[name] as Record<string, unknown>[];
       const rowsB = b[name] as Record<string, unknown>[];
       expect(rowsB.map((r) => Object.keys(r))).toEqual(rowsA.map((r) => Object.keys(r)));
@@ -73,6 +75,11 @@ describe('compactRecords', () => {
       { a: 3, b: 4 },
       { a: 5, b: 6 },
     ]);
+    // a left-out key stays left out; a key given as undefined stays given
+    const varied = b['VARIED'] as Record<string, unknown>[];
+    expect(varied.map((r) => Object.keys(r))).toEqual([['a', 'b'], ['a'], ['b', 'c'], ['a', 'c'], []]);
+    expect(varied[1]).toEqual({ a: 7 });
+    expect(varied[2]).toEqual({ b: undefined, c: 8 });
     expect((b['ROWS'] as { published: { source: string } }[])[2]?.published.source).toBe(
       'OpenStax Chemistry 2e, Appendix L (seen)',
     );
