@@ -13,7 +13,7 @@
  * starts; `npm start -- --env http` asks for plain http on purpose).
  *
  * One engine in the page: the task pane is built with `dependOn: 'functions'`, so taskpane.js
- * holds only the pane's own modules and uses the engine, the catalogue and decimal.js of
+ * holds only the pane's own modules and uses the engine and the catalogue of
  * functions.js (loaded first by the page, which is the shared runtime).
  *
  * Build settings (`--env NAME=VALUE`):
@@ -246,8 +246,14 @@ module.exports = async (env = {}, argv = {}) => {
               onlyCompileBundledFiles: true,
               // ES modules let webpack drop unused engine code; the type check is `npm run typecheck`.
               compilerOptions: { module: 'es2020', moduleResolution: 'bundler', sourceMap: !production },
-              // the specs' documentation text stays out of the bundle (scripts/build/stripSpecDocs.js)
-              getCustomTransformers: () => ({ before: [require('./scripts/build/stripSpecDocs').stripSpecDocs] }),
+              // the specs' documentation text stays out of the bundle (scripts/build/stripSpecDocs.js);
+              // arrays of records are written as key lists and tuples (scripts/build/compactRecords.js)
+              getCustomTransformers: () => ({
+                before: [
+                  require('./scripts/build/stripSpecDocs').stripSpecDocs,
+                  require('./scripts/build/compactRecords').compactRecords,
+                ],
+              }),
             },
           },
         },

@@ -14,7 +14,7 @@
  *   through `callFunction`: a header row, then segments species A | species B | pH1 | E1 |
  *   pH2 | E2 (E in V vs SHE), the water lines last.
  */
-import * as engine from '../engine/index';
+import { EPH_ELEMENTS, ephDiagram, renderEphSvg } from '../engine/index';
 import { callFunction, isCellError, type Result } from '../functions/catalogue';
 import type { CellBlock, SheetPlan } from './sheetPlan';
 import { asCellText, cellAddress, uniqueSheetName } from './sheetNames';
@@ -53,12 +53,16 @@ export interface EphSupport {
 export const EPH_MIN_WIDTH_PX = 320;
 
 /**
+ * What the section takes from the engine, by name (a namespace import of the engine would keep
+ * every engine export in dist/functions.js, used or not).
+ */
+const ENGINE_EPH: Record<string, unknown> = { renderEphSvg, ephDiagram, EPH_ELEMENTS };
+
+/**
  * The engine's renderer (wrapped so that the section passes one request), its element
  * list, and whether the catalogue has EPHLINES.
  */
-export function ephSupport(
-  source: Record<string, unknown> = engine as unknown as Record<string, unknown>,
-): EphSupport {
+export function ephSupport(source: Record<string, unknown> = ENGINE_EPH): EphSupport {
   const renderSvg = source['renderEphSvg'];
   const diagram = source['ephDiagram'];
   const list = source['EPH_ELEMENTS'];

@@ -2,9 +2,8 @@
  * Equilibrium constants and Gibbs energies from standard potentials:
  *   log10 K = n F E° / (RT ln10),   ΔG = −n F E.
  * K itself is returned only where it is a float64; beyond, a range error carries
- * its value computed with decimal.js.
+ * its value as mantissa × 10^exponent, computed from log10 K.
  */
-import Decimal from 'decimal.js';
 import { EngineError } from '../errors';
 import { FARADAY_C_PER_MOL, kelvinFromCelsius, slopePerElectronAtKelvin } from '../constants';
 
@@ -73,6 +72,27 @@ export const MAX_LOG10_K = Math.log10(Number.MAX_VALUE);
 export const MIN_LOG10_K = Math.log10(2.2250738585072014e-308);
 
 /**
+ * 10^x in exponential notation with 5 significant digits ("1.3802e+676"), for any
+ * finite x, including far beyond the float64 range: exponent = floor(x), mantissa =
+ * 10^(x − exponent). x − floor(x) is exact in float64, so the mantissa is 10^frac of the
+ * given x to within an ulp or two, well inside its 5 digits. Where |x| ≥ 1e21 (x is a
+ * whole number far beyond any real system) the value is written as 10^x.
+ *
+ * @example
+ * exponentialOfLog10(676.1398) // '1.3802e+676'
+ */
+export function exponentialOfLog10(x: number): string {
+  if (Math.abs(x) >= 1e21) return `10^${x.toExponential(4)}`;
+  let exponent = Math.floor(x);
+  let mantissa = Math.pow(10, x - exponent).toFixed(4);
+  if (mantissa === '10.0000') {
+    mantissa = '1.0000';
+    exponent += 1;
+  }
+  return `${mantissa}e${exponent < 0 ? '-' : '+'}${Math.abs(exponent)}`;
+}
+
+/**
  * K = 10^(log10 K), where it is representable.
  *
  * @throws EngineError (`range`) where K is above 1.8e308 or below 2.2e-308, with its value in the message
@@ -92,7 +112,7 @@ export function equilibriumConstantFromLog10(log10K: number): number {
         'reaction_or_E0',
       );
     }
-    const value = new Decimal(10).pow(new Decimal(log10K)).toExponential(4);
+    const value = exponentialOfLog10(log10K);
     throw new EngineError(
       'range',
       `K = ${value} is outside the spreadsheet's number range (about 2.2e-308 to 1.8e308); log10 K = ${log10K.toFixed(4)}.`,
