@@ -6,6 +6,7 @@
  * and with the Nernst equation written by hand.
  */
 import { stub } from './installStub';
+import { StubError } from './customFunctionsStub';
 import '../../src/functions/functions';
 import { LAST_NERNST_CALL_CACHE } from '../../src/functions/specs/nernst';
 import { F, R } from '../support';
@@ -84,5 +85,44 @@ describe('the POTENTIAL fast path with Excel-shaped arguments', () => {
     LAST_NERNST_CALL_CACHE.clear();
     excelCall(0.1, 0.01, userTable());
     expect(excelCall(0.1, 0.01, longer)).toEqual(general);
+  });
+});
+
+describe('a spilled POTENTIAL checked in one pass', () => {
+  /** 200 distinct cases (more than the kernel marks as all numbers), a fresh matrix. */
+  function valueRows(): unknown[][] {
+    const rows: unknown[][] = [];
+    for (let i = 0; i < 200; i++) rows.push([1e-4 * (i + 1), 0.5 / (i + 1)]);
+    return rows;
+  }
+  const handE = (a1: number, a2: number) => CU_E0 - ZN_E0 - (S25 / 2) * Math.log10(a1 / a2);
+
+  test('all-number spills are handed over as the kernel wrote them, bit for bit the general path', () => {
+    LAST_NERNST_CALL_CACHE.clear();
+    const general = potentialFn()([[DANIELL]], [['Zn2+', 'Cu2+']], valueRows(), null, userTable());
+    const fast = potentialFn()([[DANIELL]], [['Zn2+', 'Cu2+']], valueRows(), null, userTable());
+    expect(fast).toHaveLength(200);
+    const rows = valueRows() as [number, number][];
+    for (let i = 0; i < 200; i++) {
+      expect(fast[i]).toHaveLength(1);
+      expect(Object.is(fast[i]![0], general[i]![0])).toBe(true);
+      // the Nernst equation by hand (OpenStax Chemistry 2e, Appendix L E°; SI 2019 R and F)
+      expect(fast[i]![0] as number).toBeCloseTo(handE(rows[i]![0], rows[i]![1]), 12);
+    }
+  });
+
+  test.each([false, true])('an error cell and a bad value in a long spill still become error cells (fast path: %s)', (primed) => {
+    LAST_NERNST_CALL_CACHE.clear();
+    if (primed) potentialFn()([[DANIELL]], [['Zn2+', 'Cu2+']], valueRows(), null, userTable());
+    const rows = valueRows();
+    rows[7] = [new StubError('#N/A'), 0.1]; // Excel hands an error cell over as an error object
+    rows[50] = [-1, 0.1];
+    const out = potentialFn()([[DANIELL]], [['Zn2+', 'Cu2+']], rows, null, userTable());
+    expect(out).toHaveLength(200);
+    expect(typeof out[7]![0]).toBe('object');
+    expect((out[7]![0] as { code: string }).code).toBe('#N/A');
+    expect(typeof out[50]![0]).toBe('object');
+    expect((out[50]![0] as { code: string }).code).toBe('#VALUE!');
+    expect(out[8]![0] as number).toBeCloseTo(handE(9e-4, 0.5 / 9), 12);
   });
 });
