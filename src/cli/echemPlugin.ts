@@ -42,6 +42,7 @@ import type {
 } from 'hyperformula/typings/interpreter/InterpreterValue';
 import { CATALOGUE, isCellError, isPerCase, kindOf } from '../functions/catalogue';
 import type { Arg, ErrorCode, FunctionSpec, Grid, Result, ResultCell, Scalar } from '../functions/catalogue';
+import { ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
 
 /** The namespace of our functions in formulas. */
 export const NAMESPACE = 'ECHEM';
@@ -397,4 +398,8 @@ export const HF_CONFIG = {
   // Modern spreadsheets: an empty cell reads as 0 in arithmetic, ranges may spill.
   evaluateNullToZero: true,
   useArrayArithmetic: true,
+  // The .xlsx sheet size, not HyperFormula's smaller default (40,000 rows): the runner's read
+  // limits (limits.ts) refuse anything larger with a clear message first.
+  maxRows: ENGINE_MAX_ROWS,
+  maxColumns: ENGINE_MAX_COLUMNS,
 } as const;
