@@ -153,6 +153,8 @@ interface InlineSlot {
 }
 interface InlineTemplate {
   readonly resolved: Resolved & { kind: 'cell' };
+  /** the compiled form of `resolved`: each call's form differs only in its terms' inline activities */
+  readonly form: NernstForm;
   readonly slots: readonly InlineSlot[];
   readonly factors: readonly number[];
 }
@@ -203,7 +205,7 @@ function buildTemplate(probeText: string, factors: readonly number[], table: Pot
       slots.push({ side, key: k, slot: found.slot, count: found.count });
     }
   }
-  return { resolved: r, slots, factors };
+  return { resolved: r, form: nernstForm(r), slots, factors };
 }
 
 /**
@@ -241,7 +243,15 @@ function inlineDiagramForm(text: string, key: string, table: PotentialTable): Ne
   }
   const base = t.resolved;
   const withHalf = (h: ResolvedHalf, inline: Map<string, number>): ResolvedHalf => ({ ...h, inline });
-  return nernstForm({ ...base, text, left: withHalf(base.left, left), right: withHalf(base.right, right) });
+  const resolved: Resolved = { ...base, text, left: withHalf(base.left, left), right: withHalf(base.right, right) };
+  // the terms of nernstForm(resolved), from the template's: only their inline activities change
+  const terms = t.form.terms.map((term) => {
+    const inline = base.diagram
+      ? (term.side === 'right' ? right : left).get(term.key)
+      : (left.get(term.key) ?? right.get(term.key));
+    return inline === term.inline ? term : { ...term, inline };
+  });
+  return { resolved, terms, n: t.form.n };
 }
 
 /** Resolution only (no compilation), through the same cache. */
