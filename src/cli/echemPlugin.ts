@@ -42,6 +42,8 @@ import type {
 } from 'hyperformula/typings/interpreter/InterpreterValue';
 import { CATALOGUE, isCellError, isPerCase, kindOf } from '../functions/catalogue';
 import type { Arg, ErrorCode, FunctionSpec, Grid, Result, ResultCell, Scalar } from '../functions/catalogue';
+import { ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
+import { isFiniteColumn } from '../engine';
 
 /** The namespace of our functions in formulas. */
 export const NAMESPACE = 'ECHEM';
@@ -278,6 +280,8 @@ export class EchemPlugin extends FunctionPlugin {
           'were reserved for its spill; give the case arguments as ranges or arrays with one row per case',
       );
     }
+    // A column the kernel reports all finite numbers is already HyperFormula's shape: no copy.
+    if (width === 1 && isFiniteColumn(result)) return SimpleRangeValue.onlyValues(result as InternalScalarValue[][]);
     const rows: InternalScalarValue[][] = [];
     for (let r = 0; r < height; r++) {
       const src = result[r] ?? [];
@@ -397,4 +401,8 @@ export const HF_CONFIG = {
   // Modern spreadsheets: an empty cell reads as 0 in arithmetic, ranges may spill.
   evaluateNullToZero: true,
   useArrayArithmetic: true,
+  // The .xlsx sheet size, not HyperFormula's smaller default (40,000 rows): the runner's read
+  // limits (limits.ts) refuse anything larger with a clear message first.
+  maxRows: ENGINE_MAX_ROWS,
+  maxColumns: ENGINE_MAX_COLUMNS,
 } as const;

@@ -10,10 +10,13 @@ import { UsageError } from './io';
 export const DEFAULT_MAX_UNCOMPRESSED_MB = 200;
 /** Default bound on the number of cells (values and formulas) of a workbook. */
 export const DEFAULT_MAX_CELLS = 2_000_000;
-/** Rows per sheet the calculation engine holds (HyperFormula's default sheet size). */
-export const ENGINE_MAX_ROWS = 40_000;
-/** Columns per sheet the calculation engine holds (HyperFormula's default, column ZZZ). */
-export const ENGINE_MAX_COLUMNS = 18_278;
+/**
+ * Rows per sheet the calculation engine holds: the .xlsx sheet's own limit (1,048,576), set as
+ * HyperFormula's `maxRows` in HF_CONFIG (its default, 40,000, refused a sheet of 100,000 rows).
+ */
+export const ENGINE_MAX_ROWS = 1_048_576;
+/** Columns per sheet the calculation engine holds: the .xlsx limit (16,384, column XFD), HyperFormula's `maxColumns`. */
+export const ENGINE_MAX_COLUMNS = 16_384;
 
 export interface ReadLimits {
   maxUncompressedBytes: number;

@@ -132,6 +132,7 @@ export {
 } from './thermo/reactionThermo';
 export { pKw } from './thermo/water';
 export { standardPotentialAt } from './thermo/sweep';
+export { isFiniteColumn } from './thermo/sweep';
 export { type RowTemperature, rowE0V } from './table/potentialTable';
 export { halfCpModel } from './table/resolve';
 export {

@@ -12,13 +12,18 @@ export function isBlank(v: unknown): boolean {
   return v === null || v === undefined || (typeof v === 'string' && v.trim() === '');
 }
 
+function allRows(arg: readonly unknown[]): boolean {
+  for (let r = 0; r < arg.length; r++) if (!Array.isArray(arg[r])) return false;
+  return true;
+}
+
 /** An argument as a grid (a scalar becomes 1×1); null where omitted. */
 export function asGrid(arg: Arg): Grid | null {
   if (arg === undefined || arg === null) return null;
   if (Array.isArray(arg)) {
     if (arg.length === 0) return null;
     // keep the host's array where it is already a grid, so identity-based caches downstream hold
-    if (arg.every((row) => Array.isArray(row))) return arg;
+    if (allRows(arg)) return arg;
     return arg.map((row) => (Array.isArray(row) ? row : [row as Scalar]));
   }
   return [[arg]];

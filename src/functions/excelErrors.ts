@@ -11,6 +11,7 @@
  * on the way (a bug, never a user's mistake) and returns it as `#VALUE!` with a message asking
  * for a report, so that no input makes a function throw into Excel.
  */
+import { isFiniteColumn } from '../engine';
 import { isCellError, type Arg, type CellError, type ErrorCode, type Result, type Scalar } from './cellTypes';
 
 /** A cell as Excel receives it from a custom function. */
@@ -66,6 +67,8 @@ function isPlainCell(cell: unknown): boolean {
 
 /** A catalogue result as Excel wants it: same shape, error cells turned into Excel errors. */
 export function resultToExcel(result: Result): ExcelResult {
+  // a column the kernel reports all finite numbers goes over without a check of each cell
+  if (isFiniteColumn(result)) return result as ExcelResult;
   if (
     !Array.isArray(result) ||
     result.length === 0 ||
@@ -107,8 +110,18 @@ function scalarFromExcel(v: unknown): Scalar {
   return isExcelErrorValue(v) ? v.code : String(v);
 }
 
-function isScalar(v: unknown): boolean {
-  return v === null || typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean';
+/** True where every element is a row of scalar cells (numbers tested first: most cells are). One pass, no closures. */
+function allScalarRows(rows: readonly unknown[]): boolean {
+  for (let r = 0; r < rows.length; r++) {
+    const row = rows[r];
+    if (!Array.isArray(row)) return false;
+    for (let c = 0; c < row.length; c++) {
+      const v: unknown = row[c];
+      if (typeof v === 'number' || v === null || typeof v === 'string' || typeof v === 'boolean') continue;
+      return false;
+    }
+  }
+  return true;
 }
 
 /**
@@ -119,6 +132,6 @@ export function argFromExcel(v: unknown): Arg {
   if (v === undefined) return undefined;
   if (!Array.isArray(v)) return scalarFromExcel(v);
   const rows = v as unknown[];
-  if (rows.every((row) => Array.isArray(row) && row.every(isScalar))) return rows as Scalar[][];
+  if (allScalarRows(rows)) return rows as Scalar[][];
   return rows.map((row) => (Array.isArray(row) ? row.map(scalarFromExcel) : [scalarFromExcel(row)]));
 }

@@ -156,7 +156,7 @@ describe('read limits: exit code 2 and a message that says how to raise them', (
   test('the documented defaults', () => {
     expect(DEFAULT_MAX_UNCOMPRESSED_MB).toBe(200);
     expect(DEFAULT_MAX_CELLS).toBe(2_000_000);
-    expect(ENGINE_MAX_ROWS).toBe(40_000);
+    expect(ENGINE_MAX_ROWS).toBe(1_048_576); // the .xlsx sheet's row limit (common practice)
   });
 
   test('a workbook that unpacks past --max-size is refused before it is parsed', async () => {
@@ -185,12 +185,12 @@ describe('read limits: exit code 2 and a message that says how to raise them', (
   });
 
   test('a row past the engine sheet size is refused (no stack trace, exit code 2)', async () => {
-    const rows = `<row r="40001"><c r="A40001"><v>1</v></c></row>`;
+    const rows = `<row r="1048577"><c r="A1048577"><v>1</v></c></row>`;
     const f = put('deep.xlsx', await xlsxFromXml([{ name: 'Tall', rows }]));
     const r = await runMain(['recalc', f]);
     expect(r.code).toBe(2);
-    expect(r.stderr).toContain('sheet "Tall" has data down to row 40,001');
-    expect(r.stderr).toContain('40,000 rows');
+    expect(r.stderr).toContain('sheet "Tall" has data down to row 1,048,577');
+    expect(r.stderr).toContain('1,048,576 rows');
   });
 
   test('an array formula whose range covers the whole sheet is refused as damaged', async () => {

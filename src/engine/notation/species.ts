@@ -76,6 +76,17 @@ const UNIT_FACTORS: Record<string, { factor: number; kind: 'solute' | 'gas' | 'a
 };
 
 /** The inline-activity units the parser accepts, for messages and documentation. */
+/**
+ * The factor that turns an inline amount in `unit` into an activity (or a pressure in bar), as
+ * the parser applies it; undefined for a unit it does not accept.
+ *
+ * @example
+ * inlineUnitFactor('mM') // 0.001
+ */
+export function inlineUnitFactor(unit: string): number | undefined {
+  return Object.prototype.hasOwnProperty.call(UNIT_FACTORS, unit) ? UNIT_FACTORS[unit]!.factor : undefined;
+}
+
 export const INLINE_UNITS: readonly string[] = Object.keys(UNIT_FACTORS).filter((u) => u !== '');
 
 const elementCache = new ByteBoundedCache<ElementCounts>('elementCounts', {

@@ -152,10 +152,50 @@ export function sweepCases(
   return { values, errors: errors ?? NO_ERRORS };
 }
 
+/** Columns from {@link sweepToColumn} in which every cell is a finite number. */
+const FINITE_COLUMNS = new WeakSet<object>();
+/** Below this many cases a column is not marked: checking it again costs less than marking it. */
+const MARK_FROM_CASES = 32;
+
+/**
+ * True where `column` came from {@link sweepToColumn} with every cell a finite number (no
+ * error cell), so that a caller can hand it over without checking each cell again. False only
+ * means "not known": small columns are not marked.
+ *
+ * @example
+ * isFiniteColumn(sweepToColumn(binding, rows, 25, 'potential', (e) => e)) // true where no case failed
+ */
+export function isFiniteColumn(column: unknown): boolean {
+  return typeof column === 'object' && column !== null && FINITE_COLUMNS.has(column);
+}
+
+/** One case by the general path (any binding, any cell): the value, or the error as a cell. */
+function generalCase<E>(
+  b: Binding,
+  row: ArrayLike<unknown>,
+  oh: number,
+  potential: boolean,
+  e0: number,
+  s: number,
+  onError: (e: EngineError) => E,
+): number | E {
+  try {
+    const sum = weightedLogActivity(b, row) + oh;
+    const x = potential ? e0 - s * sum : b.form.n * sum;
+    return Number.isFinite(x)
+      ? x
+      : onError(new EngineError('range', 'The result is not a finite number; check the inputs.', 'values'));
+  } catch (e) {
+    if (!(e instanceof EngineError)) throw e;
+    return onError(e);
+  }
+}
+
 /**
  * The same computation as {@link sweepCases}, written straight into a column of
  * one-cell rows (the shape a spreadsheet spill takes), with each case's error
- * turned into a cell by `onError`. One pass, no intermediate array.
+ * turned into a cell by `onError`. One pass, no intermediate array; where every cell is a
+ * finite number the column is marked so ({@link isFiniteColumn}).
  *
  * @example
  * sweepToColumn(binding, [[0.01], [0.1]], 25, 'potential', (e) => e.message) // [[0.2778], [0.3074]]
@@ -180,18 +220,7 @@ export function sweepToColumn<E>(
   // With two value columns of opposite, equal weights (a cell or a redox couple, the common
   // case) Σ w·log10 a = w·log10(a1/a2): one logarithm per case instead of two.
   const pair = ratioPair(b);
-  const general = (row: ArrayLike<unknown>): number | E => {
-    try {
-      const sum = weightedLogActivity(b, row) + oh;
-      const x = potential ? e0 - s * sum : n * sum;
-      return Number.isFinite(x)
-        ? x
-        : onError(new EngineError('range', 'The result is not a finite number; check the inputs.', 'values'));
-    } catch (e) {
-      if (!(e instanceof EngineError)) throw e;
-      return onError(e);
-    }
-  };
+  let allFinite = true;
   if (pair) {
     const { c1, c2, w } = pair;
     const k = potential ? -s * w : n * w;
@@ -207,16 +236,41 @@ export function sweepToColumn<E>(
           continue;
         }
       }
-      out[i] = [general(row)];
+      const cell = generalCase(b, row, oh, potential, e0, s, onError);
+      if (typeof cell !== 'number') allFinite = false;
+      out[i] = [cell];
     }
-    return out;
+  } else {
+    for (let i = 0; i < caseCount; i++) {
+      const cell = generalCase(b, rows[i]!, oh, potential, e0, s, onError);
+      if (typeof cell !== 'number') allFinite = false;
+      out[i] = [cell];
+    }
   }
-  for (let i = 0; i < caseCount; i++) out[i] = [general(rows[i]!)];
+  if (allFinite && caseCount >= MARK_FROM_CASES) FINITE_COLUMNS.add(out);
   return out;
 }
 
+/** A binding's ratio pair, worked out once per binding. */
+const pairCache = new WeakMap<Binding, RatioPair | null>();
+
+interface RatioPair {
+  readonly c1: number;
+  readonly c2: number;
+  readonly w: number;
+}
+
 /** Two bound activity columns with weights w and −w (no pH column), or null. */
-function ratioPair(b: Binding): { c1: number; c2: number; w: number } | null {
+function ratioPair(b: Binding): RatioPair | null {
+  let p = pairCache.get(b);
+  if (p === undefined) {
+    p = computeRatioPair(b);
+    pairCache.set(b, p);
+  }
+  return p;
+}
+
+function computeRatioPair(b: Binding): RatioPair | null {
   const found: { c: number; w: number }[] = [];
   for (let i = 0; i < b.column.length; i++) {
     const c = b.column[i]!;

@@ -4,7 +4,7 @@
  * computation per case or over all cases, and return a grid. Nothing throws past here: a bad
  * case gives an error in its own cell, a bad call one error cell.
  */
-import { EngineError } from '../../engine';
+import { EngineError, isFiniteColumn } from '../../engine';
 import type { Arg, Result, ResultCell, Scalar } from '../cellTypes';
 import { asGrid } from '../args';
 import { at, caseColumn, caseCount, type CaseColumn } from '../broadcast';
@@ -235,7 +235,7 @@ export function propagateInputErrors(
   headers: readonly string[],
   valuesName: string,
 ): Result {
-  if (!rows || rows.length === 0) return result;
+  if (!rows || rows.length === 0 || isFiniteColumn(result)) return result;
   for (let r = 0; r < result.length; r++) {
     const row = result[r]!;
     let erring = false;

@@ -31,7 +31,11 @@ const ZN_E0 = 'E°(Zn2+/Zn) = −0.7618 V, OpenStax Chemistry 2e, Appendix L';
 
 type Quantity = 'potential' | 'log10Q';
 
-/** The last prepared single-reaction call: repeated calls skip compiling and binding. */
+/**
+ * The last prepared single-reaction call: repeated calls skip compiling and binding. `table`
+ * is a copy of the table argument's cells (hosts such as Excel pass a fresh array every call,
+ * so it is compared by content, never by identity).
+ */
 let lastPrepared: { reaction: string; species: Scalar[]; headers: string[]; table: Arg; binding: Binding } | null = null;
 
 /**
@@ -54,6 +58,26 @@ function scalarOf(a: Arg): Scalar | undefined {
   return a.length === 1 && Array.isArray(a[0]) && a[0].length === 1 ? (a[0][0] as Scalar) : undefined;
 }
 
+/** A table argument's cells, copied row by row (a scalar or an omitted table as it is). */
+function snapshotTable(t: Arg): Arg {
+  if (!Array.isArray(t)) return t;
+  return t.map((row) => (Array.isArray(row) ? row.slice() : row)) as Arg;
+}
+
+/** True where a table argument holds the same cells as a snapshot: same rows, same cell values. */
+function sameTable(snapshot: Arg, t: Arg): boolean {
+  if (snapshot === t) return true;
+  if (!Array.isArray(snapshot) || !Array.isArray(t) || snapshot.length !== t.length) return false;
+  for (let r = 0; r < t.length; r++) {
+    const a: unknown = snapshot[r];
+    const b: unknown = t[r];
+    if (a === b) continue;
+    if (!Array.isArray(a) || !Array.isArray(b) || a.length !== b.length) return false;
+    for (let c = 0; c < b.length; c++) if (a[c] !== b[c]) return false;
+  }
+  return true;
+}
+
 function sameSpeciesRow(a: Scalar[], species: Arg): boolean {
   if (!Array.isArray(species) || species.length !== 1) return false;
   const row = species[0];
@@ -73,7 +97,7 @@ function fastNernst(args: readonly Arg[], quantity: Quantity): Result | null {
   const table = quantity === 'potential' ? args[4] : args[3];
   const p = lastPrepared;
   if (!p || !Array.isArray(values) || values.length === 0) return null;
-  if (scalarOf(reaction) !== p.reaction || table !== p.table || !sameSpeciesRow(p.species, species)) return null;
+  if (scalarOf(reaction) !== p.reaction || !sameSpeciesRow(p.species, species) || !sameTable(p.table, table)) return null;
   const t = scalarOf(temp);
   if (t === undefined || (t !== null && typeof t !== 'number')) return null;
   const first = values[0];
@@ -106,10 +130,11 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
     const text = call.at(0).text('reaction');
     const b = bindSpecies(compiledReaction(text, cells), headers);
     const sg = asGrid(call.raw('species'));
-    const reaction = call.raw('reaction');
+    // the reaction as a string or as a 1×1 grid (Excel passes [[text]] for every argument)
+    const reaction = scalarOf(call.raw('reaction'));
     lastPrepared =
       sg && sg.length === 1 && typeof reaction === 'string' && text === reaction
-        ? { reaction, species: sg[0]!.slice(), headers, table: call.raw('table'), binding: b }
+        ? { reaction, species: sg[0]!.slice(), headers, table: snapshotTable(call.raw('table')), binding: b }
         : null;
     const temps = quantity === 'potential' ? call.column('temp_C') : null;
     if (!temps || temps.length === 1) return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
