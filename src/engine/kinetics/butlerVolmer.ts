@@ -146,6 +146,8 @@ const ETA_SEARCH_V = 50;
  * Precision: |Δη| below 1e-15 V·max(1, |η|) or the float64 step.
  *
  * @throws EngineError (`argument`) where i is at or beyond a limiting current
+ * @throws EngineError (`range`) where the overpotential would lie beyond ±50 V (e.g. α near 0,
+ *   or a subnormal i0 against a unit current); every loop is capped, so it always returns
  * @example
  * overpotentialV(1e-3, kineticParams(1e-3, 0.5)) // 0.024727 V = asinh(0.5)/(0.5·f)
  */
