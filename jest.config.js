@@ -3,8 +3,11 @@ module.exports = {
   testEnvironment: 'node',
   roots: ['<rootDir>/test'],
   testMatch: ['**/*.test.ts'],
+  // The benchmark harness (spawns the runner and LibreOffice, 70–215 s) is not part of the
+  // default run: `npm run test:bench` runs it.
+  testPathIgnorePatterns: ['/node_modules/', '<rootDir>/test/bench/'],
   transform: {
-    '^.+\\.ts$': ['ts-jest', { tsconfig: 'tsconfig.json', diagnostics: { warnOnly: false } }],
+    '^.+\\.ts$': ['ts-jest', { tsconfig: 'tsconfig.jest.json', diagnostics: { warnOnly: false } }],
   },
   moduleFileExtensions: ['ts', 'js', 'json'],
   // Generous: a busy shared machine runs the spawning suites several times slower.

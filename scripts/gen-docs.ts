@@ -9,6 +9,7 @@ import * as fs from 'fs';
 import * as path from 'path';
 import { generatedDocs } from './gen/docs';
 import { functionsSource } from './gen/functionsTs';
+import { resultUnitsSource } from './gen/resultUnits';
 
 const ROOT = path.resolve(__dirname, '..');
 const write = (rel: string, text: string) => {
@@ -21,6 +22,7 @@ const write = (rel: string, text: string) => {
 };
 
 write('src/functions/functions.ts', functionsSource());
+write('src/taskpane/resultUnits.ts', resultUnitsSource());
 const docs = generatedDocs();
 for (const [rel, text] of docs) write(rel, text);
 const pages = path.join(ROOT, 'docs', 'functions');

@@ -6,6 +6,7 @@
  * changing this module only: the page asks nothing but {@link loadReference}.
  */
 import { type ReferenceEntry, referenceEntries } from './reference';
+import { SPEC_RESULT_UNITS } from './resultUnits';
 
 /** A reference entry with what the page shows and searches beyond the metadata. */
 export interface ReferenceItem extends ReferenceEntry {
@@ -19,10 +20,12 @@ export interface ReferenceItem extends ReferenceEntry {
 export const REFERENCE_URL = 'functions.json';
 
 /**
- * Result units by function id, as each function's description states them (functions.json
- * carries no unit field). A function missing here shows "see the description".
+ * Result units by function id. functions.json carries no unit field, so every function gets
+ * its spec's result description (src/taskpane/resultUnits.ts, generated with `npm run docs`,
+ * so a new function never misses one); the wordings below, written for the pane, take
+ * precedence where they exist. An id in neither shows "see the description".
  */
-export const RESULT_UNITS: Readonly<Record<string, string>> = {
+const PANE_UNITS: Readonly<Record<string, string>> = {
   POTENTIAL: 'V (vs SHE for a half-reaction or couple; EMF for a cell or reaction)',
   STDPOTENTIAL: 'V vs SHE (EMF for a cell)',
   QUOTIENT: 'dimensionless',
@@ -49,6 +52,9 @@ export const RESULT_UNITS: Readonly<Record<string, string>> = {
   EPHCLASS: 'text: immunity, corrosion or passivation',
   EPHLINES: 'a table: species A, species B, pH1, E1 in V vs SHE, pH2, E2 in V vs SHE',
 };
+
+/** The unit of every function: the pane's wording, else the spec's result description. */
+export const RESULT_UNITS: Readonly<Record<string, string>> = { ...SPEC_RESULT_UNITS, ...PANE_UNITS };
 
 /** The result unit of a function id. */
 export function resultUnit(id: string): string {

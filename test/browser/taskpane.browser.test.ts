@@ -258,10 +258,16 @@ if (!haveChromium && underCI) {
     }
     fs.mkdirSync(OUT, { recursive: true });
     fs.mkdirSync(SHOTS, { recursive: true });
-    execFileSync('npx', ['webpack', '--mode', 'development', '--output-path', DIST_DEV], {
-      cwd: ROOT,
-      stdio: 'pipe',
-    });
+    // the development build only where it is older than the sources (a rerun reuses it)
+    const devBuilt = fs.existsSync(path.join(DIST_DEV, 'taskpane.js'))
+      ? fs.statSync(path.join(DIST_DEV, 'taskpane.js')).mtimeMs
+      : 0;
+    if (devBuilt < sources) {
+      execFileSync('npx', ['webpack', '--mode', 'development', '--output-path', DIST_DEV], {
+        cwd: ROOT,
+        stdio: 'pipe',
+      });
+    }
     server = await serveStatic(DIST);
     devServer = await serveStatic(DIST_DEV);
     userDataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'potentia-chromium-'));

@@ -142,6 +142,11 @@ const SAMPLES: Record<string, unknown[]> = {
   SOLVEFOR: [cell('2 H+ + 2 e- -> H2'), cell(-0.2), cell('pH'), cell('H2'), cell(1), null, null],
   JUNCTION: [[['HCl', 'KCl']], [[0.1, 0]], [[0, 0.1]], null],
   ISERESPONSE: [cell(0.2), cell(0.05916), [['K+', 'Na+']], [[1e-4, 0.1]], [[1e-3]]],
+  // thermodynamics from the species data
+  FORMATION: [[['H2O(l)'], ['Cu2+'], ['PbSO4(s)']], cell('H')],
+  ENTHALPY: [cell('H2 + 1/2 O2 -> H2O'), [[25], [60]], null],
+  ENTROPY: [cell('PbSO4(s) -> Pb2+ + SO4^2-'), null, null],
+  THERMONEUTRAL: [cell('H2O -> H2 + 1/2 O2'), [[25], [80]]],
 };
 
 let metadata: MetaFunction[];

@@ -7,6 +7,7 @@ import * as fs from 'fs';
 import * as path from 'path';
 import { generatedDocs } from '../../scripts/gen/docs';
 import { functionsSource } from '../../scripts/gen/functionsTs';
+import { resultUnitsSource } from '../../scripts/gen/resultUnits';
 import { CATALOGUE } from '../../src/functions/catalogue';
 
 const ROOT = path.resolve(__dirname, '..', '..');
@@ -18,6 +19,10 @@ const read = (rel: string) => {
 describe('generated files are fresh (run `npm run docs` where this fails)', () => {
   test('src/functions/functions.ts matches the specs', () => {
     expect(read('src/functions/functions.ts')).toBe(functionsSource());
+  });
+
+  test('src/taskpane/resultUnits.ts matches the specs', () => {
+    expect(read('src/taskpane/resultUnits.ts')).toBe(resultUnitsSource());
   });
 
   const docs = generatedDocs();

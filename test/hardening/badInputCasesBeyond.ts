@@ -44,7 +44,7 @@ function reactionClasses(fn: string, rest: readonly Arg[]): BadInputCase[] {
       fn,
       'reaction',
       'ambiguous couple',
-      ['MnO4-/MnO2', ...rest],
+      ['Br2/Br-', ...rest], // Br2(l) and Br2(aq); MnO4-/MnO2 is one couple in acid and base through Kw
       V(MATCHES_TWO),
       'lists the matching rows: write the half-reaction in full',
     ),

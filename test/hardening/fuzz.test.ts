@@ -78,6 +78,10 @@ const PER_FUNCTION_BUDGET = budget(0.6 / CATALOGUE.length);
  */
 const CAP_MS = Math.max(120_000, Math.ceil(TOTAL / 100_000) * 120_000);
 
+/** The longest one catalogue call may take (its share of the budget is ~0.1 s; generous for a busy machine). */
+const SLOW_CALL_MS = 2000;
+const slowest = { ms: 0, id: '', args: '' };
+
 const counts = { parser: 0, parserAccepted: 0, roundTrip: 0, catalogue: 0, catalogueErrors: 0 };
 const started = Date.now();
 
@@ -88,7 +92,8 @@ afterAll(() => {
       `${counts.roundTrip} round-tripped), ${counts.catalogue} catalogue calls over ${CATALOGUE.length} ` +
       `functions (${counts.catalogueErrors} returned at least one error cell); ` +
       `${counts.parser + counts.roundTrip + counts.catalogue} inputs in ${seconds} s ` +
-      `(POTENTIA_FUZZ_SECONDS=${BUDGET_MS / 1000}, POTENTIA_FUZZ_RUNS=${TOTAL}, POTENTIA_FUZZ_SEED=${SEED}).`,
+      `(POTENTIA_FUZZ_SECONDS=${BUDGET_MS / 1000}, POTENTIA_FUZZ_RUNS=${TOTAL}, POTENTIA_FUZZ_SEED=${SEED}); ` +
+      `slowest catalogue call ${slowest.ms.toFixed(1)} ms: ${slowest.id}(${slowest.args.slice(1, 200)}).`,
   );
 });
 
@@ -607,6 +612,7 @@ function fuzzFunction(f: (typeof CATALOGUE)[number], ordinaryOnly: boolean, exam
     fc.property(args, (xs) => {
       counts.catalogue++;
       let r: Result;
+      const t0 = performance.now();
       try {
         r = f.impl(...xs);
       } catch (e) {
@@ -615,6 +621,13 @@ function fuzzFunction(f: (typeof CATALOGUE)[number], ordinaryOnly: boolean, exam
             `for ${JSON.stringify(xs)}`,
         );
       }
+      const ms = performance.now() - t0;
+      if (ms > slowest.ms) Object.assign(slowest, { ms, id: f.id, args: JSON.stringify(xs) });
+      // fast-check stops at the time budget only between calls: one slow call would blow it
+      if (ms > SLOW_CALL_MS)
+        throw new Error(
+          `${f.id} took ${Math.round(ms)} ms for one call (over ${SLOW_CALL_MS} ms): ${JSON.stringify(xs)}`,
+        );
       if (checkResult(f.id, xs, r)) counts.catalogueErrors++;
     }),
     { seed, numRuns: PER_FUNCTION_RUNS, ...PER_FUNCTION_BUDGET, examples: examples.map((e) => [e]) },

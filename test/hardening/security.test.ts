@@ -28,7 +28,12 @@ const read = (f: string) => fs.readFileSync(path.join(DIST, f), 'utf8');
 const FORBIDDEN: readonly {
   what: string;
   pattern: RegExp;
-  allowed: readonly { pattern: RegExp; why: string }[];
+  allowed: readonly {
+    pattern: RegExp;
+    why: string;
+    /** a further condition on the match (with the whole bundle), where a pattern cannot say it */
+    check?: (m: RegExpMatchArray, text: string) => boolean;
+  }[];
 }[] = [
   {
     what: 'fetch(',
@@ -39,6 +44,18 @@ const FORBIDDEN: readonly {
         pattern:
           /\bfetch\s*\(\s*(["'`])functions\.json\1\s*,\s*\{\s*credentials\s*:\s*(["'])same-origin\2\s*\}\s*\)/g,
         why: "the task pane's same-origin read of functions.json",
+      },
+      {
+        // the same read through loadReference's injectable fetch (src/taskpane/referenceData.ts),
+        // as minified: `f(g=(a,b)=>fetch(a,b)){const r=await g(U,{credentials:"same-origin"})`,
+        // where U must be bound to "functions.json" in the bundle
+        pattern:
+          /([\w$]+)\s*=\s*\(\s*([\w$]+)\s*,\s*([\w$]+)\s*\)\s*=>\s*fetch\s*\(\s*\2\s*,\s*\3\s*\)\s*\)\s*\{\s*const\s+[\w$]+\s*=\s*await\s+\1\s*\(\s*([\w$]+)\s*,\s*\{\s*credentials\s*:\s*(["'])same-origin\5\s*\}\s*\)/g,
+        why: "the task pane's same-origin read of functions.json through an injectable fetch",
+        check: (m, text) => {
+          const url = m[4]!.replace(/\$/g, '\\$');
+          return new RegExp(`(?<![\\w$.])${url}\\s*=\\s*(["'\`])functions\\.json\\1`).test(text);
+        },
       },
     ],
   },
@@ -72,7 +89,8 @@ const FORBIDDEN: readonly {
 function findings(text: string, rule: (typeof FORBIDDEN)[number]): string[] {
   const allowedSpans: [number, number][] = [];
   for (const a of rule.allowed)
-    for (const m of text.matchAll(a.pattern)) allowedSpans.push([m.index, m.index + m[0].length]);
+    for (const m of text.matchAll(a.pattern))
+      if (!a.check || a.check(m, text)) allowedSpans.push([m.index, m.index + m[0].length]);
   const out: string[] = [];
   for (const m of text.matchAll(rule.pattern)) {
     const at = m.index;
@@ -92,9 +110,29 @@ describe('built bundles', () => {
 
   test('the one allowed fetch is the task pane reading functions.json, and nothing else is fetched', () => {
     const pane = read('taskpane.js');
-    const fetches = [...pane.matchAll(/\bfetch\s*\(([^)]*)\)/g)].map((m) => m[1]!.trim());
-    expect(fetches.every((args) => /^(["'`])functions\.json\1/.test(args))).toBe(true);
+    const fetchRule = FORBIDDEN.find((r) => r.what === 'fetch(')!;
+    // exactly one fetch call in the pane, and it is an allowed read of functions.json
+    expect([...pane.matchAll(fetchRule.pattern)]).toHaveLength(1);
+    expect(findings(pane, fetchRule)).toEqual([]);
     expect(read('functions.js')).not.toMatch(/\bfetch\s*\(/);
+  });
+
+  test.each([
+    [
+      'another address',
+      'async function j(e=(e,t)=>fetch(e,t)){const t=await e(K,{credentials:"same-origin"})}K="https://example.org/q";',
+    ],
+    [
+      'credentials sent cross-origin',
+      'async function j(e=(e,t)=>fetch(e,t)){const t=await e(K,{credentials:"include"})}K="functions.json";',
+    ],
+    [
+      'a forwarder that rewrites the address',
+      'async function j(e=(e,t)=>fetch(e+"x",t)){const t=await e(K,{credentials:"same-origin"})}K="functions.json";',
+    ],
+  ])('the fetch allowance does not cover %s', (_label, bad) => {
+    const fetchRule = FORBIDDEN.find((r) => r.what === 'fetch(')!;
+    expect(findings(bad, fetchRule)).toHaveLength(1);
   });
 
   test('the checks can fail: a bundle that calls out is caught', () => {

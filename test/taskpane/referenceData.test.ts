@@ -40,6 +40,12 @@ describe('referenceItems', () => {
     expect(resultUnit('potential')).toContain('V');
   });
 
+  test("a function without the pane's own wording shows its spec's result description", () => {
+    // OVERPOTENTIAL's spec: returns "Overpotential in V, one row per case"
+    expect(resultUnit('OVERPOTENTIAL')).toBe('Overpotential in V');
+    expect(resultUnit('THERMONEUTRAL')).toBe('V');
+  });
+
   test('malformed metadata is an error that says so', () => {
     expect(() => referenceItems({ nope: true })).toThrow('no "functions" list');
   });

@@ -84,21 +84,32 @@ function fOf(tempC: number): number {
   return FARADAY_C_PER_MOL / (GAS_CONSTANT_J_PER_MOL_K * (tempC + ZERO_CELSIUS_K));
 }
 
+/** The smallest normal float64 (2^−1022); below it a quotient loses digits. */
+const SMALLEST_NORMAL = 2.2250738585072014e-308;
+
 /** Current density at an overpotential, without argument checks. */
 function currentAt(p: KineticParams, f: number, eta: number): number {
   const a = p.alphaA * f * eta;
   const c = -p.alphaC * f * eta;
   // factor out the larger exponential; expm1 keeps the digits near η = 0
-  if (a >= c) {
-    const r = Math.exp(c - a);
-    const num = -p.i0 * Math.expm1(c - a);
-    const den = Math.exp(-a) + p.i0 / p.iLimA + (p.i0 * r) / p.iLimC;
-    return num / den;
-  }
-  const r = Math.exp(a - c);
-  const num = p.i0 * Math.expm1(a - c);
-  const den = Math.exp(-c) + (p.i0 * r) / p.iLimA + p.i0 / p.iLimC;
-  return num / den;
+  const hiExp = Math.max(a, c);
+  const loExp = Math.min(a, c);
+  const sign = a >= c ? 1 : -1;
+  const r = Math.exp(loExp - hiExp);
+  const mag = -p.i0 * Math.expm1(loExp - hiExp);
+  const den =
+    Math.exp(-hiExp) + (p.i0 * (a >= c ? 1 : r)) / p.iLimA + (p.i0 * (a >= c ? r : 1)) / p.iLimC;
+  const i = (sign * mag) / den;
+  if (den >= SMALLEST_NORMAL && Number.isFinite(i)) return i;
+  // e^(−max exponent) underflowed or went subnormal (few digits left: a tiny i0 at a
+  // large |η|): the same quotient in logs,
+  // ln den = logsumexp(−max, ln(i0/i_lim,a) + …, ln(i0/i_lim,c) + …)
+  const la = -hiExp;
+  const lb = Math.log(p.i0 / p.iLimA) + (a >= c ? 0 : loExp - hiExp);
+  const lc = Math.log(p.i0 / p.iLimC) + (a >= c ? loExp - hiExp : 0);
+  const m = Math.max(la, lb, lc);
+  const lnDen = m + Math.log(Math.exp(la - m) + Math.exp(lb - m) + Math.exp(lc - m));
+  return sign * Math.exp(Math.log(mag) - lnDen);
 }
 
 /**
@@ -135,6 +146,8 @@ const ETA_SEARCH_V = 50;
  * Precision: |Δη| below 1e-15 V·max(1, |η|) or the float64 step.
  *
  * @throws EngineError (`argument`) where i is at or beyond a limiting current
+ * @throws EngineError (`range`) where the overpotential would lie beyond ±50 V (e.g. α near 0,
+ *   or a subnormal i0 against a unit current); every loop is capped, so it always returns
  * @example
  * overpotentialV(1e-3, kineticParams(1e-3, 0.5)) // 0.024727 V = asinh(0.5)/(0.5·f)
  */
@@ -155,31 +168,40 @@ export function overpotentialV(i: number, p: KineticParams): number {
   const f = fOf(p.tempC);
   if (i === 0) return 0;
   if (p.alphaA === p.alphaC && p.iLimA === Infinity && p.iLimC === Infinity) {
-    return Math.asinh(i / (2 * p.i0)) / (p.alphaA * f);
+    return withinSearch(Math.asinh(i / (2 * p.i0)) / (p.alphaA * f), i);
   }
-  // bracket [lo, hi] with g(lo) < i < g(hi), g(0) = 0
+  // Bracket [lo, hi] with g(lo) < i < g(hi), g(0) = 0. The first guess comes from the
+  // one-sided Tafel form; it may underflow to 0 (a subnormal i) or overflow (α near 0),
+  // so it is clamped to [MIN_VALUE, ETA_SEARCH_V] and the doubling is capped: from
+  // MIN_VALUE (2^−1074) to 50 V takes at most 1080 doublings.
   let lo: number;
   let hi: number;
   if (i > 0) {
     lo = 0;
-    hi = p.iLimA === Infinity ? Math.log1p(i / p.i0) / (p.alphaA * f) : 1e-3;
-    while (currentAt(p, f, hi) < i) {
+    hi = clampGuess(p.iLimA === Infinity ? Math.log1p(i / p.i0) / (p.alphaA * f) : 1e-3);
+    for (let k = 0; !(currentAt(p, f, hi) >= i); k++) {
+      if (hi >= ETA_SEARCH_V || k >= MAX_BRACKET_STEPS) throw beyondSearch(i);
       lo = hi;
-      hi *= 2;
-      if (hi > ETA_SEARCH_V) throw beyondSearch(i);
+      hi = Math.min(hi * 2, ETA_SEARCH_V);
     }
   } else {
     hi = 0;
-    lo = p.iLimC === Infinity ? -Math.log1p(-i / p.i0) / (p.alphaC * f) : -1e-3;
-    while (currentAt(p, f, lo) > i) {
+    lo = -clampGuess(p.iLimC === Infinity ? Math.log1p(-i / p.i0) / (p.alphaC * f) : 1e-3);
+    for (let k = 0; !(currentAt(p, f, lo) <= i); k++) {
+      if (lo <= -ETA_SEARCH_V || k >= MAX_BRACKET_STEPS) throw beyondSearch(i);
       hi = lo;
-      lo *= 2;
-      if (lo < -ETA_SEARCH_V) throw beyondSearch(i);
+      lo = Math.max(lo * 2, -ETA_SEARCH_V);
     }
   }
   let eta = (lo + hi) / 2;
-  for (let k = 0; k < 200; k++) {
+  for (let k = 0; k < MAX_SOLVE_STEPS; k++) {
     const g = currentAt(p, f, eta) - i;
+    if (!Number.isFinite(g))
+      throw new EngineError(
+        'range',
+        `The current density near η = ${eta} V is beyond the number range; check i and i0.`,
+        'i',
+      );
     if (g === 0) return eta;
     if (g > 0) hi = eta;
     else lo = eta;
@@ -187,15 +209,40 @@ export function overpotentialV(i: number, p: KineticParams): number {
     const h = 1e-7;
     const d = (currentAt(p, f, eta + h) - currentAt(p, f, eta - h)) / (2 * h);
     let next = d > 0 && Number.isFinite(d) ? eta - g / d : NaN;
-    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
+    // every fourth step bisects, so the bracket at least halves per four steps even where
+    // Newton creeps (a rounded current far out on a Tafel branch)
+    if (!(next > lo && next < hi) || k % 4 === 3) next = (lo + hi) / 2;
     if (
       Math.abs(next - eta) <= 1e-15 * Math.max(1, Math.abs(eta)) ||
-      hi - lo <= 1e-15 * Math.max(1, Math.abs(eta))
+      hi - lo <= 1e-15 * Math.max(1, Math.abs(eta)) ||
+      next === lo ||
+      next === hi
     )
       return next;
     eta = next;
   }
-  return eta;
+  // Unreachable in float64 (100 bisections shrink a ≤ 50 V bracket below any float
+  // spacing), kept as a guard.
+  throw new EngineError(
+    'range',
+    `The overpotential for i = ${i} did not converge in ${MAX_SOLVE_STEPS} steps; check i, i0 and the limits.`,
+    'i',
+  );
+}
+
+/** Cap on the bracket doublings (MIN_VALUE · 2^1100 exceeds ETA_SEARCH_V). */
+const MAX_BRACKET_STEPS = 1100;
+/** Cap on the safeguarded Newton steps. */
+const MAX_SOLVE_STEPS = 400;
+
+function clampGuess(etaV: number): number {
+  if (!(etaV > 0)) return Number.MIN_VALUE; // 0 (underflow) or NaN
+  return Math.min(etaV, ETA_SEARCH_V); // Infinity or beyond the search
+}
+
+function withinSearch(etaV: number, i: number): number {
+  if (!(Math.abs(etaV) <= ETA_SEARCH_V)) throw beyondSearch(i);
+  return etaV;
 }
 
 function beyondSearch(i: number): EngineError {
