@@ -120,7 +120,7 @@ describe('eval', () => {
     const [e, slope] = r.stdout.trim().split('\n').map(Number);
     // E° = 65.49 kJ/mol / 2F (NBS 1982 ΔfG°(Cu2+), from memory; OpenStax prints +0.34); Nernst by hand, SI exact constants.
     expect(e).toBeCloseTo(nernst(65.49e3 / (2 * 96485.33212331001), 2, 100, 25), 12);
-    // 59.15935 mV (REFERENCE-DATA, derived from the SI exact constants).
+    // 59.15935 mV (derived from the SI exact constants).
     expect(slope).toBeCloseTo(0.05915935, 8);
   });
 

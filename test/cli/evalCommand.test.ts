@@ -31,7 +31,7 @@ describe('potentia eval: values against published data', () => {
   });
 
   test('the Nernst slope matches the derived values at 0–100 °C', () => {
-    // REFERENCE-DATA "Nernst slope RT ln10/F (derived)" from the SI exact constants, in mV.
+    // Nernst slope RT ln10/F derived from the SI exact constants, in mV.
     const table: [number, number][] = [
       [0, 54.1988],
       [10, 56.183],

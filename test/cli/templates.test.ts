@@ -279,7 +279,7 @@ describe('electrode calibration template', () => {
         -1000 * (catalogue('NERNSTSLOPE', t, undefined)[0]?.[0] as number),
       );
     }
-    // 25 °C: 59.15935 mV per decade (REFERENCE-DATA, derived from the SI exact constants).
+    // 25 °C: 59.15935 mV per decade (derived from the SI exact constants).
     const at25 = [0, 1, 2]
       .map((k) => CAL_TEMPLATE.summaryFirstRow + k)
       .find((r) => num(ws, `${s.temp}${r}`) === 25);

@@ -54,7 +54,7 @@ describe('EMF of concentration cells at 25 °C', () => {
     expectNear(ccell(couple, species, left, right), expected, 1e-15);
   });
 
-  test('the Ag+/Ag cell gives 0.05916 V per decade (REFERENCE-DATA slope 59.15935 mV, derived)', () => {
+  test('the Ag+/Ag cell gives 0.05916 V per decade (slope 59.15935 mV, derived from the SI exact constants)', () => {
     expectNear(ccell('Ag+/Ag', null, 0.01, 0.1), 0.05916, 5e-6);
   });
 
@@ -98,7 +98,7 @@ describe('the same cell written as a diagram agrees with CONCCELL', () => {
 });
 
 describe('bad input', () => {
-  test('a cell is not an electrode: argument error (PRODUCT.md CONCCELL)', () => {
+  test('a cell is not an electrode: argument error (docs/functions/CONCCELL.md)', () => {
     const err = engineErrorOf(() =>
       planConcentrationCell(compiledReaction('Zn | Zn2+ || Cu2+ | Cu', null), null),
     );
@@ -112,13 +112,13 @@ describe('bad input', () => {
     expect(err.message).toContain('H2');
   });
 
-  test('a named species that is not in the couple: argument error (PRODUCT.md Errors)', () => {
+  test('a named species that is not in the couple: argument error (docs/design.md, Errors)', () => {
     const err = engineErrorOf(() => planConcentrationCell(compiledReaction('Ag+/Ag', null), 'Cu2+'));
     expect(err.kind).toBe('argument');
     expect(err.message).toContain('Cu2+');
   });
 
-  test('a named species that is not a valid formula: parse error (PRODUCT.md Notation)', () => {
+  test('a named species that is not a valid formula: parse error (docs/notation.md)', () => {
     expect(engineErrorOf(() => planConcentrationCell(compiledReaction('Ag+/Ag', null), '3xx')).kind).toBe(
       'parse',
     );
@@ -140,7 +140,7 @@ describe('bad input', () => {
     },
   );
 
-  test('a gas gives "partial pressure" in its message (PRODUCT.md Conventions: gases in bar)', () => {
+  test('a gas gives "partial pressure" in its message (docs/design.md, Conventions: gases in bar)', () => {
     expect(engineErrorOf(() => ccell('H+/H2', 'H2', 0, 1)).message).toContain('pressure');
   });
 
@@ -148,7 +148,7 @@ describe('bad input', () => {
     expect(engineErrorOf(() => ccell('Ag+/Ag', null, 0.01, 0.1, tC)).kind).toBe('argument');
   });
 
-  test('extreme but valid activities give a finite EMF (PRODUCT.md Errors: no NaN or ±Infinity)', () => {
+  test('extreme but valid activities give a finite EMF (docs/design.md, Errors: no NaN or ±Infinity)', () => {
     for (const [l, r] of [
       [1e-300, 1e300],
       [1e300, 1e-300],

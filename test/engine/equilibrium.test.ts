@@ -94,7 +94,7 @@ describe('log10 K = nFE°/(RT ln10)', () => {
     },
   );
 
-  test('the default temperature is 25 °C (PRODUCT.md Conventions)', () => {
+  test('the default temperature is 25 °C (docs/design.md, Conventions)', () => {
     expect(log10EquilibriumConstant(0.5, 2)).toBe(log10EquilibriumConstant(0.5, 2, 25));
   });
 
@@ -126,7 +126,7 @@ describe('K beyond the float64 range', () => {
     [-20, 2],
     [10, 4],
     [-12, 3],
-  ])('E° = %d V, n = %d: range error whose message gives K in decimal (PRODUCT.md Errors: #NUM!)', (e, n) => {
+  ])('E° = %d V, n = %d: range error whose message gives K in decimal (docs/design.md, Errors: #NUM!)', (e, n) => {
     const logK = (n * e) / S25; // derived from the SI exact constants
     const err = engineErrorOf(() => equilibriumConstantFromLog10(log10EquilibriumConstant(e, n, 25)));
     expect(err.kind).toBe('range');
@@ -159,7 +159,7 @@ describe('K beyond the float64 range', () => {
   // Regression (fixed): at log10 K = MAX_LOG10_K exactly (308.25471555991675, reached e.g. from E° =
   // 18.236148509792226 V with n = 1 at 25 °C) the range check passes but Math.pow(10, log10K)
   // rounds up to Infinity; expected a finite K (≤ 1.7976931348623157e308) or a 'range' error.
-  test('log K = MAX_LOG10_K gives a finite K or a range error (PRODUCT.md Errors: no ±Infinity)', () => {
+  test('log K = MAX_LOG10_K gives a finite K or a range error (docs/design.md, Errors: no ±Infinity)', () => {
     let k: number;
     try {
       k = equilibriumConstantFromLog10(MAX_LOG10_K);
@@ -171,8 +171,8 @@ describe('K beyond the float64 range', () => {
   });
 
   // Regression (fixed): equilibriumConstantFromLog10(NaN) returns NaN (NaN fails both range comparisons, so
-  // Math.pow(10, NaN) is returned); expected an EngineError. PRODUCT.md: no NaN, ever.
-  test('log K = NaN is an error, not a NaN K (PRODUCT.md Errors)', () => {
+  // Math.pow(10, NaN) is returned); expected an EngineError. docs/design.md: no NaN, ever.
+  test('log K = NaN is an error, not a NaN K (docs/design.md, Errors)', () => {
     expect(engineErrorOf(() => equilibriumConstantFromLog10(Number.NaN))).toBeInstanceOf(EngineError);
   });
 });
@@ -244,7 +244,7 @@ describe('combining steps: E° = Σ nᵢEᵢ / Σ nᵢ', () => {
     expectNear(gibbsEnergyKJ(chain, 3), gibbsEnergyKJ(0.771, 1) + gibbsEnergyKJ(-0.447, 2), 1e-9);
   });
 
-  test('bad steps: shape mismatch, empty list, n not a positive whole number (PRODUCT.md Errors)', () => {
+  test('bad steps: shape mismatch, empty list, n not a positive whole number (docs/design.md, Errors)', () => {
     expect(engineErrorOf(() => combineStepPotentialsV([0.771, -0.447], [1])).kind).toBe('shape');
     expect(engineErrorOf(() => combineStepPotentialsV([], [])).kind).toBe('argument');
     expect(engineErrorOf(() => combineStepPotentialsV([0.771, -0.447], [1, 0])).kind).toBe('argument');
@@ -286,7 +286,7 @@ describe('electron counts', () => {
 
 describe('bad potentials and temperatures', () => {
   test.each([Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY])(
-    'E = %p: argument error from log10EquilibriumConstant and gibbsEnergyKJ (PRODUCT.md Errors)',
+    'E = %p: argument error from log10EquilibriumConstant and gibbsEnergyKJ (docs/design.md, Errors)',
     (e) => {
       expect(engineErrorOf(() => log10EquilibriumConstant(e, 1)).kind).toBe('argument');
       expect(engineErrorOf(() => gibbsEnergyKJ(e, 1)).kind).toBe('argument');
@@ -306,7 +306,7 @@ describe('bad potentials and temperatures', () => {
   // = Infinity (R·T overflows before the division by F), log10EquilibriumConstant(1e308, 2)
   // = Infinity, gibbsEnergyKJ(1e308, 2) = −Infinity, combineStepPotentialsV([1e308, 1e308],
   // [1, 1]) = Infinity. The worksheet layer turns these into #NUM!, but the engine itself
-  // should give a finite number or an EngineError ('range'). PRODUCT.md: no NaN or ±Infinity.
+  // should give a finite number or an EngineError ('range'). docs/design.md: no NaN or ±Infinity.
   test.each([
     ['nernstSlopeV(1e308 °C)', () => nernstSlopeV(1e308)],
     ['log10EquilibriumConstant(1e308 V, 2)', () => log10EquilibriumConstant(1e308, 2)],

@@ -52,7 +52,7 @@ function e0(text: string, tempC = 25): number {
 }
 
 describe('Nernst slope RT ln10 / F', () => {
-  // REFERENCE-DATA "Constants": derived from the SI exact constants; printed to 4 decimals in mV
+  // Derived from the SI exact constants; printed to 4 decimals in mV
   // (25 °C to 5), so the tolerance is half a unit of the last printed digit.
   test.each([
     [0, 54.1988, 5e-5],
@@ -156,7 +156,7 @@ describe('electrode potentials at non-unit activities (25 °C)', () => {
     );
   });
 
-  test('a hydrogen electrode at 1 atm lies 0.169 mV below one at 1 bar (REFERENCE-DATA, derived)', () => {
+  test('a hydrogen electrode at 1 atm lies 0.169 mV below one at 1 bar (derived from the SI exact constants)', () => {
     // 1 atm = 1.01325 bar (exact): E = −(S/2)·log10 1.01325
     const expected = -(S25 / 2) * Math.log10(1.01325);
     expectNear(expected * 1000, -0.169, 5e-4);
@@ -228,7 +228,7 @@ describe('at Q = 1, E = E°', () => {
     ['Zn | Zn2+ || Cu2+ | Cu', ['Zn2+', 'Cu2+'], [0.05, 0.05], E_DANIELL],
     ['MnO4-/Mn2+', ['MnO4-', 'Mn2+', 'pH'], [0.02, 0.02, 0], E_MNO4],
     ['Cl2/Cl-', ['Cl2', 'Cl-'], [0.25, 0.5], E_CL2], // Q = a(Cl-)²/p(Cl2) = 1
-    ['Cu2+/Cu', [], [], E_CU], // no species at all: standard state (PRODUCT.md Conventions)
+    ['Cu2+/Cu', [], [], E_CU], // no species at all: standard state (docs/design.md, Conventions)
     ['Cr2O7^2-/Cr3+', [], [], E_CR2O7], // no species at all: standard state
   ])(
     '%s with %j = %j: E = E° = %d V (OpenStax Chemistry 2e, Appendix L, seen)',
@@ -308,7 +308,7 @@ describe('E°(T) from the species data (Gibbs–Helmholtz, constant ΔCp°)', ()
 });
 
 describe('sweeps agree with single cases', () => {
-  test('Cu2+/Cu over activities and a bad case: values where good, an error in its own case (PRODUCT.md Sweeps; derived)', () => {
+  test('Cu2+/Cu over activities and a bad case: values where good, an error in its own case (docs/design.md, Sweeps; derived)', () => {
     const b = bindSpecies(compiledReaction('Cu2+/Cu', null), ['Cu2+']);
     const rows = [[0.01], [0], [0.1], [1]];
     const res = sweepCases(b, rows, 25, 'potential');
@@ -405,18 +405,18 @@ describe('monotonicity', () => {
 });
 
 describe('species headers', () => {
-  test('extra species that the reaction does not use are ignored (PRODUCT.md Conventions)', () => {
+  test('extra species that the reaction does not use are ignored (docs/design.md, Conventions)', () => {
     const plain = emf('Cu2+/Cu', ['Cu2+'], [0.01]);
     expectNear(emf('Cu2+/Cu', ['Na+', 'Cu2+', 'Cl-', 'SO4^2-'], [5, 0.01, 3, 0.2]), plain, 1e-15);
     expectNear(plain, E_CU - S25, 1e-12); // OSX App. L (seen)
   });
 
-  test('a pure solid may still be given an activity (an alloy) (PRODUCT.md Conventions; derived)', () => {
+  test('a pure solid may still be given an activity (an alloy) (docs/design.md, Conventions; derived)', () => {
     // Cu2+ + 2e- -> Cu with a(Cu) = 0.5: E = E° − (S/2)·log10(0.5/1)
     expectNear(emf('Cu2+/Cu', ['Cu2+', 'Cu'], [1, 0.5]), E_CU - (S25 / 2) * Math.log10(0.5), 1e-12);
   });
 
-  test('left:/right: qualify a species that stands in both half-cells (PRODUCT.md Conventions; derived)', () => {
+  test('left:/right: qualify a species that stands in both half-cells (docs/design.md, Conventions; derived)', () => {
     // H2 | H+ (pH 1) || H+ (pH 3) | H2: E = E(right) − E(left) = −S·(3 − 1)
     expectNear(
       emf('Pt | H2 | H+ || H+ | H2 | Pt', ['left:pH', 'right:pH', 'H2'], [1, 3, 1]),
@@ -436,13 +436,13 @@ describe('bad input', () => {
     ['Cl2/Cl-', ['Cl2', 'Cl-'], [0, 1], 'Cl2'],
     ['Cl2/Cl-', ['Cl2', 'Cl-'], [-0.2, 1], 'Cl2'],
     ['Zn | Zn2+ || Cu2+ | Cu', ['Zn2+', 'Cu2+'], [0.1, 0], 'Cu2+'],
-  ])('%s with %j = %p: argument error naming %s (PRODUCT.md Errors)', (text, headers, values, name) => {
+  ])('%s with %j = %p: argument error naming %s (docs/design.md, Errors)', (text, headers, values, name) => {
     const err = engineErrorOf(() => emf(text, headers, values));
     expect(err.kind).toBe<EngineErrorKind>('argument');
     expect(err.message).toContain(name);
   });
 
-  test('a non-positive gas pressure says it is a pressure (PRODUCT.md Errors)', () => {
+  test('a non-positive gas pressure says it is a pressure (docs/design.md, Errors)', () => {
     expect(engineErrorOf(() => emf('Cl2/Cl-', ['Cl2', 'Cl-'], [0, 1])).message).toMatch(/pressure/);
   });
 
@@ -466,7 +466,7 @@ describe('bad input', () => {
     ['Cl2/Cl-', ['Cl-'], 'partial pressure'],
     ['Zn | Zn2+ || Cu2+ | Cu', ['Cu2+'], 'Zn2+'],
   ])(
-    '%s with species %j: a needed species without a value is an argument error mentioning %s (PRODUCT.md Conventions)',
+    '%s with species %j: a needed species without a value is an argument error mentioning %s (docs/design.md, Conventions)',
     (text, headers, hint) => {
       const err = engineErrorOf(() => bindSpecies(compiledReaction(text, null), headers));
       expect(err.kind).toBe('argument');
@@ -475,7 +475,7 @@ describe('bad input', () => {
   );
 
   test.each([['3+xyz'], ['Qq'], [''], ['Cu2+ +']])(
-    'species header %j that is not a valid formula: parse error (PRODUCT.md Notation)',
+    'species header %j that is not a valid formula: parse error (docs/notation.md)',
     (header) => {
       expect(engineErrorOf(() => bindSpecies(compiledReaction('Cu2+/Cu', null), ['Cu2+', header])).kind).toBe(
         'parse',
@@ -483,7 +483,7 @@ describe('bad input', () => {
     },
   );
 
-  test('both H+ and pH given: argument error (PRODUCT.md Conventions)', () => {
+  test('both H+ and pH given: argument error (docs/design.md, Conventions)', () => {
     const err = engineErrorOf(() =>
       bindSpecies(compiledReaction('MnO4-/Mn2+', null), ['MnO4-', 'Mn2+', 'H+', 'pH']),
     );
@@ -491,7 +491,7 @@ describe('bad input', () => {
     expect(err.message).toMatch(/H\+.*pH/);
   });
 
-  test('a species given twice: argument error (PRODUCT.md Errors)', () => {
+  test('a species given twice: argument error (docs/design.md, Errors)', () => {
     expect(engineErrorOf(() => bindSpecies(compiledReaction('Cu2+/Cu', null), ['Cu2+', 'Cu2+'])).kind).toBe(
       'argument',
     );
@@ -503,7 +503,7 @@ describe('bad input', () => {
     expectNear(potentialV(b, [1, 1, -1], 25), E_MNO4 + (8 / 5) * S25, 1e-12); // OSX App. L (seen)
   });
 
-  test('extreme but valid activities give finite potentials (PRODUCT.md Errors: no NaN or ±Infinity)', () => {
+  test('extreme but valid activities give finite potentials (docs/design.md, Errors: no NaN or ±Infinity)', () => {
     const b = bindSpecies(compiledReaction('Cr2O7^2-/Cr3+', null), ['Cr2O7^2-', 'Cr3+', 'pH']);
     for (const a of [1e-300, 1e-200, 1, 1e200, 1e300])
       for (const pH of [-5, 0, 14, 300])

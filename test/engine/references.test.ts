@@ -55,7 +55,7 @@ describe('built-in reference potentials at 25 °C', () => {
   });
 
   it('marks every recalled value "from memory" in its source', () => {
-    // REFERENCE-DATA: Hg/Hg2SO4 sat. K2SO4, Hg/HgO 1 M NaOH, SCE and Ag/AgCl sat. dE/dT are memory
+    // From memory: Hg/Hg2SO4 sat. K2SO4, Hg/HgO 1 M NaOH, SCE and Ag/AgCl sat. dE/dT
     for (const id of ['Hg/Hg2SO4-sat-K2SO4', 'Hg/HgO-1M-NaOH', 'SCE', 'Ag/AgCl-sat-KCl']) {
       expect(findReference(id).source).toMatch(/from memory/);
     }

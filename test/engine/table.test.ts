@@ -31,7 +31,7 @@ const e0 = (text: string, table: PotentialTable): number =>
 // ---------------------------------------------------------------------------------------
 
 describe('built-in table', () => {
-  test('holds at least 60 couples (PRODUCT.md, The potentials table)', () => {
+  test('holds at least 60 couples (docs/design.md, The potentials table)', () => {
     expect(BUILTIN_POTENTIALS.length).toBeGreaterThanOrEqual(60);
     expect(builtinTable().length).toBe(BUILTIN_POTENTIALS.length);
   });

@@ -143,7 +143,7 @@ describe('concentration cells (IUPAC sign convention; derived)', () => {
   });
 });
 
-describe('bad values are EngineErrors, never NaN or ±Infinity (PRODUCT.md Reliability)', () => {
+describe('bad values are EngineErrors, never NaN or ±Infinity (docs/design.md, Reliability)', () => {
   /** any double, including NaN, ±Infinity, ±0, subnormals */
   const anyDouble = fc.double();
 
@@ -223,7 +223,7 @@ describe('bad values are EngineErrors, never NaN or ±Infinity (PRODUCT.md Relia
   // an EngineError: Cr2O7^2-/Cr3+ at pH 1e308 → E = −Infinity (Σ w·log10 a overflows:
   // 14/6 × 1e308); Cu2+/Cu at 1e308 °C → E = −Infinity (R·T overflows in the slope); the same
   // through sweepCases and concentrationCellEmfV. The worksheet layer maps them to #NUM!, but
-  // the engine's own contract (PRODUCT.md: no NaN or ±Infinity) is broken. Expected: a finite
+  // the engine's own contract (docs/design.md: no NaN or ±Infinity) is broken. Expected: a finite
   // number or an EngineError ('argument' or 'range').
   test.each([
     [

@@ -1,6 +1,6 @@
 /**
  * Fuzzing: random and mutated strings through the parser, and random arguments through every
- * function of the catalogue. Contract (PRODUCT.md, "Reliability and safety" and "Errors"): no
+ * function of the catalogue. Contract (docs/design.md, "Errors"): no
  * uncaught exception, no NaN or ±Infinity in any result cell, and every failure is an
  * EngineError (engine) or a CellError with a code and a non-empty message (catalogue).
  *
