@@ -13,7 +13,7 @@ export const TEMPLATE_DIR = path.join(packageRoot(), 'assets', 'templates');
 export const POTENTIALS_SHEET = 'Potentials';
 export const POTENTIALS_RANGE = `${POTENTIALS_SHEET}!$A$2:$D$40`;
 
-/** Cathodic-protection check sheet (fictional Harrowgate Water Board). */
+/** Cathodic-protection check sheet (invented Tessivar Water Board). */
 export const CP_TEMPLATE = {
   file: 'cathodic-protection-check.xlsx',
   sheet: 'CP check',
@@ -45,7 +45,7 @@ export const CP_TEMPLATE = {
   cautionsRow: 30,
 } as const;
 
-/** Cell-voltage sweep over composition and temperature (fictional Brackenfield Cell Works). */
+/** Cell-voltage sweep over composition and temperature (invented Velkamoor Cell Works). */
 export const SWEEP_TEMPLATE = {
   file: 'cell-voltage-sweep.xlsx',
   sheet: 'Sweep',
@@ -67,7 +67,7 @@ export const SWEEP_TEMPLATE = {
   cautionsRow: 23,
 } as const;
 
-/** Electrode calibration sheet (fictional Lowmere Analytical laboratory). */
+/** Electrode calibration sheet (invented Drennavik Analytical laboratory). */
 export const CAL_TEMPLATE = {
   file: 'electrode-calibration.xlsx',
   sheet: 'Calibration',
