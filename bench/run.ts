@@ -7,7 +7,7 @@
  *                                 LibreOffice at that size (slow: minutes)
  *   npm run bench -- --tiny       every benchmark at a tiny size, 2 runs (a smoke test of the
  *                                 harness and its checks; the figures mean nothing)
- *   npm run bench -- --only=call,sweep,diagram,first,cli,parse,recalc,e2e
+ *   npm run bench -- --only=call,sweep,diagram,families,first,cli,parse,recalc,e2e
  *                                 only those benchmarks (for profiling one path)
  *
  * Every figure is {min, median, runs} over its timed runs. Every output of every timed run is
@@ -21,6 +21,7 @@ import * as zlib from 'zlib';
 import * as engine from '../src/engine';
 import { benchExcelCalls, benchInlineDiagram, benchSweep } from './excelBench';
 import { benchCliEval, benchFirstCall } from './firstCall';
+import { benchEphMap, benchPitzer } from './familiesBench';
 import {
   benchEndToEnd,
   benchInProcess,
@@ -57,6 +58,9 @@ interface Sizes {
   e2eRuns: number;
   bigRows: number;
   bigRuns: number;
+  pitzerCases: number;
+  ephSide: number;
+  familyRuns: number;
 }
 
 const NORMAL: Sizes = {
@@ -73,6 +77,9 @@ const NORMAL: Sizes = {
   e2eRuns: 5,
   bigRows: 100_000,
   bigRuns: 3,
+  pitzerCases: 100_000,
+  ephSide: 200,
+  familyRuns: 5,
 };
 
 const TINY: Sizes = {
@@ -89,6 +96,9 @@ const TINY: Sizes = {
   e2eRuns: 1,
   bigRows: 100,
   bigRuns: 1,
+  pitzerCases: 100,
+  ephSide: 10,
+  familyRuns: 2,
 };
 
 type Json = Record<string, unknown>;
@@ -192,6 +202,19 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
     );
     out.diagram_inline_us = rounded(d.us, 2);
     out.diagram_inline_table_us = rounded(d.tableUs, 2);
+  }
+
+  if (wants('families')) {
+    const p = benchPitzer(sz.pitzerCases, sz.familyRuns);
+    const m = benchEphMap(sz.ephSide, sz.familyRuns);
+    log(
+      `families: one spilled MEANACTCOEF("NaCl", m) over ${sz.pitzerCases.toLocaleString('en-US')} molalities (Pitzer): ${mm(p, 1)} ms; ` +
+        `one spilled PREDOMINANT("Fe", E, pH) over a ${sz.ephSide} × ${sz.ephSide} map: ${mm(m, 1)} ms`,
+    );
+    out.pitzer_100k_ms = rounded(p, 1);
+    out.pitzer_cases = sz.pitzerCases;
+    out.eph_map_ms = rounded(m, 1);
+    out.eph_map_side = sz.ephSide;
   }
 
   if (wants('first')) {

@@ -103,6 +103,10 @@ describe('npm run bench -- --tiny --full', () => {
     for (const key of ['call_ratio_excel_table', 'sweep_ratio', 'recalc_ratio', 'recalc_eval_ratio'])
       expectFigure(figures[key], 2, 'ratio');
     expectFigure(figures.cli_eval_ms, 1);
+    expectFigure(figures.pitzer_100k_ms, 2);
+    expectFigure(figures.eph_map_ms, 2);
+    expect(figures.pitzer_cases).toBe(100);
+    expect(figures.eph_map_side).toBe(10);
   });
 
   it('reports peak memory of the end-to-end runs where GNU time is installed', () => {
@@ -127,6 +131,10 @@ describe('npm run bench -- --tiny --full', () => {
     expect(counts.call_excel_table).toBe(800);
     // 100 cases × 4 runs × (spill in two pairs + hand loop + Float64Array loop in two pairs)
     expect(counts.sweep).toBe(2000);
+    // 100 molalities × (2 warm-up + 2 timed runs), checked against the Pitzer equation written out
+    expect(counts.pitzer).toBe(400);
+    // (10 × 10 map + 5 Atlas points) × 4 runs
+    expect(counts.eph_map).toBe(420);
     // the engine kernel alone, 100 cases × 4 runs
     expect(counts.sweep_kernel).toBe(400);
     // 20 calls × 4 runs, each variant
