@@ -6,15 +6,13 @@
  */
 import { EngineError } from '../errors';
 import { countElements } from '../notation/formula';
-import {
-  SALT_ATOMIC_WEIGHTS,
-  SOLUTION_DENSITIES,
-  type SolutionDensityTable,
-} from '../data/solutionDensities';
+import { SOLUTION_DENSITIES, type SolutionDensityTable } from '../data/solutionDensities';
+import { ATOMIC_WEIGHTS } from '../data/atomicWeights';
 import { parseSalt } from './salt';
 
 /**
- * Molar mass of a salt, g/mol, from its formula and the held atomic weights.
+ * Molar mass of a salt, g/mol, from its formula and the IUPAC/CIAAW standard atomic weights
+ * (src/engine/data/atomicWeights.ts, the one atomic-weight table of the engine).
  *
  * @param saltText a salt formula ("NaCl", "CuSO4")
  * @throws EngineError `parse`/`argument` for text that is not a salt
@@ -25,7 +23,7 @@ export function saltMolarMass(saltText: string): number {
   const ions = parseSalt(saltText);
   let sum = 0;
   for (const [el, n] of countElements(ions.formula)) {
-    const w = SALT_ATOMIC_WEIGHTS[el];
+    const w = ATOMIC_WEIGHTS[el];
     if (w === undefined) {
       throw new EngineError('argument', `no atomic weight is held for ${el}.`, 'salt');
     }
