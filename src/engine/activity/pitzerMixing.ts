@@ -387,48 +387,43 @@ export function pitzerMixture(
       for (const c of cations) s += c.m * psi((anions[j] as Ion).label, (anions[k] as Ion).label, c.label);
       osm += mj * mk * s;
     }
+  // ln γ of one ion (Harvie, Møller & Weare 1984, eqs. 3 and 4): the cation and anion
+  // equations are mirrors, so one function serves both with the roles of the ions swapped.
+  const lnGamma = (
+    self: Ion,
+    selfIndex: number,
+    own: readonly Ion[],
+    other: readonly Ion[],
+    phiOwn: Float64Array,
+    pairIndex: (o: number) => number,
+  ): number => {
+    const n = own.length;
+    let v = self.z * self.z * F + self.z * CC;
+    for (let o = 0; o < other.length; o++) {
+      const ij = pairIndex(o);
+      v += (other[o] as Ion).m * (2 * (B[ij] as number) + Z * (C[ij] as number));
+    }
+    for (let k = 0; k < n; k++) {
+      if (k === selfIndex) continue;
+      const c = own[k] as Ion;
+      let sum = 2 * (phiOwn[selfIndex * n + k] as number);
+      for (const a of other) sum += a.m * psi(self.label, c.label, a.label);
+      v += c.m * sum;
+    }
+    for (let j = 0; j < other.length; j++)
+      for (let k = j + 1; k < other.length; k++)
+        v +=
+          (other[j] as Ion).m *
+          (other[k] as Ion).m *
+          psi((other[j] as Ion).label, (other[k] as Ion).label, self.label);
+    return v;
+  };
   const lnC = new Float64Array(nc);
-  for (let i = 0; i < nc; i++) {
-    const M = cations[i] as Ion;
-    let v = M.z * M.z * F + M.z * CC;
-    for (let j = 0; j < na; j++)
-      v += (anions[j] as Ion).m * (2 * (B[i * na + j] as number) + Z * (C[i * na + j] as number));
-    for (let k = 0; k < nc; k++) {
-      if (k === i) continue;
-      const c = cations[k] as Ion;
-      let s = 2 * (phiC[i * nc + k] as number);
-      for (const a of anions) s += a.m * psi(M.label, c.label, a.label);
-      v += c.m * s;
-    }
-    for (let j = 0; j < na; j++)
-      for (let k = j + 1; k < na; k++)
-        v +=
-          (anions[j] as Ion).m *
-          (anions[k] as Ion).m *
-          psi((anions[j] as Ion).label, (anions[k] as Ion).label, M.label);
-    lnC[i] = v;
-  }
+  for (let i = 0; i < nc; i++)
+    lnC[i] = lnGamma(cations[i] as Ion, i, cations, anions, phiC, (j) => i * na + j);
   const lnA = new Float64Array(na);
-  for (let j = 0; j < na; j++) {
-    const X = anions[j] as Ion;
-    let v = X.z * X.z * F + X.z * CC;
-    for (let i = 0; i < nc; i++)
-      v += (cations[i] as Ion).m * (2 * (B[i * na + j] as number) + Z * (C[i * na + j] as number));
-    for (let k = 0; k < na; k++) {
-      if (k === j) continue;
-      const a = anions[k] as Ion;
-      let s = 2 * (phiA[j * na + k] as number);
-      for (const c of cations) s += c.m * psi(X.label, a.label, c.label);
-      v += a.m * s;
-    }
-    for (let i = 0; i < nc; i++)
-      for (let k = i + 1; k < nc; k++)
-        v +=
-          (cations[i] as Ion).m *
-          (cations[k] as Ion).m *
-          psi((cations[i] as Ion).label, (cations[k] as Ion).label, X.label);
-    lnA[j] = v;
-  }
+  for (let j = 0; j < na; j++)
+    lnA[j] = lnGamma(anions[j] as Ion, j, anions, cations, phiA, (i) => i * na + j);
   const total = ionSum + neutralSum;
   const phi = ionSum > 0 ? 1 + (2 * osm) / total : 1;
   const gamma = new Array<number>(species.length);
