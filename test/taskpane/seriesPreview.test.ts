@@ -11,7 +11,8 @@
  * against that derivation and against the printed value within 1 mV.
  */
 import { nernstSlope, potentialArgs, previewValues, seriesSlope } from '../../src/taskpane/seriesPreview';
-import { planSweep, readSweepForm, type SweepForm, type SweepInput } from '../../src/taskpane/sweepPlan';
+import { planSweep, type SweepInput } from '../../src/taskpane/sweepPlan';
+import { input } from './sweepFixtures';
 import { F } from '../support';
 
 const SLOPE_25 = 0.05915935; // V per decade, derived from the SI exact constants
@@ -20,26 +21,6 @@ const SLOPE_50 = 0.0641199; // V per decade at 50 °C, derived likewise
 const E0_CU_SPECIES = 65.49e3 / (2 * F);
 /** E°(O2/H2O) from ΔfG°(H2O, l) = −237.129 kJ/mol (NBS 1982, from memory): 1.22883 V. */
 const E0_O2_SPECIES = (2 * 237.129e3) / (4 * F);
-
-function form(over: Partial<SweepForm> = {}): SweepForm {
-  return {
-    reaction: 'Cu2+/Cu',
-    variable: { kind: 'activity', species: 'Cu2+', scale: 'log' },
-    from: '1e-6',
-    to: '1',
-    points: '25',
-    tempC: '25',
-    species: [{ name: 'Cu2+', value: '1' }],
-    table: '',
-    ...over,
-  };
-}
-
-function input(over: Partial<SweepForm> = {}): SweepInput {
-  const r = readSweepForm(form(over));
-  if (!r.ok) throw new Error(r.errors.map((e) => `${e.field}: ${e.message}`).join('\n'));
-  return r.input;
-}
 
 function slopeOf(i: SweepInput): number | undefined {
   const layout = planSweep(i);

@@ -19,30 +19,9 @@ import {
   planSweep,
   readNumber,
   readSweepForm,
-  type SweepForm,
-  type SweepInput,
   sweepSheetPlan,
 } from '../../src/taskpane/sweepPlan';
-
-function form(over: Partial<SweepForm> = {}): SweepForm {
-  return {
-    reaction: 'Cu2+/Cu',
-    variable: { kind: 'activity', species: 'Cu2+', scale: 'log' },
-    from: '1e-6',
-    to: '1',
-    points: '25',
-    tempC: '25',
-    species: [{ name: 'Cu2+', value: '1' }],
-    table: '',
-    ...over,
-  };
-}
-
-function input(over: Partial<SweepForm> = {}): SweepInput {
-  const r = readSweepForm(form(over));
-  if (!r.ok) throw new Error(r.errors.map((e) => `${e.field}: ${e.message}`).join('\n'));
-  return r.input;
-}
+import { form, input } from './sweepFixtures';
 
 describe('checkReaction (live validation)', () => {
   test('a bad reaction gives the engine message and its 1-based position', () => {
