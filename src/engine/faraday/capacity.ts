@@ -19,10 +19,8 @@ import { EngineError, quote } from '../errors';
 import { FARADAY_C_PER_MOL } from '../constants';
 import { toNumber } from '../rational';
 import { type Species, formatSpecies, parseSpecies, phaseOf, speciesKey } from '../notation/species';
-import { type Reaction, stoichiometry, electronsConsumed } from '../notation/reaction';
-import { parseNotation } from '../notation/notation';
-import { assertBalanced } from '../balance/balance';
-import { resolvedReaction } from '../cache';
+import { stoichiometry, electronsConsumed } from '../notation/reaction';
+import { halfReactionOf } from './halfReaction';
 import { elementsOf } from '../notation/species';
 import { G102_VALENCES } from '../data/alloys';
 import { molarMassOfSpecies } from './molarMass';
@@ -32,6 +30,10 @@ import { positiveNumber } from '../measurement/guards';
 const C_PER_MAH = 3.6;
 
 const REACTION_MARK = /->|→|⟶|=|⇌|<=>|\/|\|/;
+
+/** What a text that is neither an electrode reaction nor a species is told. */
+const NOT_ELECTRODE_REACTION =
+  'is not an electrode reaction: give a half-reaction with its electrons ("Li+ + e- -> Li"), a couple ("Zn2+/Zn") or an active material ("LiFePO4"). A whole cell has a specific energy, not a specific capacity.';
 
 /**
  * Theoretical specific capacity, mAh/g.
@@ -62,7 +64,7 @@ export function specificCapacityMAhG(text: string, basis?: string | number | nul
       `basis must be "reduced", "oxidised" or a species of the reaction for an electrode reaction; got ${basis}. A number of electrons goes with an active material written alone (e.g. "LiCoO2" with basis 1).`,
       'basis',
     );
-  const r = halfReactionOf(text);
+  const r = halfReactionOf(text, 'reaction_or_species', NOT_ELECTRODE_REACTION);
   const n = Math.abs(toNumber(electronsConsumed(r)));
   const entries = stoichiometry(r).filter((e) => !e.species.isElectron);
   const b = (basis ?? '').trim();
@@ -93,23 +95,6 @@ export function specificCapacityMAhG(text: string, basis?: string | number | nul
     massG = Math.abs(toNumber(e.nu)) * molarMassOfSpecies(e.species);
   }
   return (n * FARADAY_C_PER_MOL) / (C_PER_MAH * massG);
-}
-
-function halfReactionOf(text: string): Reaction {
-  const n = parseNotation(text, 'reaction_or_species');
-  if (n.kind === 'half') {
-    assertBalanced(n.reaction, text);
-    return n.reaction;
-  }
-  if (n.kind === 'couple') {
-    const r = resolvedReaction(text, null);
-    if (r.kind === 'half') return r.half.reaction;
-  }
-  throw new EngineError(
-    'argument',
-    `${quote(text)} is not an electrode reaction: give a half-reaction with its electrons ("Li+ + e- -> Li"), a couple ("Zn2+/Zn") or an active material ("LiFePO4"). A whole cell has a specific energy, not a specific capacity.`,
-    'reaction_or_species',
-  );
 }
 
 function speciesCapacity(text: string, basis: string | number | null | undefined): number {

@@ -13,10 +13,8 @@ import { EngineError, quote } from '../errors';
 import { FARADAY_C_PER_MOL } from '../constants';
 import { toNumber } from '../rational';
 import { type Species, formatSpecies, phaseOf } from '../notation/species';
-import { type Reaction, stoichiometry, electronsConsumed } from '../notation/reaction';
-import { parseNotation } from '../notation/notation';
-import { assertBalanced } from '../balance/balance';
-import { resolvedReaction } from '../cache';
+import { stoichiometry, electronsConsumed } from '../notation/reaction';
+import { halfReactionOf } from './halfReaction';
 import { molarMassOfSpecies } from './molarMass';
 import { fraction, nonNegativeNumber, positiveNumber } from '../measurement/guards';
 
@@ -36,22 +34,9 @@ export interface FaradayPlan {
 
 const planCache = new Map<string, FaradayPlan>();
 
-function halfReactionOf(text: string): Reaction {
-  const n = parseNotation(text);
-  if (n.kind === 'half') {
-    assertBalanced(n.reaction, text);
-    return n.reaction;
-  }
-  if (n.kind === 'couple') {
-    const r = resolvedReaction(text, null);
-    if (r.kind === 'half') return r.half.reaction;
-  }
-  throw new EngineError(
-    'argument',
-    `${quote(text)} is not a half-reaction: give the electrode reaction with its electrons, e.g. "Cu2+ + 2 e- -> Cu", or a couple such as "Cu2+/Cu".`,
-    'reaction',
-  );
-}
+/** What a text that is no half-reaction is told. */
+const NOT_HALF =
+  'is not a half-reaction: give the electrode reaction with its electrons, e.g. "Cu2+ + 2 e- -> Cu", or a couple such as "Cu2+/Cu".';
 
 /**
  * What Faraday's law needs from a half-reaction (or a couple from the table): the
@@ -69,7 +54,7 @@ function halfReactionOf(text: string): Reaction {
 export function faradayPlan(text: string): FaradayPlan {
   const cached = planCache.get(text);
   if (cached) return cached;
-  const r = halfReactionOf(text);
+  const r = halfReactionOf(text, 'reaction', NOT_HALF);
   const n = toNumber(electronsConsumed(r));
   const entries = stoichiometry(r).filter((e) => !e.species.isElectron && phaseOf(e.species) === 's');
   const products = entries.filter((e) => toNumber(e.nu) > 0);
@@ -145,16 +130,11 @@ export function plateTimeS(
   densityGcm3: number,
   efficiency = 1,
 ): number {
-  const plan = faradayPlan(reaction);
   nonNegativeNumber(thicknessUm, 'thickness_um', 'µm');
+  // a time needs a current: zero would never plate the thickness
   positiveNumber(currentDensityAm2, 'current_density_A_m2', 'A/m²');
-  positiveNumber(densityGcm3, 'density_g_cm3', 'g/cm³');
-  fraction(efficiency, 'efficiency');
-  const gramsPerM2 = densityGcm3 * thicknessUm;
-  return assertFiniteResult(
-    (gramsPerM2 * FARADAY_C_PER_MOL) / (currentDensityAm2 * plan.gramsPerMolElectrons * efficiency),
-    'the time',
-  );
+  const rate = platingRateUmS(reaction, currentDensityAm2, densityGcm3, efficiency);
+  return assertFiniteResult(thicknessUm / rate, 'the time');
 }
 
 /**
@@ -173,15 +153,27 @@ export function thicknessUm(
   densityGcm3: number,
   efficiency = 1,
 ): number {
+  const rate = platingRateUmS(reaction, currentDensityAm2, densityGcm3, efficiency);
+  return assertFiniteResult(rate * nonNegativeNumber(timeS, 'time_s', 's'), 'the thickness');
+}
+
+/**
+ * The rate (µm/s) at which a current density plates the solid of `reaction`:
+ * i·M·ν·ε / (n·F·ρ), with ρ·t in g/m² (ρ in g/cm³ times t in µm). Checks the plating
+ * conditions both plating functions share: the reaction, current_density_A_m2 ≥ 0,
+ * density_g_cm3 > 0 and efficiency in (0, 1].
+ */
+function platingRateUmS(
+  reaction: string,
+  currentDensityAm2: number,
+  densityGcm3: number,
+  efficiency: number,
+): number {
   const plan = faradayPlan(reaction);
   nonNegativeNumber(currentDensityAm2, 'current_density_A_m2', 'A/m²');
-  nonNegativeNumber(timeS, 'time_s', 's');
   positiveNumber(densityGcm3, 'density_g_cm3', 'g/cm³');
   fraction(efficiency, 'efficiency');
-  return assertFiniteResult(
-    (currentDensityAm2 * timeS * plan.gramsPerMolElectrons * efficiency) / (FARADAY_C_PER_MOL * densityGcm3),
-    'the thickness',
-  );
+  return (currentDensityAm2 * plan.gramsPerMolElectrons * efficiency) / (FARADAY_C_PER_MOL * densityGcm3);
 }
 
 /** A finite result, or a range error naming what overflowed. */
