@@ -17,6 +17,27 @@ import { fraction, positiveNumber } from '../measurement/guards';
 export const HOURS_PER_YEAR = 8760;
 
 /**
+ * The row of `rows` named `name` (its name or an alias, without regard to case), or an
+ * argument error for `argument` saying what it accepts and listing the names.
+ */
+function namedRow<T extends { readonly name: string; readonly aliases: readonly string[] }>(
+  rows: readonly T[],
+  name: string,
+  argument: string,
+  accepts: string,
+): T {
+  const key = name.trim().toLowerCase();
+  const row = rows.find((a) => a.aliases.includes(key) || a.name.toLowerCase() === key);
+  if (!row)
+    throw new EngineError(
+      'argument',
+      `${argument} must be ${accepts} this function knows (${rows.map((a) => `"${a.aliases[0]!}"`).join(', ')}); got ${quote(name)}.`,
+      argument,
+    );
+  return row;
+}
+
+/**
  * Design capacity (Ah/kg) of a named anode material: "zinc", "Al-Zn-In", "magnesium", "high-potential magnesium".
  *
  * @throws EngineError (`argument`) listing the names
@@ -24,15 +45,8 @@ export const HOURS_PER_YEAR = 8760;
  * anodeCapacityAhKg('zinc') // 780
  */
 export function anodeCapacityAhKg(name: string): number {
-  const key = name.trim().toLowerCase();
-  const m = ANODE_MATERIALS.find((a) => a.aliases.includes(key) || a.name.toLowerCase() === key);
-  if (!m)
-    throw new EngineError(
-      'argument',
-      `capacity_Ah_kg must be a number in Ah/kg or an anode material this function knows (${ANODE_MATERIALS.map((a) => `"${a.aliases[0]!}"`).join(', ')}); got ${quote(name)}.`,
-      'capacity_Ah_kg',
-    );
-  return m.capacityAhKg;
+  return namedRow(ANODE_MATERIALS, name, 'capacity_Ah_kg', 'a number in Ah/kg or an anode material')
+    .capacityAhKg;
 }
 
 /**
@@ -42,15 +56,8 @@ export function anodeCapacityAhKg(name: string): number {
  * anodeUtilisation('long slender stand-off') // 0.9
  */
 export function anodeUtilisation(name: string): number {
-  const key = name.trim().toLowerCase();
-  const u = ANODE_UTILISATION.find((a) => a.aliases.includes(key) || a.name.toLowerCase() === key);
-  if (!u)
-    throw new EngineError(
-      'argument',
-      `utilisation must be a number, a fraction in (0, 1], or an anode type this function knows (${ANODE_UTILISATION.map((a) => `"${a.aliases[0]!}"`).join(', ')}); got ${quote(name)}.`,
-      'utilisation',
-    );
-  return u.factor;
+  return namedRow(ANODE_UTILISATION, name, 'utilisation', 'a number, a fraction in (0, 1], or an anode type')
+    .factor;
 }
 
 /**

@@ -175,24 +175,33 @@ interface RateInputs {
   readonly rho: number | null;
 }
 
+/**
+ * The checked inputs of an ASTM G102 rate: the current density (≥ 0), the density and
+ * equivalent weight where given (> 0, they override the metal's), and the metal or alloy
+ * for what is not given. `needsDensity` is false for the mass-loss rate, which uses the
+ * equivalent weight only (a density given is still checked).
+ */
 function inputs(
   metal: string | null | undefined,
+  currentDensityUAcm2: number,
   density: number | null | undefined,
   ew: number | null | undefined,
+  needsDensity: boolean,
 ): RateInputs {
+  nonNegativeNumber(currentDensityUAcm2, 'current_density_uA_cm2', 'µA/cm²');
   const hasD = density !== null && density !== undefined;
   const hasE = ew !== null && ew !== undefined;
   if (hasD) positiveNumber(density, 'density_g_cm3', 'g/cm³');
   if (hasE) positiveNumber(ew, 'equivalent_weight', 'g per equivalent');
-  const blank = metal === null || metal === undefined || metal.trim() === '';
-  if (blank && !(hasD && hasE))
+  const given = hasE && (hasD || !needsDensity);
+  if (given) return { ew, rho: hasD ? density : null };
+  if (metal === null || metal === undefined || metal.trim() === '')
     throw new EngineError(
       'argument',
-      'metal_or_alloy is empty: name the metal or alloy ("Fe", "304"), or give both density_g_cm3 and equivalent_weight.',
+      `metal_or_alloy is empty: name the metal or alloy ("Fe", "304"), or give ${needsDensity ? 'both density_g_cm3 and equivalent_weight' : 'equivalent_weight'}.`,
       'metal_or_alloy',
     );
-  if (hasD && hasE) return { ew, rho: density };
-  const m = corrodingMetal(metal!);
+  const m = corrodingMetal(metal);
   return { ew: hasE ? ew : m.equivalentWeight, rho: hasD ? density : m.densityGcm3 };
 }
 
@@ -211,8 +220,7 @@ export function corrosionRateMmY(
   densityGcm3?: number | null,
   equivalentWeight?: number | null,
 ): number {
-  nonNegativeNumber(currentDensityUAcm2, 'current_density_uA_cm2', 'µA/cm²');
-  const { ew, rho } = inputs(metal, densityGcm3, equivalentWeight);
+  const { ew, rho } = inputs(metal, currentDensityUAcm2, densityGcm3, equivalentWeight, true);
   if (rho === null)
     throw new EngineError(
       'argument',
@@ -235,18 +243,9 @@ export function massLossRateGm2d(
   densityGcm3?: number | null,
   equivalentWeight?: number | null,
 ): number {
-  nonNegativeNumber(currentDensityUAcm2, 'current_density_uA_cm2', 'µA/cm²');
-  if (densityGcm3 !== null && densityGcm3 !== undefined)
-    positiveNumber(densityGcm3, 'density_g_cm3', 'g/cm³');
-  let ew: number;
-  if (equivalentWeight !== null && equivalentWeight !== undefined)
-    ew = positiveNumber(equivalentWeight, 'equivalent_weight', 'g per equivalent');
-  else if (metal === null || metal === undefined || metal.trim() === '')
-    throw new EngineError(
-      'argument',
-      'metal_or_alloy is empty: name the metal or alloy ("Fe", "304"), or give equivalent_weight.',
-      'metal_or_alloy',
-    );
-  else ew = corrodingMetal(metal).equivalentWeight;
-  return G102_K2 * currentDensityUAcm2 * ew;
+  return (
+    G102_K2 *
+    currentDensityUAcm2 *
+    inputs(metal, currentDensityUAcm2, densityGcm3, equivalentWeight, false).ew
+  );
 }

@@ -50,6 +50,8 @@ describe('CORRATE and MASSLOSS', () => {
     expect(corrosionRateMmY('Fe', 1, 7.0)).toBeCloseTo((K1 * (55.845 / 2)) / 7.0, 12);
     expect(corrosionRateMmY('', 2, 7.9, 28)).toBeCloseTo((K1 * 2 * 28) / 7.9, 12);
     expect(massLossRateGm2d(null, 2, null, 28)).toBeCloseTo(K2 * 2 * 28, 12);
+    // a given equivalent weight is used as given: the metal's name is not looked up
+    expect(massLossRateGm2d('unobtainium', 2, null, 28)).toBeCloseTo(K2 * 2 * 28, 12);
     expect(corrosionRateMmY('Zn', 0)).toBe(0);
   });
 
@@ -64,6 +66,15 @@ describe('CORRATE and MASSLOSS', () => {
     [() => corrosionRateMmY('Cu 90, Pd 10', 1, 8.9), 'argument', /No valence is listed for Pd/],
     [() => massLossRateGm2d('Fe', NaN), 'argument', /must be a finite number/],
     [() => massLossRateGm2d('', 1), 'argument', /metal_or_alloy is empty/],
+    // the mass-loss rate needs only the equivalent weight; the corrosion rate needs both
+    [() => massLossRateGm2d(null, 1, 7.9), 'argument', /or give equivalent_weight\.$/],
+    [
+      () => corrosionRateMmY(null, 1, null, 28),
+      'argument',
+      /give both density_g_cm3 and equivalent_weight\.$/,
+    ],
+    [() => massLossRateGm2d('Fe', -1, null, 28), 'argument', /current_density_uA_cm2 must not be negative/],
+    [() => massLossRateGm2d('Fe', 1, -7.9), 'argument', /density_g_cm3 must be greater than 0/],
   ])('bad input %#', (f, kind, message) => {
     const e = engineErrorOf(f);
     expect(e.kind).toBe(kind);
