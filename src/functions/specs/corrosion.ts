@@ -12,6 +12,7 @@ import {
 import { parseNumberText } from '../args';
 import { isInputErrorText } from '../cellTypes';
 import type { CaseArgs, FunctionSpec, ParamSpec } from '../spec/types';
+import { ABOVE_ZERO, positiveParam } from './commonParams';
 
 const CP_CAUTION =
   'Cathodic-protection design and assessment follow the applicable standards (e.g. DNV-RP-B401, ISO 15589, AMPP/NACE SP0169), the anode maker’s certified data and licensed practice; these are estimates.';
@@ -33,22 +34,19 @@ const RATE_PARAMS: readonly ParamSpec[] = [
     description: 'Corrosion current density i_corr in µA/cm²',
   },
   {
-    name: 'density_g_cm3',
-    kind: 'number',
+    ...positiveParam('density_g_cm3', 'number', 'g/cm³', 'Density in g/cm³, to override the listed value'),
     optional: true,
-    unit: 'g/cm³',
-    domain: { min: 0, minExclusive: true },
     defaultText: "the metal's or alloy's",
-    description: 'Density in g/cm³, to override the listed value',
   },
   {
-    name: 'equivalent_weight',
-    kind: 'number',
+    ...positiveParam(
+      'equivalent_weight',
+      'number',
+      'g',
+      'Equivalent weight in g per equivalent, to override the computed value',
+    ),
     optional: true,
-    unit: 'g',
-    domain: { min: 0, minExclusive: true },
     defaultText: 'by ASTM G102 from the composition',
-    description: 'Equivalent weight in g per equivalent, to override the computed value',
   },
 ];
 
@@ -136,18 +134,16 @@ const ANODELIFE: FunctionSpec = {
   returns: 'Anode life in years, one row per case',
   params: [
     { name: 'mass_kg', kind: 'mass', unit: 'kg', description: 'Net anode mass in kg' },
-    {
-      name: 'capacity_Ah_kg',
-      kind: 'number',
-      unit: 'Ah/kg',
-      domain: { min: 0, minExclusive: true },
-      description:
-        'Electrochemical capacity in Ah/kg, or a material: "Al-Zn-In" (2000), "zinc" (780), "magnesium" (1100), "high-potential magnesium" (1230)',
-    },
+    positiveParam(
+      'capacity_Ah_kg',
+      'number',
+      'Ah/kg',
+      'Electrochemical capacity in Ah/kg, or a material: "Al-Zn-In" (2000), "zinc" (780), "magnesium" (1100), "high-potential magnesium" (1230)',
+    ),
     {
       name: 'current_A',
       kind: 'current',
-      domain: { min: 0, minExclusive: true },
+      domain: ABOVE_ZERO,
       description: 'Mean current output in A over the life',
     },
     {

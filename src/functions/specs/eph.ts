@@ -50,15 +50,20 @@ function oneCase(mode: 'species' | 'class') {
   };
 }
 
-const PREDOMINANT: FunctionSpec = {
-  id: 'PREDOMINANT',
+/** What the two per-point functions share: one point (E, pH) of an element's diagram per case. */
+const AT_A_POINT: Pick<FunctionSpec, 'family' | 'params' | 'result' | 'notes'> = {
   family: 'E–pH',
-  summary:
-    'The thermodynamically stable species of an element at a potential and pH (E–pH / Pourbaix diagram).',
-  returns: 'Species text, e.g. "Fe2O3(s)", one row per case',
   params: [ELEMENT, E_V, PH, ACTIVITY, TEMP_C],
   result: { kind: 'perCase' },
   notes: NOTES,
+};
+
+const PREDOMINANT: FunctionSpec = {
+  ...AT_A_POINT,
+  id: 'PREDOMINANT',
+  summary:
+    'The thermodynamically stable species of an element at a potential and pH (E–pH / Pourbaix diagram).',
+  returns: 'Species text, e.g. "Fe2O3(s)", one row per case',
   examples: [
     {
       args: ['Fe', -1, 7],
@@ -76,15 +81,12 @@ const PREDOMINANT: FunctionSpec = {
 };
 
 const EPHCLASS: FunctionSpec = {
+  ...AT_A_POINT,
   id: 'EPHCLASS',
-  family: 'E–pH',
   summary:
     'Immunity, corrosion or passivation: the class of the stable species of an element at a potential and pH.',
   returns:
     '"immunity" (the metal), "corrosion" (a dissolved species) or "passivation" (a solid oxide or hydroxide), one row per case',
-  params: [ELEMENT, E_V, PH, ACTIVITY, TEMP_C],
-  result: { kind: 'perCase' },
-  notes: NOTES,
   examples: [
     {
       args: ['Zn', -0.5, 4],

@@ -12,6 +12,7 @@ import {
 } from '../../engine';
 import { parseNumberText } from '../args';
 import { TEMP_C } from '../spec/params';
+import { positiveParam } from './commonParams';
 import type { FunctionSpec, ParamSpec } from '../spec/types';
 
 const F = 'F = 96485.33212 C/mol (SI 2019 exact)';
@@ -35,21 +36,19 @@ const EFFICIENCY: ParamSpec = {
   description: 'Current (Faradaic) efficiency, a fraction in (0, 1]',
 };
 
-const DENSITY: ParamSpec = {
-  name: 'density_g_cm3',
-  kind: 'number',
-  unit: 'g/cm³',
-  domain: { min: 0, minExclusive: true },
-  description: 'Density of the deposit in g/cm³ (e.g. 8.96 for copper)',
-};
+const DENSITY = positiveParam(
+  'density_g_cm3',
+  'number',
+  'g/cm³',
+  'Density of the deposit in g/cm³ (e.g. 8.96 for copper)',
+);
 
-const CURRENT_DENSITY: ParamSpec = {
-  name: 'current_density_A_m2',
-  kind: 'currentDensity',
-  unit: 'A/m²',
-  domain: { min: 0, minExclusive: true },
-  description: 'Current density in A/m² (1 A/dm² = 100 A/m²)',
-};
+const CURRENT_DENSITY = positiveParam(
+  'current_density_A_m2',
+  'currentDensity',
+  'A/m²',
+  'Current density in A/m² (1 A/dm² = 100 A/m²)',
+);
 
 const DEPOSIT: FunctionSpec = {
   id: 'DEPOSIT',
@@ -85,9 +84,19 @@ const DEPOSIT: FunctionSpec = {
   perCase: (a) => depositMassG(a.text('reaction'), a.num('charge_C'), a.num('efficiency')),
 };
 
-const PLATETIME: FunctionSpec = {
-  id: 'PLATETIME',
+/** What the two plating functions share: a deposit of uniform thickness, one row per case. */
+const PLATING: Pick<FunctionSpec, 'family' | 'result' | 'notes'> = {
   family: 'Faraday',
+  result: { kind: 'perCase' },
+  notes: [
+    'Uniform current distribution is assumed; real parts plate thicker at edges and thinner in recesses.',
+    `${PLATING_CAUTION}`,
+  ],
+};
+
+const PLATETIME: FunctionSpec = {
+  ...PLATING,
+  id: 'PLATETIME',
   summary: 'Time in s to plate a thickness at a current density: t = ρ·d·n·F/(i·M·ε).',
   returns: 'Time in s, one row per case',
   params: [
@@ -96,11 +105,6 @@ const PLATETIME: FunctionSpec = {
     CURRENT_DENSITY,
     DENSITY,
     EFFICIENCY,
-  ],
-  result: { kind: 'perCase' },
-  notes: [
-    'Uniform current distribution is assumed; real parts plate thicker at edges and thinner in recesses.',
-    `${PLATING_CAUTION}`,
   ],
   examples: [
     {
@@ -121,8 +125,8 @@ const PLATETIME: FunctionSpec = {
 };
 
 const THICKNESS: FunctionSpec = {
+  ...PLATING,
   id: 'THICKNESS',
-  family: 'Faraday',
   summary: 'Thickness in µm plated by a current density over a time: d = i·t·M·ε/(n·F·ρ).',
   returns: 'Thickness in µm, one row per case',
   params: [
@@ -131,11 +135,6 @@ const THICKNESS: FunctionSpec = {
     { name: 'time_s', kind: 'time', description: 'Plating time in s' },
     DENSITY,
     EFFICIENCY,
-  ],
-  result: { kind: 'perCase' },
-  notes: [
-    'Uniform current distribution is assumed; real parts plate thicker at edges and thinner in recesses.',
-    `${PLATING_CAUTION}`,
   ],
   examples: [
     {

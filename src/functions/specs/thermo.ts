@@ -46,13 +46,18 @@ const FORMATION: FunctionSpec = {
   perCase: (a) => formationValue(a.text('species'), a.choice<ReturnType<typeof parseFormationQuantity>>('quantity')),
 };
 
-const ENTHALPY: FunctionSpec = {
-  id: 'ENTHALPY',
+/** What the standard reaction quantities share: a reaction at temp_C, with the user's table. */
+const REACTION_QUANTITY: Pick<FunctionSpec, 'family' | 'params' | 'result'> = {
   family: 'Thermodynamics',
-  summary: 'Standard reaction enthalpy ΔrH° in kJ/mol at temp_C (Gibbs–Helmholtz with constant ΔCp° from the species data, or the table rows’ dE°/dT).',
-  returns: 'ΔrH° in kJ/mol, one row per case',
   params: [REACTION_ANY, TEMP_C, TABLE],
   result: { kind: 'perCase' },
+};
+
+const ENTHALPY: FunctionSpec = {
+  ...REACTION_QUANTITY,
+  id: 'ENTHALPY',
+  summary: 'Standard reaction enthalpy ΔrH° in kJ/mol at temp_C (Gibbs–Helmholtz with constant ΔCp° from the species data, or the table rows’ dE°/dT).',
+  returns: 'ΔrH° in kJ/mol, one row per case',
   examples: [
     { args: ['H2 + 1/2 O2 -> H2O'], expected: -285.83, tolerance: 0.01, source: `ΔfH°(H2O, l) = −285.83 kJ/mol, ${NBS}` },
   ],
@@ -60,12 +65,10 @@ const ENTHALPY: FunctionSpec = {
 };
 
 const ENTROPY: FunctionSpec = {
+  ...REACTION_QUANTITY,
   id: 'ENTROPY',
-  family: 'Thermodynamics',
   summary: 'Standard reaction entropy ΔrS° in J/(mol·K) at temp_C, from the species data or the table rows’ dE°/dT.',
   returns: 'ΔrS° in J/(mol·K), one row per case',
-  params: [REACTION_ANY, TEMP_C, TABLE],
-  result: { kind: 'perCase' },
   examples: [
     {
       args: ['H2 + 1/2 O2 -> H2O'],
