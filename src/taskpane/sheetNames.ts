@@ -6,6 +6,10 @@
  * starting or ending with an apostrophe, not the reserved name "History"; names are
  * compared without regard to case ("potentials" and "Potentials" clash).
  */
+import { columnLetters } from '../engine/index';
+
+/** The column letters rule is the engine's, shared with the runner. */
+export { columnLetters };
 
 /** The longest sheet name Excel accepts. */
 export const MAX_SHEET_NAME_LENGTH = 31;
@@ -67,26 +71,6 @@ export function sheetRef(name: string): string {
     !/^[RrCc]$/.test(name) &&
     !/^[Rr][0-9]*[Cc][0-9]*$/.test(name);
   return bare ? name : `'${name.replace(/'/g, "''")}'`;
-}
-
-/**
- * Column letters of a 1-based column number.
- *
- * @example
- * columnLetters(1) // 'A'
- * columnLetters(28) // 'AB'
- */
-export function columnLetters(column: number): string {
-  if (!Number.isInteger(column) || column < 1)
-    throw new RangeError(`column must be a positive integer; got ${column}`);
-  let n = column;
-  let out = '';
-  while (n > 0) {
-    const r = (n - 1) % 26;
-    out = String.fromCharCode(65 + r) + out;
-    n = Math.floor((n - 1) / 26);
-  }
-  return out;
 }
 
 /**
