@@ -17,6 +17,7 @@ import { type ChartModel, chartModel } from './chart';
 import { ephLines, ephSheetPlan, ephSupport, readEphForm, sanitizedSvg } from './ephSection';
 import { decimalSeparatorOf, hostLocale, localNumber } from './locale';
 import { readRangeValues, writeNewSheet } from './officeActions';
+import { controlAttributes, PANE_TABS, paneField, tabId } from './paneMarkup';
 import { filterPotentials, planPotentialsSheet } from './potentialsSheet';
 import { idFromHash, planExampleSheet } from './reference';
 import { loadReference, type ReferenceItem, searchReference } from './referenceData';
@@ -158,7 +159,47 @@ async function withBusy<T>(work: () => Promise<T>): Promise<T> {
 // ---------------------------------------------------------------------------
 // Sections (tabs)
 
-const TAB_IDS = ['tab-potentials', 'tab-series', 'tab-eph', 'tab-reference'];
+const TAB_IDS = PANE_TABS.map(tabId);
+
+/** The tab list, from PANE_TABS: the first tab selected and the one in the Tab order. */
+function renderTabs(): void {
+  byId('tabs').replaceChildren(
+    ...PANE_TABS.map((t, i) => {
+      const tab = make('button', { id: tabId(t), className: 'tab', text: t.label });
+      tab.type = 'button';
+      tab.setAttribute('role', 'tab');
+      tab.setAttribute('aria-controls', t.panel);
+      tab.setAttribute('aria-selected', String(i === 0));
+      if (i > 0) tab.tabIndex = -1;
+      tab.hidden = t.hidden === true;
+      return tab;
+    }),
+  );
+}
+
+/** Each `[data-field]` placeholder of the page filled from its row of PANE_FIELDS. */
+function renderFields(): void {
+  for (const box of Array.from(document.querySelectorAll<HTMLElement>('[data-field]'))) {
+    const f = paneField(box.dataset.field ?? '');
+    const label = make('label', { text: f.label });
+    label.htmlFor = f.id;
+    if (f.unitSlot) {
+      const unit = make('span', { className: 'unit' });
+      unit.dataset.unit = '';
+      label.append(' ', unit);
+    }
+    const control = make(f.select ? 'select' : 'input');
+    for (const [name, value] of controlAttributes(f)) control.setAttribute(name, value);
+    for (const [value, text] of f.options ?? []) {
+      const o = make('option', { text });
+      o.value = value;
+      control.append(o);
+    }
+    box.replaceChildren(label, control);
+    if (f.errorId) box.append(make('span', { id: f.errorId, className: 'field-error' }));
+    if (f.noteId) box.append(make('span', { id: f.noteId, className: 'role-note' }));
+  }
+}
 
 function visibleTabs(): HTMLButtonElement[] {
   return TAB_IDS.map((id) => byId<HTMLButtonElement>(id)).filter((t) => !t.hidden);
@@ -848,6 +889,8 @@ async function startReference(): Promise<void> {
 // Start
 
 function start(): void {
+  renderTabs();
+  renderFields();
   for (const id of TAB_IDS) {
     const tab = byId<HTMLButtonElement>(id);
     tab.addEventListener('click', () => selectTab(tab));
