@@ -11,23 +11,29 @@ export interface Tick {
   readonly position: number;
 }
 
+/** The titles of a chart's two axes, e.g. "pH" and "E / V vs SHE" (the pane's chart and Excel's alike). */
+export interface AxisTitles {
+  readonly xTitle: string;
+  readonly yTitle: string;
+}
+
+/** The plot area inside the chart's box, in pixels: x from left to right, y from top to bottom. */
+export interface PlotArea {
+  readonly left: number;
+  readonly top: number;
+  readonly right: number;
+  readonly bottom: number;
+}
+
 /** Everything needed to draw the chart, in pixels of a `width` × `height` box. */
-export interface ChartModel {
+export interface ChartModel extends AxisTitles {
   readonly width: number;
   readonly height: number;
-  /** The plot area: x from left to right, y from top to bottom. */
-  readonly plot: {
-    readonly left: number;
-    readonly top: number;
-    readonly right: number;
-    readonly bottom: number;
-  };
+  readonly plot: PlotArea;
   readonly xTicks: readonly Tick[];
   readonly yTicks: readonly Tick[];
   /** The data as SVG polyline points ("x,y x,y …"). */
   readonly polyline: string;
-  readonly xTitle: string;
-  readonly yTitle: string;
   /** A sentence describing the chart for screen readers. */
   readonly summary: string;
 }
@@ -74,18 +80,13 @@ export function tickLabel(value: number, step: number): string {
  */
 export function chartModel(
   points: readonly { readonly x: number; readonly y: number }[],
-  opts: {
-    readonly width: number;
-    readonly height?: number;
-    readonly xTitle: string;
-    readonly yTitle: string;
-  },
+  opts: AxisTitles & { readonly width: number; readonly height?: number },
 ): ChartModel | null {
   const pts = points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
   if (pts.length < 2) return null;
   const width = Math.max(150, Math.round(opts.width));
   const height = Math.round(opts.height ?? Math.min(240, Math.max(170, width * 0.62)));
-  const plot = { left: 58, top: 12, right: width - 14, bottom: height - 46 };
+  const plot: PlotArea = { left: 58, top: 12, right: width - 14, bottom: height - 46 };
   const xs = pts.map((p) => p.x);
   const ys = pts.map((p) => p.y);
   const xTarget = Math.max(2, Math.floor((plot.right - plot.left) / 64));

@@ -5,6 +5,7 @@
  * officeActions.ts) and written by one Office writer, so that tests can check
  * every address, value and formula without Excel.
  */
+import type { AxisTitles } from './chart';
 
 /** A cell value the pane writes: text, a number, or "" for an empty cell. */
 export type CellValue = string | number;
@@ -23,7 +24,7 @@ export interface CellBlock {
 }
 
 /** An XY scatter chart with lines, one series. */
-export interface ChartSpec {
+export interface ChartSpec extends AxisTitles {
   readonly type: 'XYScatterLines';
   /** The range the chart is created from (the series' values with their header). */
   readonly source: string;
@@ -33,8 +34,6 @@ export interface ChartSpec {
   readonly yValues: string;
   readonly seriesName: string;
   readonly title: string;
-  readonly xTitle: string;
-  readonly yTitle: string;
   /** Where the chart sits: top-left and bottom-right cells. */
   readonly topLeft: string;
   readonly bottomRight: string;

@@ -29,6 +29,7 @@ import {
   phaseOf,
   formatSpecies,
 } from '../engine/index';
+import type { AxisTitles } from './chart';
 import type { CellBlock, ChartSpec, SheetPlan } from './sheetPlan';
 import { asCellText, cellAddress, columnLetters, rangeAddress, uniqueSheetName } from './sheetNames';
 
@@ -504,7 +505,7 @@ export function formatValue(x: number): string {
 // The plan
 
 /** The sweep sheet's layout, independent of the sheet's name. */
-export interface SweepLayout {
+export interface SweepLayout extends AxisTitles {
   /** The sheet's name before it is made unique, e.g. "E vs log a(Cu2+)". */
   readonly baseName: string;
   /** The species header row (the `species` argument). */
@@ -515,8 +516,6 @@ export interface SweepLayout {
   readonly temps: readonly number[];
   /** The x value per case: log10 a, a, pH or °C. */
   readonly x: readonly number[];
-  readonly xTitle: string;
-  readonly yTitle: string;
   /** The spilled formula, and the cell it goes in. */
   readonly formula: string;
   readonly formulaCell: string;

@@ -13,7 +13,7 @@
  */
 import './taskpane.css';
 import { BUILTIN_POTENTIALS } from '../engine/index';
-import { type ChartModel, chartModel } from './chart';
+import { type AxisTitles, type ChartModel, chartModel } from './chart';
 import { ephLines, ephSheetPlan, ephSupport, readEphForm, sanitizedSvg } from './ephSection';
 import { decimalSeparatorOf, hostLocale, localNumber } from './locale';
 import { readRangeValues, writeNewSheet } from './officeActions';
@@ -276,7 +276,7 @@ let currentCheck: ReactionCheck = checkReaction('');
 let currentCheckText = '';
 let currentLayout: SweepLayout | null = null;
 let currentProblem: string | null = 'Type a reaction.';
-let currentChart: { points: { x: number; y: number }[]; xTitle: string; yTitle: string } | null = null;
+let currentChart: (AxisTitles & { points: { x: number; y: number }[] }) | null = null;
 let previewRun = 0;
 
 function choice(): string {
