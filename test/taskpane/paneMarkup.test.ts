@@ -36,40 +36,43 @@ describe('PANE_FIELDS and the page', () => {
   });
 });
 
+/**
+ * Each control as the page wrote it by hand before the rows replaced the markup
+ * (taskpane.html at d988830), one control a line.
+ */
+const MARKUP_BEFORE = `
+id="pot-filter" class="text-input" type="text" autocomplete="off" spellcheck="false" placeholder="e.g. Fe or Cu2+" aria-describedby="pot-count"
+id="sw-reaction" class="text-input" type="text" autocomplete="off" spellcheck="false" value="Cu2+/Cu" aria-describedby="sw-reaction-msg"
+id="sw-vary" class="select-input"
+id="sw-from" class="text-input" type="text" inputmode="decimal" autocomplete="off" aria-describedby="sw-err-from"
+id="sw-to" class="text-input" type="text" inputmode="decimal" autocomplete="off" aria-describedby="sw-err-to"
+id="sw-points" class="text-input" type="text" inputmode="numeric" autocomplete="off" aria-describedby="sw-err-points"
+id="sw-temp" class="text-input" type="text" inputmode="decimal" value="25" autocomplete="off" aria-describedby="sw-err-tempC sw-temp-note"
+id="sw-table" class="text-input" type="text" autocomplete="off" spellcheck="false" aria-describedby="sw-err-table"
+id="eph-element" class="select-input"
+id="eph-activity" class="text-input" type="text" inputmode="decimal" value="1e-6" autocomplete="off" aria-describedby="eph-err-activity"
+id="eph-temp" class="text-input" type="text" inputmode="decimal" value="25" autocomplete="off" aria-describedby="eph-err-tempC"
+id="eph-scale" class="select-input"
+id="ref-search" class="text-input" type="search" autocomplete="off" spellcheck="false" aria-describedby="ref-status"
+`;
+
+/** The attributes of one line of MARKUP_BEFORE. */
+const parsed = (line: string) =>
+  Object.fromEntries([...line.matchAll(/([a-z-]+)="([^"]*)"/g)].map((m) => [m[1], m[2]]));
+
 describe('controlAttributes', () => {
-  test('a number box: number keyboard, no spell check, its error line describes it', () => {
-    expect(controlAttributes(paneField('sw-points'))).toEqual([
-      ['id', 'sw-points'],
-      ['class', 'text-input'],
-      ['type', 'text'],
-      ['inputmode', 'numeric'],
-      ['autocomplete', 'off'],
-      ['aria-describedby', 'sw-err-points'],
-    ]);
+  test.each(MARKUP_BEFORE.trim().split('\n'))('as the page had it: %s', (line) => {
+    const id = parsed(line).id ?? '';
+    expect(Object.fromEntries(controlAttributes(paneField(id)))).toEqual(parsed(line));
   });
 
-  test('the case temperature: 25 °C (the standard temperature, common practice), error line then note', () => {
-    expect(attrs('sw-temp')).toMatchObject({
-      inputmode: 'decimal',
-      value: '25',
-      'aria-describedby': 'sw-err-tempC sw-temp-note',
-    });
-    expect(attrs('eph-temp')).toMatchObject({ value: '25', 'aria-describedby': 'eph-err-tempC' });
-    expect(attrs('eph-activity')).toMatchObject({ value: '1e-6', 'aria-describedby': 'eph-err-activity' });
-  });
-
-  test('a text box is not spell-checked; the filter keeps its example and its count', () => {
-    expect(controlAttributes(paneField('pot-filter'))).toEqual([
-      ['id', 'pot-filter'],
-      ['class', 'text-input'],
-      ['type', 'text'],
-      ['autocomplete', 'off'],
-      ['spellcheck', 'false'],
-      ['placeholder', 'e.g. Fe or Cu2+'],
-      ['aria-describedby', 'pot-count'],
-    ]);
-    expect(attrs('sw-reaction')).toMatchObject({ value: 'Cu2+/Cu', 'aria-describedby': 'sw-reaction-msg' });
-    expect(attrs('ref-search')).toMatchObject({ type: 'search', spellcheck: 'false' });
+  test('each attribute once; the error line describes a box before its note', () => {
+    expect(MARKUP_BEFORE.trim().split('\n')).toHaveLength(PANE_FIELDS.length);
+    for (const f of PANE_FIELDS) {
+      const names = controlAttributes(f).map(([name]) => name);
+      expect(new Set(names).size).toBe(names.length);
+    }
+    expect(attrs('sw-temp')['aria-describedby']).toBe('sw-err-tempC sw-temp-note');
   });
 
   test('a list has only its id and class; the reference scale lists its electrodes, SHE first', () => {
