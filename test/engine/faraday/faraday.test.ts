@@ -103,8 +103,17 @@ describe('PLATETIME and THICKNESS (derived; ρ·t in g/m² since g/cm³ × µm =
     );
   });
 
+  test('no current or no time plates nothing; no thickness takes no time', () => {
+    expect(thicknessUm('Cu2+ + 2 e- -> Cu', 0, 3600, 8.96)).toBe(0);
+    expect(thicknessUm('Cu2+ + 2 e- -> Cu', 200, 0, 8.96)).toBe(0);
+    expect(plateTimeS('Cu2+ + 2 e- -> Cu', 0, 200, 8.96)).toBe(0);
+  });
+
   test.each([
     [() => plateTimeS('Cu2+ + 2 e- -> Cu', 25, 0, 8.96), /current_density_A_m2 must be greater than 0/],
+    [() => thicknessUm('Cu2+ + 2 e- -> Cu', -1, 10, 8.96), /current_density_A_m2 must not be negative/],
+    [() => plateTimeS('Cu2+ + 2 e- -> Cu', 25, 200, 8.96, 0), /efficiency must be a fraction/],
+    [() => plateTimeS('Zn | Zn2+ || Cu2+ | Cu', 25, 200, 8.96), /is not a half-reaction: give the electrode/],
     [() => plateTimeS('Cu2+ + 2 e- -> Cu', 25, 200, 0), /density_g_cm3 must be greater than 0/],
     [() => plateTimeS('Cu2+ + 2 e- -> Cu', -1, 200, 8.96), /thickness_um must not be negative/],
     [() => thicknessUm('Cu2+ + 2 e- -> Cu', 200, -1, 8.96), /time_s must not be negative/],
