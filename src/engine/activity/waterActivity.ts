@@ -84,3 +84,29 @@ export function waterActivity(
   const [phi, total] = phiAndTotal(saltOrSpecies, molalityOrValues, tempC, opts);
   return Math.exp(-phi * WATER_MOLAR_MASS_KG_PER_MOL * total);
 }
+
+const WATER_IN = /^H(?:2|\u2082)O(?:\s*\(\s*l\s*\))?\s+in\s+(\S.*)$/i;
+
+/**
+ * The electrolyte of a water-activity header `H2O in <salt>` (docs/notation.md, "Species
+ * headers"), or null where the text is not one. The salt must have Pitzer parameters: the
+ * column's values are then the salt's molality in mol/kg, and a(H2O) is
+ * {@link waterActivity} of that salt at that molality and the call's temperature.
+ *
+ * Domain: any text (case and spaces around "in" do not matter; `H₂O` and `H2O(l)` are read).
+ * Precision: exact (text only).
+ *
+ * @param body the header without its side qualifier
+ * @throws EngineError `parse`/`argument` for a salt that cannot be read; `notFound` for a salt
+ *   without Pitzer parameters (the message lists the salts held)
+ * @example
+ * waterElectrolyteOf('H2O in NaCl') // 'NaCl'
+ * waterElectrolyteOf('H2O') // null
+ */
+export function waterElectrolyteOf(body: string): string | null {
+  const m = WATER_IN.exec(body.trim());
+  if (!m) return null;
+  const salt = (m[1] as string).trim();
+  compilePitzerSalt(salt);
+  return salt;
+}
