@@ -14,12 +14,19 @@ function isSpeciesList(x: unknown): x is readonly string[] {
   return Array.isArray(x);
 }
 
-function phiAndTotal(
+/**
+ * The arguments of the water functions: a salt formula or the species of a row, the salt's
+ * molality (mol/kg) or one molality per species, the temperature in °C (default 25), and
+ * `{ extrapolate: true }` to accept results outside the ranges.
+ */
+export type WaterArgs = [
   saltOrSpecies: string | readonly string[],
   molalityOrValues: number | readonly number[],
-  tempC: number,
-  opts: ActivityOptions | undefined,
-): [number, number] {
+  tempC?: number,
+  opts?: ActivityOptions,
+];
+
+function phiAndTotal(...[saltOrSpecies, molalityOrValues, tempC = 25, opts]: WaterArgs): [number, number] {
   if (isSpeciesList(saltOrSpecies)) {
     if (!Array.isArray(molalityOrValues)) {
       throw new EngineError(
@@ -53,13 +60,8 @@ function phiAndTotal(
  * @example
  * osmoticCoefficient('NaCl', 1) // 0.9359
  */
-export function osmoticCoefficient(
-  saltOrSpecies: string | readonly string[],
-  molalityOrValues: number | readonly number[],
-  tempC = 25,
-  opts?: ActivityOptions,
-): number {
-  return phiAndTotal(saltOrSpecies, molalityOrValues, tempC, opts)[0];
+export function osmoticCoefficient(...args: WaterArgs): number {
+  return phiAndTotal(...args)[0];
 }
 
 /**
@@ -75,13 +77,8 @@ export function osmoticCoefficient(
  * @example
  * waterActivity('NaCl', 1) // 0.9668
  */
-export function waterActivity(
-  saltOrSpecies: string | readonly string[],
-  molalityOrValues: number | readonly number[],
-  tempC = 25,
-  opts?: ActivityOptions,
-): number {
-  const [phi, total] = phiAndTotal(saltOrSpecies, molalityOrValues, tempC, opts);
+export function waterActivity(...args: WaterArgs): number {
+  const [phi, total] = phiAndTotal(...args);
   return Math.exp(-phi * WATER_MOLAR_MASS_KG_PER_MOL * total);
 }
 
