@@ -31,6 +31,7 @@ import { pitzerMeanActivityCoefficient, type ActivityOptions } from './activity/
 import { pitzerMixture } from './activity/pitzerMixing';
 import { parseSalt } from './activity/salt';
 import { checkCompositionValue, finiteResult } from './activity/checks';
+import { isWaterElectrolyteHeader } from './activity/waterActivity';
 
 export type { ActivityOptions } from './activity/pitzer';
 
@@ -246,6 +247,14 @@ function speciesInfo(text: string, argName: string): SpeciesInfo {
     if (q) {
       side = (q[1] as string).toLowerCase() === 'left' ? -1 : 1;
       body = text.slice(q[0].length);
+    }
+    if (isWaterElectrolyteHeader(body)) {
+      throw new EngineError(
+        'argument',
+        `${argName} ${quote(text)} is a water-activity header of the Nernst functions; here list the ions ` +
+          `of the salt (e.g. "Na+", "Cl-") with their molalities, or use WATERACTIVITY for a(H2O).`,
+        argName,
+      );
     }
     const s = parseSpecies(body, argName);
     if (s.isElectron) {

@@ -28,7 +28,11 @@ describe('the header grammar', () => {
   it('a salt without Pitzer parameters is notFound, naming the salts held (H2SO4 is not held)', () => {
     const err = engineErrorOf(() => waterElectrolyteOf('H2O in H2SO4'));
     expect(err.kind).toBe('notFound');
-    expect(err.message).toMatch(/NaCl/);
+    expect(err.message).toMatch(/"H2SO4".*NaCl.*give a\(H2O\) itself in an "H2O" column/);
+  });
+  it('ACTIVITY and IONICSTR, which take ions, say what to give instead', () => {
+    const e = callFunction('ACTIVITY', [[['Na+', 'Cl-', 'H2O in NaCl']], [[1, 1, 1]]])[0]![0];
+    expect(isCellError(e) && e.message).toMatch(/water-activity header.*WATERACTIVITY/);
   });
 });
 

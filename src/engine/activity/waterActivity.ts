@@ -3,7 +3,8 @@
  * model: ln a_w = −φ · M_w · Σ mᵢ, with M_w = 0.01801528 kg/mol (molar mass of water,
  * IUPAC atomic weights) and Σ mᵢ the total solute molality (ν·m for one salt).
  */
-import { EngineError } from '../errors';
+import { EngineError, quote } from '../errors';
+import { PITZER_BINARY } from '../data/pitzerParameters';
 import { compilePitzerSalt, pitzerOsmoticCoefficient, type ActivityOptions } from './pitzer';
 import { pitzerMixture } from './pitzerMixing';
 
@@ -104,6 +105,27 @@ export function waterElectrolyteOf(body: string): string | null {
   const m = WATER_IN.exec(body.trim());
   if (!m) return null;
   const salt = (m[1] as string).trim();
-  compilePitzerSalt(salt);
+  try {
+    compilePitzerSalt(salt);
+  } catch (e) {
+    if (!(e instanceof EngineError) || e.kind !== 'notFound') throw e;
+    throw new EngineError(
+      'notFound',
+      `${quote(body.trim())} needs Pitzer parameters for ${quote(salt)}, and none are held; the salts held are ` +
+        `${PITZER_BINARY.map((r) => r.salt).join(', ')}. Or give a(H2O) itself in an "H2O" column.`,
+      'species',
+    );
+  }
   return salt;
+}
+
+/**
+ * True where a species text has the form `H2O in <salt>` (any salt): for messages of the
+ * functions that do not take it.
+ *
+ * @example
+ * isWaterElectrolyteHeader('H2O in NaCl') // true
+ */
+export function isWaterElectrolyteHeader(text: string): boolean {
+  return WATER_IN.test(text.trim());
 }
