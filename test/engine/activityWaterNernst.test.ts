@@ -54,7 +54,15 @@ describe('E with a(H2O) from the electrolyte', () => {
   });
 
   it('POTENTIAL over a column of cases (the sweep path) gives the same shifts', () => {
-    const out = callFunction('POTENTIAL', [O2, [['O2', 'H+', 'H2O in NaCl']], [[1, 1, 0], [1, 1, 1], [1, 1, 4]]]);
+    const out = callFunction('POTENTIAL', [
+      O2,
+      [['O2', 'H+', 'H2O in NaCl']],
+      [
+        [1, 1, 0],
+        [1, 1, 1],
+        [1, 1, 4],
+      ],
+    ]);
     const e0 = out[0]![0] as number; // a_w = 1 at m = 0
     expectNear(e0, 1.229, 0.002); // OpenStax Chemistry 2e, Appendix L (E° of O2/H2O), read
     // φ NaCl 1 mol/kg 0.9355 (Robinson & Stokes 1959, Appendix 8.3, from memory)
@@ -81,7 +89,12 @@ describe('the ranges of the model apply', () => {
     expect(isCellError(e) && e.message).toMatch(/25 °C only/);
   });
   it('NaCl within 0–50 °C uses its temperature dependence; a column of temperatures is read per case', () => {
-    const out = callFunction('POTENTIAL', [O2, [['O2', 'H+', 'H2O in NaCl']], [[1, 1, 4]], [[25], [45], [60]]]);
+    const out = callFunction('POTENTIAL', [
+      O2,
+      [['O2', 'H+', 'H2O in NaCl']],
+      [[1, 1, 4]],
+      [[25], [45], [60]],
+    ]);
     expect(typeof out[0]![0]).toBe('number');
     expect(typeof out[1]![0]).toBe('number');
     expect(isCellError(out[2]![0]) && (out[2]![0] as { message: string }).message).toMatch(/0–50 °C/);
@@ -93,7 +106,8 @@ describe('the ranges of the model apply', () => {
   });
   it('"H2O" and "H2O in NaCl" together name water twice', () => {
     expect(
-      engineErrorOf(() => bindSpecies(compiledReaction(O2, null), ['O2', 'H+', 'H2O', 'H2O in NaCl'])).message,
+      engineErrorOf(() => bindSpecies(compiledReaction(O2, null), ['O2', 'H+', 'H2O', 'H2O in NaCl']))
+        .message,
     ).toMatch(/twice/);
   });
 });

@@ -83,15 +83,29 @@ describe('Pitzer φ against the Gibbs–Duhem integral of Robinson & Stokes Appe
     for (const { m, integral } of gibbsDuhem(rows)) cases.push([salt, m1, m, integral, tolPhi]);
   }
   it.each(cases)('%s from %d to %d mol/kg: Δ[m(φ − 1)] = %d within %d·m', (salt, m1, m2, integral, tol) => {
-    const model = m2 * (pitzerOsmoticCoefficient(salt, m2) - 1) - m1 * (pitzerOsmoticCoefficient(salt, m1) - 1);
+    const model =
+      m2 * (pitzerOsmoticCoefficient(salt, m2) - 1) - m1 * (pitzerOsmoticCoefficient(salt, m1) - 1);
     // the difference of m(φ − 1), divided by m₂, is a difference in φ
     expect(Math.abs(model - integral) / m2).toBeLessThanOrEqual(tol);
   });
 
   it('every required salt has φ tested at four or more molalities, the largest at or near its limit', () => {
     const limit: Record<string, number> = {
-      NaCl: 6, KCl: 4.8, LiCl: 6, HCl: 6, NaOH: 6, KOH: 5.5, CaCl2: 2.5, MgCl2: 4.5, ZnCl2: 1.2,
-      Na2SO4: 4, K2SO4: 0.7, MgSO4: 3, CuSO4: 1.4, ZnSO4: 3.5, NiSO4: 2.5,
+      NaCl: 6,
+      KCl: 4.8,
+      LiCl: 6,
+      HCl: 6,
+      NaOH: 6,
+      KOH: 5.5,
+      CaCl2: 2.5,
+      MgCl2: 4.5,
+      ZnCl2: 1.2,
+      Na2SO4: 4,
+      K2SO4: 0.7,
+      MgSO4: 3,
+      CuSO4: 1.4,
+      ZnSO4: 3.5,
+      NiSO4: 2.5,
     };
     for (const [salt, max] of Object.entries(limit)) {
       const ms = new Set<number>();
@@ -112,7 +126,13 @@ describe('Pitzer φ against the Gibbs–Duhem integral of Robinson & Stokes Appe
  * Cφ 0.0250, α1 1.4, α2 12, b 1.2; A_φ 0.3915; all from memory). Not the engine's code: g(x) and
  * g'(x) of Pitzer 1973 and B^γ = 2B + I B'.
  */
-function byHand2to2(m: number, b0: number, b1: number, b2: number, cphi: number): { gamma: number; phi: number } {
+function byHand2to2(
+  m: number,
+  b0: number,
+  b1: number,
+  b2: number,
+  cphi: number,
+): { gamma: number; phi: number } {
   const A = 0.3915;
   const I = 4 * m;
   const s = Math.sqrt(I);
