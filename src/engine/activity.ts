@@ -573,8 +573,9 @@ export function ionActivityCoefficient(
  * Domain: cation charge a positive whole number, anion charge a negative whole number;
  * ionic strength or molality finite ≥ 0 mol/kg and within the model's range (argument error
  * naming the range and a better model unless `opts.extrapolate`); 0 ≤ temp_C ≤ 100.
- * Precision: Pitzer about ±0.005 for 1:1 salts to 6 mol/kg, ±2% for 2:1/1:2, more for 2:2
- * (see the tests); the Debye–Hückel family as {@link activityCoefficient}. No allocation.
+ * Precision: Pitzer as {@link pitzerMeanActivityCoefficient} (about 1% for 1:1 salts, 2% for
+ * 2:1/1:2; the 2:2 sulfates see there); the Debye–Hückel family as {@link activityCoefficient}.
+ * No allocation.
  *
  * @throws EngineError `argument` for bad inputs, missing sizes or out of range; `notFound`
  *   for a salt without Pitzer parameters; `parse` for bad salt text; `range` (see above)

@@ -292,8 +292,11 @@ function finite(x: number, what: string): number {
  * Na2SO4, K2SO4, MgSO4, CuSO4, ZnSO4, NiSO4, CaSO4); molality 0 to the salt's published
  * limit (mol/kg); temperature within the parameters' range (25 °C for most salts; 0–50 °C
  * for NaCl). Outside those, an argument error unless `extrapolate`. Precision: the model's
- * (about ±0.005 in γ± for 1:1 salts below 6 mol/kg, ±2% for 2:1, ±3–5% for 2:2 salts at
- * their limits); float64 evaluation. No allocation after the first call per salt.
+ * (against Robinson & Stokes 1959: γ± within 1% for the 1:1 chlorides to 4 mol/kg and 2–3% at
+ * 6 mol/kg or for the hydroxides, 1.5% for 2:1, 2.5% for 1:2; for the 2:2 sulfates φ within
+ * about 0.02 and the shape γ±(m)/γ±(0.1) within 2.5%, while the table's γ± differ by a
+ * constant factor per salt, up to 1.16 for MgSO4 — see docs/data-sources.md); float64
+ * evaluation. No allocation after the first call per salt.
  *
  * @param saltText the salt formula
  * @param molalityMolKg the salt's molality m, mol/kg
