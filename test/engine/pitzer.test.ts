@@ -49,7 +49,7 @@ const GAMMA: [string, number, number, number][] = [
   ['Na2SO4', 2, 0.154, 0.025], ['Na2SO4', 3, 0.139, 0.025],
   ['K2SO4', 0.1, 0.441, 0.015], ['K2SO4', 0.2, 0.360, 0.015], ['K2SO4', 0.3, 0.316, 0.015],
   ['K2SO4', 0.5, 0.262, 0.015], ['K2SO4', 0.7, 0.233, 0.015],
-  // 2:2 sulfates (Pitzer & Mayorga 1974, Table I, parameters from memory). The model stands above
+  // 2:2 sulfates (Pitzer & Mayorga 1974, the table of 2:2 parameters; from memory, table number not recalled). The model stands above
   // (MgSO4, ZnSO4, NiSO4) or at (CuSO4) these printed γ± by a factor that is the same at every
   // molality of a salt (MgSO4 1.11–1.16, ZnSO4 1.06–1.08, NiSO4 1.04–1.05, CuSO4 0.99–1.00): the
   // shape γ±(m)/γ±(0.1), which the measured isopiestic φ fix, agrees within 2.5% (4.5% for MgSO4

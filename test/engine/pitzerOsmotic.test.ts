@@ -122,7 +122,7 @@ describe('Pitzer φ against the Gibbs–Duhem integral of Robinson & Stokes Appe
 
 /**
  * The Pitzer equations for a 2:2 salt written out from the publications (Pitzer 1973; Pitzer &
- * Mayorga 1974, J. Solution Chem. 3, 539, Table I: MgSO4 β(0) 0.2210, β(1) 3.343, β(2) −37.23,
+ * Mayorga 1974, J. Solution Chem. 3, 539, its table of 2:2 parameters: MgSO4 β(0) 0.2210, β(1) 3.343, β(2) −37.23,
  * Cφ 0.0250, α1 1.4, α2 12, b 1.2; A_φ 0.3915; all from memory). Not the engine's code: g(x) and
  * g'(x) of Pitzer 1973 and B^γ = 2B + I B'.
  */
@@ -148,7 +148,7 @@ function byHand2to2(
   return { gamma: Math.exp(lnGamma), phi };
 }
 
-describe('2:2 sulfates by hand (Pitzer & Mayorga 1974 Table I, from memory; derived)', () => {
+describe('2:2 sulfates by hand (Pitzer & Mayorga 1974 parameters, from memory; derived)', () => {
   // prettier-ignore
   const P: [string, number, number, number, number][] = [
     ['MgSO4', 0.221, 3.343, -37.23, 0.025],
