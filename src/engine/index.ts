@@ -184,7 +184,12 @@ export {
   pitzerIonActivityCoefficients,
   type PitzerMixtureResult,
 } from './activity/pitzerMixing';
-export { waterActivity, osmoticCoefficient, WATER_MOLAR_MASS_KG_PER_MOL } from './activity/waterActivity';
+export {
+  waterActivity,
+  osmoticCoefficient,
+  WATER_MOLAR_MASS_KG_PER_MOL,
+  waterElectrolyteOf,
+} from './activity/waterActivity';
 export { molalityFromMolarity, saltMolarMass, heldSolutionDensity } from './activity/molality';
 export { parseSalt, type SaltIons } from './activity/salt';
 export { PITZER_BINARY, PITZER_THETA, PITZER_PSI, type PitzerBinaryRow } from './data/pitzerParameters';
@@ -269,4 +274,3 @@ export { ALLOYS, G102_VALENCES } from './data/alloys';
 export { ANODE_MATERIALS, ANODE_UTILISATION, DEFAULT_UTILISATION } from './data/anodes';
 export { LIMITING_IONIC_CONDUCTIVITY_S_CM2_MOL } from './data/conductivities';
 export { tableCycleProblems, CYCLE_TOLERANCE_V } from './table/cycles';
-export { waterElectrolyteOf } from './activity/waterActivity';
