@@ -184,7 +184,12 @@ export {
   pitzerIonActivityCoefficients,
   type PitzerMixtureResult,
 } from './activity/pitzerMixing';
-export { waterActivity, osmoticCoefficient, WATER_MOLAR_MASS_KG_PER_MOL } from './activity/waterActivity';
+export {
+  waterActivity,
+  osmoticCoefficient,
+  WATER_MOLAR_MASS_KG_PER_MOL,
+  waterElectrolyteOf,
+} from './activity/waterActivity';
 export { molalityFromMolarity, saltMolarMass, heldSolutionDensity } from './activity/molality';
 export { parseSalt, type SaltIons } from './activity/salt';
 export { PITZER_BINARY, PITZER_THETA, PITZER_PSI, type PitzerBinaryRow } from './data/pitzerParameters';

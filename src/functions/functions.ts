@@ -205,7 +205,7 @@ export function CONCCELL(reaction: any[][], value_left: any[][], value_right: an
  * @param [model] Activity model: "limiting" (Debye–Hückel limiting law, I ≤ 0.005 mol/kg), "extended" (with ion size, I ≤ 0.1 mol/kg), "davies" (I ≤ 0.5 mol/kg) or "pitzer" (ACTIVITY only: the whole composition, concentrated and mixed electrolytes); one of "limiting", "extended", "davies", "pitzer" (default: "davies")
  * @param [ion_size] Ion-size parameter å in Å, for the extended model; > 0 Å (default: Kielland's value for the ion)
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
- * @param [extrapolate] TRUE to accept a result outside the model’s range of validity; by default such a case is #VALUE! naming the range and a better model (default: false)
+ * @param [extrapolate] TRUE to accept a result outside the model’s range of validity (ionic strength, molality or temperature); by default such a case is #VALUE! naming the range and a better model (default: false)
  * @returns γ (dimensionless), one row per case
  */
 export function ACTCOEF(species: any[][], ionic_strength: any[][], model?: any[][], ion_size?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
@@ -221,7 +221,7 @@ export function ACTCOEF(species: any[][], ionic_strength: any[][], model?: any[]
  * @param [ionic_strength] Ionic strength in mol/kg; one cell or a column of cases; ≥ 0 mol/kg (default: from the row)
  * @param [model] Activity model: "limiting" (Debye–Hückel limiting law, I ≤ 0.005 mol/kg), "extended" (with ion size, I ≤ 0.1 mol/kg), "davies" (I ≤ 0.5 mol/kg) or "pitzer" (ACTIVITY only: the whole composition, concentrated and mixed electrolytes); one of "limiting", "extended", "davies", "pitzer" (default: "davies")
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
- * @param [extrapolate] TRUE to accept a result outside the model’s range of validity; by default such a case is #VALUE! naming the range and a better model (default: false)
+ * @param [extrapolate] TRUE to accept a result outside the model’s range of validity (ionic strength, molality or temperature); by default such a case is #VALUE! naming the range and a better model (default: false)
  * @returns Activities, one row per case and one column per species
  */
 export function ACTIVITY(species: any[][], values: any[][], ionic_strength?: any[][], model?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
@@ -558,7 +558,7 @@ export function ISERESPONSE(E0_V: any[][], slope_V: any[][], primary: any[][], a
  * @param molality Molality of the salt in mol/kg; one cell or a column of cases; ≥ 0 mol/kg
  * @param [model] Activity model: "pitzer" (concentrated salts, to each salt’s published limit), "davies" (I ≤ 0.5 mol/kg), "extended" (I ≤ 0.1 mol/kg) or "limiting" (I ≤ 0.005 mol/kg); one of "pitzer", "davies", "extended", "limiting" (default: "pitzer")
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
- * @param [extrapolate] TRUE to accept a result outside the model’s range of validity (molality, ionic strength or temperature); by default such a case is #VALUE! naming the range (default: false)
+ * @param [extrapolate] TRUE to accept a result outside the model’s range of validity (ionic strength, molality or temperature); by default such a case is #VALUE! naming the range and a better model (default: false)
  * @returns γ± (dimensionless, molal scale), one row per case
  */
 export function MEANACTCOEF(salt: any[][], molality: any[][], model?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
@@ -572,7 +572,7 @@ export function MEANACTCOEF(salt: any[][], molality: any[][], model?: any[][], t
  * @param salt_or_species A salt such as "NaCl" (then values are its molality), or the ions of a mixture such as "Na+", "Mg2+", "Cl-"
  * @param molality_or_values Molality of the salt in mol/kg (one cell or a column of cases), or one molality per ion column, one row per case
  * @param [temp_C] Temperature in °C; one cell or a column of cases; 0–100 °C (default 25)
- * @param [extrapolate] TRUE to accept a result outside the model’s range of validity (molality, ionic strength or temperature); by default such a case is #VALUE! naming the range (default: false)
+ * @param [extrapolate] TRUE to accept a result outside the model’s range of validity (ionic strength, molality or temperature); by default such a case is #VALUE! naming the range and a better model (default: false)
  * @returns a(H2O) (dimensionless, pure water 1), one row per case
  */
 export function WATERACTIVITY(salt_or_species: any[][], molality_or_values: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {

@@ -11,6 +11,7 @@ import {
   pitzerMixture,
   waterActivity,
 } from '../../src/engine';
+import { callFunction, isCellError } from '../../src/functions/catalogue';
 import { engineErrorOf } from '../support';
 
 describe('ranges as data (common practice; Davies 1962)', () => {
@@ -130,5 +131,58 @@ describe('out of range: an argument error naming the range and a better model', 
     expect(meanActivityCoefficient('NaCl', 6.5, 'pitzer', 25, x)).toBeGreaterThan(1);
     expect(meanActivityCoefficient('CuSO4', 0.1, 'pitzer', 40, x)).toBeGreaterThan(0.1);
     expect(activities(['Na+', 'Cl-'], [1, 1], 'davies', null, 25, x)[0]).toBeGreaterThan(0);
+  });
+});
+
+describe('every Pitzer salt refuses molalities past its published limit and temperatures past its range', () => {
+  // The published upper molality of each fit (Pitzer & Mayorga 1973, Table II; 1974, Table I;
+  // CaSO4: Harvie, Møller & Weare 1984; all from memory), written here, not read from the table
+  // prettier-ignore
+  const LIMITS: [string, number, string][] = [
+    ['HCl', 6, '25 °C only'], ['LiCl', 6, '25 °C only'], ['NaCl', 6, '0–50 °C'], ['KCl', 4.8, '25 °C only'],
+    ['NaOH', 6, '25 °C only'], ['KOH', 5.5, '25 °C only'], ['CaCl2', 2.5, '25 °C only'], ['MgCl2', 4.5, '25 °C only'],
+    ['ZnCl2', 1.2, '25 °C only'], ['NiCl2', 2.5, '25 °C only'], ['CuCl2', 2, '25 °C only'],
+    ['Na2SO4', 4, '25 °C only'], ['K2SO4', 0.7, '25 °C only'], ['MgSO4', 3, '25 °C only'],
+    ['CuSO4', 1.4, '25 °C only'], ['ZnSO4', 3.5, '25 °C only'], ['NiSO4', 2.5, '25 °C only'],
+    ['CaSO4', 0.015, '25 °C only'],
+  ];
+  it.each(LIMITS)('%s: 0–%d mol/kg, %s', (salt, max, tempRange) => {
+    expect(meanActivityCoefficient(salt, max)).toBeGreaterThan(0);
+    const past = engineErrorOf(() => meanActivityCoefficient(salt, max * 1.01));
+    expect([past.kind, past.argument]).toEqual(['argument', 'molality']);
+    expect(past.message).toContain(`0–${max} mol/kg`);
+    expect(past.message).toMatch(/extrapolate/);
+    expect(engineErrorOf(() => waterActivity(salt, max * 1.01)).message).toContain(`0–${max} mol/kg`);
+    const hot = engineErrorOf(() => meanActivityCoefficient(salt, max / 2, 'pitzer', 55));
+    expect([hot.kind, hot.argument]).toEqual(['argument', 'temp_C']);
+    expect(hot.message).toContain(tempRange);
+    expect(hot.message).toMatch(/"davies"/);
+    // the explicit argument lets the case through, with the model's own number
+    expect(meanActivityCoefficient(salt, max * 1.01, 'pitzer', 25, { extrapolate: true })).toBeGreaterThan(0);
+  });
+});
+
+describe('through the worksheet functions: #VALUE! naming the range, unless extrapolate is TRUE', () => {
+  it.each([
+    // ACTCOEF(species, ionic_strength, model, ion_size, temp_C, extrapolate)
+    ['ACTCOEF', ['Cu2+', 4.7], /I ≤ 0\.5 mol\/kg.*pitzer/, ['Cu2+', 4.7, 'davies', null, 25, true]],
+    ['ACTCOEF', ['Na+', 0.2, 'limiting'], /I ≤ 0\.005 mol\/kg/, ['Na+', 0.2, 'limiting', null, 25, true]],
+    ['ACTCOEF', ['Na+', 0.3, 'extended'], /I ≤ 0\.1 mol\/kg/, ['Na+', 0.3, 'extended', null, 25, true]],
+    ['ACTCOEF', ['Na+', 0.001, 'davies', null, 105], /0 and 100 °C/, null],
+    // MEANACTCOEF(salt, molality, model, temp_C, extrapolate)
+    ['MEANACTCOEF', ['NaCl', 6.5], /0–6 mol\/kg/, ['NaCl', 6.5, 'pitzer', 25, true]],
+    ['MEANACTCOEF', ['MgSO4', 1, 'pitzer', 40], /25 °C only/, ['MgSO4', 1, 'pitzer', 40, true]],
+    ['MEANACTCOEF', ['NaCl', 1, 'davies'], /I ≤ 0\.5/, ['NaCl', 1, 'davies', 25, true]],
+    // WATERACTIVITY(salt_or_species, molality_or_values, temp_C, extrapolate)
+    ['WATERACTIVITY', ['K2SO4', 1], /0–0\.7 mol\/kg/, ['K2SO4', 1, 25, true]],
+  ] as [string, unknown[], RegExp, unknown[] | null][])('%s(%j)', (id, args, message, allowed) => {
+    const e = callFunction(id, args as never)[0]![0];
+    expect(isCellError(e) && e.code).toBe('#VALUE!');
+    expect(isCellError(e) && e.message).toMatch(message);
+    if (allowed) {
+      const v = callFunction(id, allowed as never)[0]![0];
+      expect(typeof v).toBe('number');
+      expect(v as number).toBeGreaterThan(0);
+    }
   });
 });

@@ -30,6 +30,7 @@ import {
   type PitzerBinaryRow,
 } from '../data/pitzerParameters';
 import { binaryAt, pitzerAphi, pitzerPair, type ActivityOptions } from './pitzer';
+import { checkCompositionValue, finiteResult } from './checks';
 
 const THETA = new Map<string, number>();
 for (const r of PITZER_THETA) THETA.set(pairKey(r.ions[0], r.ions[1]), r.theta);
@@ -190,22 +191,8 @@ export function pitzerMixture(
   for (let i = 0; i < species.length; i++) {
     const info = readSpecies(species[i] as string);
     const m = molalities[i] as number;
-    if (info.ph) {
-      if (typeof m !== 'number' || !Number.isFinite(m))
-        throw new EngineError(
-          'argument',
-          `the pH value must be a finite number; got ${String(m)}.`,
-          'values',
-        );
-      continue;
-    }
-    if (typeof m !== 'number' || !Number.isFinite(m) || m < 0) {
-      throw new EngineError(
-        'argument',
-        `the value of ${info.label} must be a finite molality ≥ 0 mol/kg; got ${String(m)}.`,
-        'values',
-      );
-    }
+    checkCompositionValue(m, info.label, info.ph);
+    if (info.ph) continue;
     if (info.neutral) {
       if (!info.water) neutralSum += m;
       continue;
@@ -333,29 +320,9 @@ export function pitzerMixture(
       Bphi[k] = bf;
       C[k] = (p[3] as number) / (2 * Math.sqrt((cations[i] as Ion).z * (anions[j] as Ion).z));
     }
-  // like-charge Φ, Φ', Φφ
-  const phiC = new Float64Array(nc * nc);
-  const phiCp = new Float64Array(nc * nc);
-  const phiA = new Float64Array(na * na);
-  const phiAp = new Float64Array(na * na);
-  for (let i = 0; i < nc; i++)
-    for (let k = i + 1; k < nc; k++) {
-      const ci = cations[i] as Ion;
-      const ck = cations[k] as Ion;
-      pitzerETheta(ci.z, ck.z, I, aphi, et);
-      const th = THETA.get(pairKey(ci.label, ck.label)) ?? 0;
-      phiC[i * nc + k] = phiC[k * nc + i] = th + (et[0] as number);
-      phiCp[i * nc + k] = phiCp[k * nc + i] = et[1] as number;
-    }
-  for (let j = 0; j < na; j++)
-    for (let k = j + 1; k < na; k++) {
-      const aj = anions[j] as Ion;
-      const ak = anions[k] as Ion;
-      pitzerETheta(aj.z, ak.z, I, aphi, et);
-      const th = THETA.get(pairKey(aj.label, ak.label)) ?? 0;
-      phiA[j * na + k] = phiA[k * na + j] = th + (et[0] as number);
-      phiAp[j * na + k] = phiAp[k * na + j] = et[1] as number;
-    }
+  // like-charge Φ (θ + Eθ) and Φ' (Eθ') of the cations and of the anions
+  const [phiC, phiCp] = likeChargePhi(cations, I, aphi);
+  const [phiA, phiAp] = likeChargePhi(anions, I, aphi);
   const psi = (x: string, y: string, common: string): number => PSI.get(`${pairKey(x, y)}|${common}`) ?? 0;
 
   let F = fgam;
@@ -369,24 +336,10 @@ export function pitzerMixture(
       CC += mm * (C[k] as number);
       osm += mm * ((Bphi[k] as number) + Z * (C[k] as number));
     }
-  for (let i = 0; i < nc; i++)
-    for (let k = i + 1; k < nc; k++) {
-      const mi = (cations[i] as Ion).m;
-      const mk = (cations[k] as Ion).m;
-      F += mi * mk * (phiCp[i * nc + k] as number);
-      let s = (phiC[i * nc + k] as number) + I * (phiCp[i * nc + k] as number);
-      for (const a of anions) s += a.m * psi((cations[i] as Ion).label, (cations[k] as Ion).label, a.label);
-      osm += mi * mk * s;
-    }
-  for (let j = 0; j < na; j++)
-    for (let k = j + 1; k < na; k++) {
-      const mj = (anions[j] as Ion).m;
-      const mk = (anions[k] as Ion).m;
-      F += mj * mk * (phiAp[j * na + k] as number);
-      let s = (phiA[j * na + k] as number) + I * (phiAp[j * na + k] as number);
-      for (const c of cations) s += c.m * psi((anions[j] as Ion).label, (anions[k] as Ion).label, c.label);
-      osm += mj * mk * s;
-    }
+  const sumsC = likeChargeSums(cations, anions, phiC, phiCp, I, psi);
+  const sumsA = likeChargeSums(anions, cations, phiA, phiAp, I, psi);
+  F += sumsC[0] + sumsA[0];
+  osm += sumsC[1] + sumsA[1];
   // ln γ of one ion (Harvie, Møller & Weare 1984, eqs. 3 and 4): the cation and anion
   // equations are mirrors, so one function serves both with the roles of the ions swapped.
   const lnGamma = (
@@ -441,14 +394,59 @@ export function pitzerMixture(
     }
     gamma[i] = g;
   }
-  if (!Number.isFinite(phi)) {
-    throw new EngineError(
-      'range',
-      'the Pitzer model gives an osmotic coefficient outside the number range.',
-      'values',
-    );
-  }
-  return { gamma, osmoticCoefficient: phi, ionicStrengthMolKg: I, totalMolalityMolKg: total };
+  const osmotic = finiteResult(
+    phi,
+    'the Pitzer model gives an osmotic coefficient outside the number range.',
+    'values',
+  );
+  return { gamma, osmoticCoefficient: osmotic, ionicStrengthMolKg: I, totalMolalityMolKg: total };
+}
+
+/**
+ * Φ_ij = θ_ij + Eθ_ij(I) and Φ'_ij = Eθ'_ij(I) of every pair of like-charged ions (Pitzer 1975;
+ * θ from Harvie, Møller & Weare 1984, 0 where not held), as symmetric n×n matrices.
+ */
+function likeChargePhi(ions: readonly Ion[], I: number, aphi: number): [Float64Array, Float64Array] {
+  const n = ions.length;
+  const phi = new Float64Array(n * n);
+  const phip = new Float64Array(n * n);
+  for (let i = 0; i < n; i++)
+    for (let k = i + 1; k < n; k++) {
+      const a = ions[i] as Ion;
+      const b = ions[k] as Ion;
+      pitzerETheta(a.z, b.z, I, aphi, et);
+      phi[i * n + k] = phi[k * n + i] = (THETA.get(pairKey(a.label, b.label)) ?? 0) + (et[0] as number);
+      phip[i * n + k] = phip[k * n + i] = et[1] as number;
+    }
+  return [phi, phip];
+}
+
+/**
+ * The like-charge terms of one sign (Harvie, Møller & Weare 1984, eqs. 2 and 5): Σ m m' Φ' for
+ * F, and Σ m m' (Φ + I Φ' + Σ m'' ψ) for the osmotic sum, `other` the ions of the other sign.
+ */
+function likeChargeSums(
+  own: readonly Ion[],
+  other: readonly Ion[],
+  phi: Float64Array,
+  phip: Float64Array,
+  I: number,
+  psi: (x: string, y: string, common: string) => number,
+): [number, number] {
+  const n = own.length;
+  let f = 0;
+  let osm = 0;
+  for (let i = 0; i < n; i++)
+    for (let k = i + 1; k < n; k++) {
+      const a = own[i] as Ion;
+      const b = own[k] as Ion;
+      const mm = a.m * b.m;
+      f += mm * (phip[i * n + k] as number);
+      let sum = (phi[i * n + k] as number) + I * (phip[i * n + k] as number);
+      for (const o of other) sum += o.m * psi(a.label, b.label, o.label);
+      osm += mm * sum;
+    }
+  return [f, osm];
 }
 
 function gcdIons(a: number, b: number): number {

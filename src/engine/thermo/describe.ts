@@ -8,6 +8,7 @@ import { formatReaction, withActivity } from '../notation/reaction';
 import { type Species, formatSpecies, phaseOf, elementsOf } from '../notation/species';
 import { type Binding } from './nernstForm';
 import { pKw } from './water';
+import { waterActivity } from '../activity/waterActivity';
 
 function fmtV(x: number): string {
   return `${Number(x.toFixed(6))} V`;
@@ -145,7 +146,9 @@ export function describeDiagram(
               ? Math.pow(10, -v)
               : binding.isPH[i] === 2
                 ? Math.pow(10, v - pKw(25))
-                : v;
+                : binding.isPH[i] === 3
+                  ? waterActivity(binding.electrolyte[i]!, v)
+                  : v;
         }
         if (t.inline !== undefined) return t.inline;
       }

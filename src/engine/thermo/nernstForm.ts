@@ -21,6 +21,7 @@ import { type Resolved, type ResolvedHalf, standardPotentialV } from '../table/r
 import { slopePerElectronAtKelvin, kelvinFromCelsius } from '../constants';
 import { pKw } from './water';
 import { splitSpeciesHeader } from '../notation/speciesHeader';
+import { waterActivity, waterElectrolyteOf } from '../activity/waterActivity';
 
 /** One species' place in the Nernst equation. */
 export interface NernstTerm {
@@ -99,6 +100,8 @@ export interface SpeciesHeader {
   readonly side: 'left' | 'right' | null;
   readonly key: string;
   readonly species: Species | null;
+  /** for `H2O in <salt>`: the salt whose molality the column holds (a(H2O) by Pitzer) */
+  readonly electrolyte?: string;
 }
 
 const headerCache = new Map<string, SpeciesHeader>();
@@ -118,8 +121,10 @@ export function parseSpeciesHeader(text: string): SpeciesHeader {
   let h: SpeciesHeader;
   if (isPH) h = { text, kind: 'pH', side, key: 'H|1', species: null };
   else {
-    const s = parseSpecies(body, 'species');
+    const electrolyte = waterElectrolyteOf(body);
+    const s = parseSpecies(electrolyte === null ? body : 'H2O', 'species');
     h = { text, kind: 'species', side, key: speciesKey(s), species: s };
+    if (electrolyte !== null) h = { ...h, electrolyte };
   }
   if (headerCache.size > 10000) headerCache.clear();
   headerCache.set(text, h);
@@ -131,8 +136,13 @@ export interface Binding {
   readonly form: NernstForm;
   /** column index per term, or −1 (then `fixedLog` holds its contribution) */
   readonly column: Int32Array;
-  /** 1 where the column is a pH giving a(H+) (log10 a = −pH); 2 where it gives a(OH-) (log10 a = pH − pKw(T)) */
+  /**
+   * 1 where the column is a pH giving a(H+) (log10 a = −pH); 2 where it gives a(OH-)
+   * (log10 a = pH − pKw(T)); 3 where it is the molality of an electrolyte giving a(H2O)
+   */
   readonly isPH: Uint8Array;
+  /** per term: the salt of an `H2O in <salt>` column, else null */
+  readonly electrolyte: readonly (string | null)[];
   /** Σ w of the OH- terms set by a pH column: Σ w·log10 a gains −ohFromPH·pKw(T) */
   readonly ohFromPH: number;
   readonly weight: Float64Array;
@@ -201,6 +211,7 @@ function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Bind
   const weight = new Float64Array(form.terms.length);
   const gas = new Uint8Array(form.terms.length);
   const labels: string[] = [];
+  const electrolyte: (string | null)[] = form.terms.map(() => null);
   let fixedLog = 0;
   let ohFromPH = 0;
   form.terms.forEach((t, i) => {
@@ -245,6 +256,11 @@ function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Bind
     if (col >= 0) {
       column[i] = col;
       isPH[i] = ph ? (t.key === 'H|1' ? 1 : 2) : 0;
+      const salt = parsed[col]!.electrolyte;
+      if (salt !== undefined) {
+        isPH[i] = 3;
+        electrolyte[i] = salt;
+      }
       if (ph && t.key === 'OH|-1') ohFromPH += t.weight;
       labels[i] = parsed[col]!.text.trim();
       return;
@@ -265,15 +281,17 @@ function bindSpeciesUncached(form: NernstForm, headers: readonly string[]): Bind
       'species',
     );
   });
-  return { form, column, isPH, weight, fixedLog, labels, gas, ohFromPH };
+  return { form, column, isPH, weight, fixedLog, labels, gas, ohFromPH, electrolyte };
 }
 
 /**
- * Σ wₖ log10 aₖ for one case (row of values). Checks each used value.
+ * Σ wₖ log10 aₖ for one case (row of values). Checks each used value. An `H2O in <salt>`
+ * column gives a(H2O) by the Pitzer model at `tempC` (default 25 °C), within its ranges.
  *
- * @throws EngineError (`argument`) for a non-positive or non-numeric activity or pressure
+ * @throws EngineError (`argument`) for a non-positive or non-numeric activity or pressure, or
+ *   an electrolyte molality or temperature outside the Pitzer range
  */
-export function weightedLogActivity(b: Binding, row: ArrayLike<unknown>): number {
+export function weightedLogActivity(b: Binding, row: ArrayLike<unknown>, tempC = 25): number {
   let sum = b.fixedLog;
   const n = b.column.length;
   for (let i = 0; i < n; i++) {
@@ -284,6 +302,7 @@ export function weightedLogActivity(b: Binding, row: ArrayLike<unknown>): number
     const ph = b.isPH[i]!;
     if (ph === 1) sum -= b.weight[i]! * v;
     else if (ph === 2) sum += b.weight[i]! * v;
+    else if (ph === 3) sum += b.weight[i]! * Math.log10(waterActivity(b.electrolyte[i]!, v, tempC));
     else {
       if (!(v > 0)) throw badValue(b, i, v);
       sum += b.weight[i]! * Math.log10(v);
@@ -294,6 +313,12 @@ export function weightedLogActivity(b: Binding, row: ArrayLike<unknown>): number
 
 function badValue(b: Binding, i: number, v: unknown): EngineError {
   const label = b.labels[i]!;
+  if (b.isPH[i] === 3)
+    return new EngineError(
+      'argument',
+      `The molality of ${b.electrolyte[i]!} (for a(H2O), header ${quote(label)}) must be a number in mol/kg; got ${describe(v)}.`,
+      'values',
+    );
   if (b.isPH[i] !== 0)
     return new EngineError('argument', `pH must be a number; got ${describe(v)}.`, 'values');
   const what = b.gas[i] === 1 ? 'partial pressure (bar)' : 'activity';
@@ -321,7 +346,7 @@ export function potentialV(b: Binding, row: ArrayLike<unknown>, tempC: number): 
   const tempK = kelvinFromCelsius(tempC);
   const s = slopePerElectronAtKelvin(tempK);
   const oh = b.ohFromPH === 0 ? 0 : -b.ohFromPH * pKw(tempC);
-  const e = standardPotentialV(b.form.resolved, tempC) - s * (weightedLogActivity(b, row) + oh);
+  const e = standardPotentialV(b.form.resolved, tempC) - s * (weightedLogActivity(b, row, tempC) + oh);
   if (!Number.isFinite(e))
     throw new EngineError('range', 'E is beyond the number range; check the values.', 'values');
   return e;

@@ -126,7 +126,7 @@ export function sweepCases(
   for (let i = 0; i < caseCount; i++) {
     try {
       const row = rows.length === 1 ? rows[0]! : (rows[i] ?? empty);
-      const sum = weightedLogActivity(b, row);
+      const sum = weightedLogActivity(b, row, fixedT ? tempC : (tempC as (i: number) => number)(i));
       let x: number;
       if (quantity === 'log10Q') x = n * (sum + logOH);
       else if (fixedT) x = fixedE0 - fixedS * (sum + fixedOH);
@@ -178,9 +178,10 @@ function generalCase<E>(
   e0: number,
   s: number,
   onError: (e: EngineError) => E,
+  tempC: number,
 ): number | E {
   try {
-    const sum = weightedLogActivity(b, row) + oh;
+    const sum = weightedLogActivity(b, row, tempC) + oh;
     const x = potential ? e0 - s * sum : b.form.n * sum;
     return Number.isFinite(x)
       ? x
@@ -236,13 +237,13 @@ export function sweepToColumn<E>(
           continue;
         }
       }
-      const cell = generalCase(b, row, oh, potential, e0, s, onError);
+      const cell = generalCase(b, row, oh, potential, e0, s, onError, tempC);
       if (typeof cell !== 'number') allFinite = false;
       out[i] = [cell];
     }
   } else {
     for (let i = 0; i < caseCount; i++) {
-      const cell = generalCase(b, rows[i]!, oh, potential, e0, s, onError);
+      const cell = generalCase(b, rows[i]!, oh, potential, e0, s, onError, tempC);
       if (typeof cell !== 'number') allFinite = false;
       out[i] = [cell];
     }

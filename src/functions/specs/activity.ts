@@ -22,14 +22,14 @@ const MODEL_PARAM = {
     'Activity model: "limiting" (Debye–Hückel limiting law, I ≤ 0.005 mol/kg), "extended" (with ion size, I ≤ 0.1 mol/kg), "davies" (I ≤ 0.5 mol/kg) or "pitzer" (ACTIVITY only: the whole composition, concentrated and mixed electrolytes)',
 };
 
-/** The explicit permission to return a result outside the model's range of validity. */
-const EXTRAPOLATE: ParamSpec = {
+/** The explicit permission to return a result outside the model's range of validity (shared with specs/solutions.ts). */
+export const EXTRAPOLATE: ParamSpec = {
   name: 'extrapolate',
   kind: 'flag',
   optional: true,
   default: false,
   description:
-    'TRUE to accept a result outside the model’s range of validity; by default such a case is #VALUE! naming the range and a better model',
+    'TRUE to accept a result outside the model’s range of validity (ionic strength, molality or temperature); by default such a case is #VALUE! naming the range and a better model',
 };
 const DH = 'Debye–Hückel A = 0.509 (kg/mol)^½ at 25 °C (common practice)';
 
@@ -55,7 +55,12 @@ const ACTCOEF: FunctionSpec = {
     'Activity coefficient of one ion at an ionic strength, by the Debye–Hückel limiting law, the extended Debye–Hückel equation or the Davies equation.',
   returns: 'γ (dimensionless), one row per case',
   params: [
-    { name: 'species', kind: 'species', description: 'The ion, e.g. "Cu2+" or "SO4 2-"; one cell or a column of cases', noun: 'an ion such as "Cu2+"' },
+    {
+      name: 'species',
+      kind: 'species',
+      description: 'The ion, e.g. "Cu2+" or "SO4 2-"; one cell or a column of cases',
+      noun: 'an ion such as "Cu2+"',
+    },
     IONIC_STRENGTH,
     MODEL_PARAM,
     {
@@ -116,9 +121,16 @@ const ACTIVITY: FunctionSpec = {
   ],
   perCase: (a, call) => {
     const headers = activityHeaders(call);
-    return engineActivities(headers, a.numbers(), a.choice<ActivityModel>('model'), a.optNum('ionic_strength'), a.num('temp_C'), {
-      extrapolate: a.flag('extrapolate'),
-    });
+    return engineActivities(
+      headers,
+      a.numbers(),
+      a.choice<ActivityModel>('model'),
+      a.optNum('ionic_strength'),
+      a.num('temp_C'),
+      {
+        extrapolate: a.flag('extrapolate'),
+      },
+    );
   },
 };
 

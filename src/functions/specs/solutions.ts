@@ -13,19 +13,24 @@ import {
   type ActivityModel,
 } from '../../engine';
 import { MOLALITIES, TEMP_C } from '../spec/params';
-import type { FunctionSpec, ParamSpec } from '../spec/types';
+import type { ExampleSpec, FunctionSpec, ParamSpec } from '../spec/types';
+import { EXTRAPOLATE } from './activity';
 
 const PM73 = 'Pitzer & Mayorga 1973 parameters (from memory)';
 
-/** The explicit permission to return a result outside the model's range of validity. */
-const EXTRAPOLATE: ParamSpec = {
-  name: 'extrapolate',
-  kind: 'flag',
-  optional: true,
-  default: false,
-  description:
-    'TRUE to accept a result outside the model’s range of validity (molality, ionic strength or temperature); by default such a case is #VALUE! naming the range',
-};
+/** An example whose result comes from Robinson & Stokes, Electrolyte Solutions, 2nd ed. (1959) (from memory). */
+function robinsonStokes(
+  args: ExampleSpec['args'],
+  expected: number,
+  tolerance: number,
+  where: string,
+  note?: string,
+): ExampleSpec {
+  const source = `Robinson & Stokes, Electrolyte Solutions (1959), ${where} (from memory)`;
+  return note === undefined
+    ? { args, expected, tolerance, source }
+    : { args, expected, tolerance, source, note };
+}
 
 const SALT_MODEL: ParamSpec = {
   name: 'model',
@@ -61,20 +66,14 @@ const MEANACTCOEF: FunctionSpec = {
   ],
   result: { kind: 'perCase' },
   examples: [
-    {
-      args: ['NaCl', 1],
-      expected: 0.657,
-      tolerance: 0.005,
-      source: 'Robinson & Stokes, Electrolyte Solutions (1959), Appendix 8.10, NaCl 1 mol/kg (from memory)',
-    },
-    {
-      args: ['CuSO4', 0.1],
-      expected: 0.15,
-      tolerance: 0.005,
-      source:
-        'Robinson & Stokes, Electrolyte Solutions (1959), Appendix 8.10, CuSO4 0.1 mol/kg (from memory)',
-      note: 'A 2:2 salt, where the Davies equation gives 0.286.',
-    },
+    robinsonStokes(['NaCl', 1], 0.657, 0.005, 'Appendix 8.10, NaCl 1 mol/kg'),
+    robinsonStokes(
+      ['CuSO4', 0.1],
+      0.15,
+      0.005,
+      'Appendix 8.10, CuSO4 0.1 mol/kg',
+      'A 2:2 salt, where the Davies equation gives 0.286.',
+    ),
   ],
   notes: [
     `Pitzer: ${PM73} and 1974 (2:2 salts); HCl, LiCl, NaCl, KCl, NaOH, KOH, CaCl2, MgCl2, ZnCl2, NiCl2, CuCl2, Na2SO4, K2SO4, MgSO4, CuSO4, ZnSO4, NiSO4, CaSO4, each to its published molality limit; 25 °C (NaCl 0–50 °C).`,
@@ -128,16 +127,16 @@ const WATERACTIVITY: FunctionSpec = {
   ],
   result: { kind: 'perCase' },
   examples: [
-    {
-      args: ['NaCl', 1],
-      expected: 0.96686,
-      tolerance: 5e-4,
-      source:
-        'derived: exp(−2·0.9355·0.01801528), φ = 0.9355 for NaCl 1 mol/kg from Robinson & Stokes (1959), Appendix 8.3 (from memory)',
-    },
+    robinsonStokes(
+      ['NaCl', 1],
+      0.96686,
+      5e-4,
+      'Appendix 8.3, φ = 0.9355 for NaCl 1 mol/kg, and exp(−2·0.9355·0.01801528) (derived)',
+    ),
   ],
   notes: [
     'Mixtures use the Harvie, Møller & Weare (1984) mixing terms for Na+, K+, Mg2+, Ca2+, Cl- and SO4 2- at 25 °C; the row must be electrically neutral.',
+    'In POTENTIAL and the other Nernst functions, a species header "H2O in NaCl" takes the salt’s molality and uses this a(H2O) (docs/notation.md, "Species headers").',
   ],
   perCase: (a, call) => {
     const headers = call.headers('salt_or_species');
