@@ -52,6 +52,12 @@ export function solveForUnknown(
       'unknown',
     );
   const target = parseSpeciesHeader(unknown);
+  if (target.electrolyte !== undefined)
+    throw new EngineError(
+      'argument',
+      `${quote(unknown)} names a salt's molality, which is not solved for: give "H2O" as the unknown to solve for the water activity.`,
+      'unknown',
+    );
   const form = compiledReaction(reaction, table);
   const isPh = target.kind === 'pH';
   // drop the unknown's own column (and, for pH or H+, the H+, OH- and pH columns)

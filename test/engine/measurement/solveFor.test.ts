@@ -56,6 +56,7 @@ describe('SOLVEFOR', () => {
     ],
     [['Cu2+ + 2 e- -> Cu', 0.3, 'Cu2+', [], [], 298], 'argument', /looks like a temperature in kelvin/],
     [['Cu2+ + 2 e- -> Cu', 0.3, '', [], []], 'argument', /unknown is empty/],
+    [['O2 + 4 H+ + 4 e- -> 2 H2O', 1.2, 'H2O in NaCl', ['pH'], [0]], 'argument', /give "H2O" as the unknown/],
     [['Cu2+ + 2 e- -> Cu', -9, 'Cu2+', [], []], 'range', /beyond the number range/],
     [['Cu2+ + e- -> Cu', 0.3, 'Cu2+', [], []], 'unbalanced', /./],
     [
