@@ -269,3 +269,4 @@ export { ALLOYS, G102_VALENCES } from './data/alloys';
 export { ANODE_MATERIALS, ANODE_UTILISATION, DEFAULT_UTILISATION } from './data/anodes';
 export { LIMITING_IONIC_CONDUCTIVITY_S_CM2_MOL } from './data/conductivities';
 export { tableCycleProblems, CYCLE_TOLERANCE_V } from './table/cycles';
+export { cellOf, pairKernel, pairColumn, type PairKernel } from './thermo/sweep';

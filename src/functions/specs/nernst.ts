@@ -11,7 +11,11 @@ import {
   standardPotentialV,
   sweepCases,
   sweepToColumn,
+  cellOf,
+  pairColumn,
+  pairKernel,
   type Binding,
+  type PairKernel,
 } from '../../engine';
 import type { Arg, Result, ResultCell, Scalar } from '../cellTypes';
 import { asGrid } from '../args';
@@ -36,7 +40,17 @@ type Quantity = 'potential' | 'log10Q';
  * is a copy of the table argument's cells (hosts such as Excel pass a fresh array every call,
  * so it is compared by content, never by identity).
  */
-let lastPrepared: { reaction: string; species: Scalar[]; headers: string[]; table: Arg; binding: Binding } | null = null;
+let lastPrepared: {
+  reaction: string;
+  species: Scalar[];
+  headers: string[];
+  table: Arg;
+  binding: Binding;
+  /** the two-species kernel at `kernelTempC` for `kernelQuantity` (null where the binding has none) */
+  kernel: PairKernel | null;
+  kernelTempC: number;
+  kernelQuantity: Quantity | null;
+} | null = null;
 
 /**
  * The one-entry cache above, in the engine's cache registry (name, clear, stats), so that the
@@ -109,6 +123,62 @@ function fastNernst(args: readonly Arg[], quantity: Quantity): Result | null {
   return propagateInputErrors(result, values as Scalar[][], p.headers, 'values');
 }
 
+/**
+ * The temperature of a call as Excel passes it (omitted, a 1×1 matrix or a number), read by the
+ * one temperature check; null for any other shape or a value the check refuses (then the full
+ * path gives its message).
+ */
+function hostTempC(v: unknown): number | null {
+  let t: unknown = v;
+  if (Array.isArray(v)) {
+    if (v.length !== 1) return null;
+    const row: unknown = v[0];
+    if (!Array.isArray(row) || row.length !== 1) return null;
+    t = cellOf(row, 0);
+  }
+  if (t === null || t === undefined) return STANDARD_TEMP_C;
+  if (typeof t !== 'number') return null;
+  try {
+    return readTempC(t, TEMP_C);
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The Excel path of POTENTIAL and LOGQ (spec `host`): the same reaction text, species row and
+ * table (by content) as the previous call, one temperature, and a values matrix of as many
+ * columns as species; every case worked out by the two-species kernel, E° and RT ln10/nF
+ * computed once per temperature. The rows are read as Excel passes them (no conversion pass):
+ * where any case is not a plain finite number (an error value, text, a blank, a non-positive
+ * activity) the result is null and the full path runs with its checks and messages.
+ */
+function hostNernst(args: readonly unknown[], quantity: Quantity): Result | null {
+  const p = lastPrepared;
+  if (p === null) return null;
+  const values = args[2];
+  if (!Array.isArray(values) || values.length === 0) return null;
+  const first: unknown = values[0];
+  if (!Array.isArray(first) || first.length !== p.species.length) return null;
+  const table = (quantity === 'potential' ? args[4] : args[3]) as Arg;
+  if (scalarOf(args[0] as Arg) !== p.reaction || !sameSpeciesRow(p.species, args[1] as Arg) || !sameTable(p.table, table))
+    return null;
+  const tempC = quantity === 'potential' ? hostTempC(args[3]) : STANDARD_TEMP_C;
+  if (tempC === null) return null;
+  if (p.kernelQuantity !== quantity || p.kernelTempC !== tempC) {
+    let k: PairKernel | null = null;
+    try {
+      k = pairKernel(p.binding, tempC, quantity);
+    } catch {
+      k = null;
+    }
+    p.kernel = k;
+    p.kernelTempC = tempC;
+    p.kernelQuantity = quantity;
+  }
+  return p.kernel ? pairColumn(p.kernel, values) : null;
+}
+
 function toColumn(res: { values: Float64Array; errors: ReadonlyMap<number, unknown> }, n: number): Result {
   const out: Result = new Array<ResultCell[]>(n);
   for (let i = 0; i < n; i++) {
@@ -134,7 +204,16 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
     const reaction = scalarOf(call.raw('reaction'));
     lastPrepared =
       sg && sg.length === 1 && typeof reaction === 'string' && text === reaction
-        ? { reaction, species: sg[0]!.slice(), headers, table: snapshotTable(call.raw('table')), binding: b }
+        ? {
+            reaction,
+            species: sg[0]!.slice(),
+            headers,
+            table: snapshotTable(call.raw('table')),
+            binding: b,
+            kernel: null,
+            kernelTempC: NaN,
+            kernelQuantity: null,
+          }
         : null;
     const temps = quantity === 'potential' ? call.column('temp_C') : null;
     if (!temps || temps.length === 1) return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
@@ -187,6 +266,7 @@ const POTENTIAL: FunctionSpec = {
     },
   ],
   fast: (args) => fastNernst(args, 'potential'),
+  host: (args) => hostNernst(args, 'potential'),
   run: (call) => nernstCases(call, 'potential'),
 };
 
@@ -253,6 +333,7 @@ const LOGQ: FunctionSpec = {
     },
   ],
   fast: (args) => fastNernst(args, 'log10Q'),
+  host: (args) => hostNernst(args, 'log10Q'),
   run: (call) => nernstCases(call, 'log10Q'),
 };
 
