@@ -137,3 +137,83 @@ describe('the Excel path of LOGQ', () => {
     expect(potential([[0.1, 0.01]])[0]![0] as number).toBeCloseTo(handE(0.1, 0.01), 12);
   });
 });
+
+describe('the Excel path of a cell diagram with its activities written in', () => {
+  const host = CATALOGUE.find((e) => e.id === 'POTENTIAL')!.host!;
+  const diagram = (a: string, b: string) => `Zn | Zn2+(aq, ${a} M) || Cu2+(aq, ${b} M) | Cu`;
+  const call = (text: string, temp: unknown = null, table: unknown = userTable()) =>
+    excelFn('POTENTIAL')([[text]], null, null, temp, table);
+
+  /** The call after a primed diagram of other amounts, and the same call on the general path. */
+  function primed(text: string, temp: unknown = null, table: unknown = userTable()) {
+    LAST_NERNST_CALL_CACHE.clear();
+    call(diagram('0.3', '0.04'), null, userTable());
+    const args = [[[text]], null, null, temp, table];
+    const reached = host(args) !== null;
+    const fast = call(text, temp, table);
+    LAST_NERNST_CALL_CACHE.clear();
+    const general = call(text, temp, table);
+    return { reached, fast, general };
+  }
+
+  test.each([
+    ['0.1', '0.01', null],
+    ['0.0123', '0.1', [[40]]],
+    ['.5', '2.5e-3', 5],
+    ['1', '7E2', null],
+    ['0.012345678901234567', '0.98765432109876543', [[0]]],
+  ])('reads %s M and %s M in one scan, bit for bit the general path', (a, b, temp) => {
+    const { reached, fast, general } = primed(diagram(a, b), temp);
+    expect(reached).toBe(true);
+    expect(Object.is(fast[0]![0], general[0]![0])).toBe(true);
+    const t = typeof temp === 'number' ? temp : Array.isArray(temp) ? (temp[0]![0] as number) : 25;
+    expect(fast[0]![0] as number).toBeCloseTo(handE(parseFloat(a), parseFloat(b), t), 12);
+  });
+
+  test.each([
+    ['a zero amount', diagram('0', '0.1')],
+    ['an amount ending in a point', diagram('1.', '0.1')],
+    ['an exponent without digits', diagram('1e', '0.1')],
+    ['a signed amount', diagram('-0.1', '0.1')],
+    ['another unit', 'Zn | Zn2+(aq, 0.1 mM) || Cu2+(aq, 0.01 M) | Cu'],
+    ['another electrode', 'Zn | Zn2+(aq, 0.1 M) || Ag+(aq, 0.01 M) | Ag'],
+    ['text after the diagram', `${diagram('0.1', '0.01')} `],
+    ['a space before the amount', 'Zn | Zn2+(aq,  0.1 M) || Cu2+(aq, 0.01 M) | Cu'],
+    ['an amount beyond the number range', diagram('1e999', '0.1')],
+  ])('leaves %s to the general path, with its result and message', (_name, text) => {
+    const { reached, fast, general } = primed(text);
+    expect(reached).toBe(false);
+    expect(plain(fast)).toEqual(plain(general));
+  });
+
+  test.each([
+    ['a species row', [['Zn2+']], null],
+    ['a values matrix', null, [[0.1]]],
+  ])('with %s given, leaves the call to the general path', (_name, species, values) => {
+    LAST_NERNST_CALL_CACHE.clear();
+    call(diagram('0.3', '0.04'));
+    expect(host([[[diagram('0.1', '0.01')]], species, values, null, userTable()])).toBeNull();
+  });
+
+  test('a table that changes is read again, not served from the last call', () => {
+    LAST_NERNST_CALL_CACHE.clear();
+    call(diagram('0.3', '0.04'));
+    const other = userTable();
+    other[2]![1] = 0.3; // the Cu row's E° lowered by 0.04 V
+    const got = call(diagram('0.1', '0.01'), null, other)[0]![0] as number;
+    // E = 0.3 − (−0.7618) − (RT ln10/2F)·log10(0.1/0.01), derived by hand
+    expect(got).toBeCloseTo(0.3 - ZN_E0 - ((R * 298.15 * Math.LN10) / (2 * F)) * 1, 12);
+  });
+
+  test('LOGQ of the diagram gives log10 Q bit for bit the general path', () => {
+    const logq = (text: string) => excelFn('LOGQ')([[text]], null, null, userTable());
+    LAST_NERNST_CALL_CACHE.clear();
+    logq(diagram('0.3', '0.04'));
+    const fast = logq(diagram('0.1', '0.01'));
+    LAST_NERNST_CALL_CACHE.clear();
+    const general = logq(diagram('0.1', '0.01'));
+    expect(plain(fast)).toEqual(plain(general));
+    // log10 Q = log10(a(Zn2+)/a(Cu2+)) = log10(0.1/0.01) = 1, derived by hand
+    expect(fast[0]![0] as number).toBeCloseTo(1, 12);
+  });
+});

@@ -14,7 +14,11 @@ import {
   cellOf,
   pairColumn,
   pairKernel,
+  inlineDiagramKernel,
+  inlineDiagramValue,
+  readInlineAmounts,
   type Binding,
+  type InlineDiagramKernel,
   type PairKernel,
 } from '../../engine';
 import type { Arg, Result, ResultCell, Scalar } from '../cellTypes';
@@ -53,16 +57,26 @@ let lastPrepared: {
 } | null = null;
 
 /**
- * The one-entry cache above, in the engine's cache registry (name, clear, stats), so that the
+ * The last cell diagram with inline amounts computed without species or values: its kernel
+ * (the diagram's text pieces around its amounts, the resolution without them) and a copy of
+ * the table argument's cells.
+ */
+let lastDiagram: { kernel: InlineDiagramKernel; table: Arg } | null = null;
+/** The amounts of one call's diagram, read in place (a diagram holds at most 64). */
+const diagramAmounts = new Float64Array(64);
+
+/**
+ * The one-entry caches above, in the engine's cache registry (name, clear, stats), so that the
  * registry's one clear empties it too.
  */
 export const LAST_NERNST_CALL_CACHE = {
   name: 'functions.lastNernstCall',
   clear(): void {
     lastPrepared = null;
+    lastDiagram = null;
   },
   stats(): { name: string; entries: number; bytes: number } {
-    return { name: 'functions.lastNernstCall', entries: lastPrepared ? 1 : 0, bytes: 0 };
+    return { name: 'functions.lastNernstCall', entries: (lastPrepared ? 1 : 0) + (lastDiagram ? 1 : 0), bytes: 0 };
   },
 };
 registerCache(LAST_NERNST_CALL_CACHE);
@@ -179,6 +193,33 @@ function hostNernst(args: readonly unknown[], quantity: Quantity): Result | null
   return p.kernel ? pairColumn(p.kernel, values) : null;
 }
 
+/**
+ * The Excel path of POTENTIAL and LOGQ for a cell diagram whose activities are written in its
+ * text (`"Zn | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu"`), species and values omitted: where
+ * the text is the last such diagram's text pieces with other amounts and the table the same
+ * (by content), the amounts are read in one scan and bound into the cached resolution. Null for
+ * anything else, or a result that is not a finite number (then the full path runs).
+ */
+function hostDiagram(args: readonly unknown[], quantity: Quantity): Result | null {
+  const d = lastDiagram;
+  if (d === null || !isOmitted(args[1]) || !isOmitted(args[2])) return null;
+  const text = scalarOf(args[0] as Arg);
+  if (typeof text !== 'string' || !sameTable(d.table, (quantity === 'potential' ? args[4] : args[3]) as Arg)) return null;
+  const tempC = quantity === 'potential' ? hostTempC(args[3]) : STANDARD_TEMP_C;
+  if (tempC === null || !readInlineAmounts(d.kernel, text, diagramAmounts)) return null;
+  let x: number;
+  try {
+    x = inlineDiagramValue(d.kernel, diagramAmounts, tempC, quantity);
+  } catch {
+    return null;
+  }
+  return Number.isFinite(x) ? [[x]] : null;
+}
+
+function isOmitted(v: unknown): boolean {
+  return v === null || v === undefined;
+}
+
 function toColumn(res: { values: Float64Array; errors: ReadonlyMap<number, unknown> }, n: number): Result {
   const out: Result = new Array<ResultCell[]>(n);
   for (let i = 0; i < n; i++) {
@@ -215,6 +256,10 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
             kernelQuantity: null,
           }
         : null;
+    if (headers.length === 0 && rows === null && typeof reaction === 'string' && text === reaction) {
+      const kernel = inlineDiagramKernel(text, cells);
+      if (kernel) lastDiagram = { kernel, table: snapshotTable(call.raw('table')) };
+    }
     const temps = quantity === 'potential' ? call.column('temp_C') : null;
     if (!temps || temps.length === 1) return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
     return toColumn(sweepCases(b, valueRows, tempOf, quantity, n), n);
@@ -266,7 +311,7 @@ const POTENTIAL: FunctionSpec = {
     },
   ],
   fast: (args) => fastNernst(args, 'potential'),
-  host: (args) => hostNernst(args, 'potential'),
+  host: (args) => hostNernst(args, 'potential') ?? hostDiagram(args, 'potential'),
   run: (call) => nernstCases(call, 'potential'),
 };
 
@@ -333,7 +378,7 @@ const LOGQ: FunctionSpec = {
     },
   ],
   fast: (args) => fastNernst(args, 'log10Q'),
-  host: (args) => hostNernst(args, 'log10Q'),
+  host: (args) => hostNernst(args, 'log10Q') ?? hostDiagram(args, 'log10Q'),
   run: (call) => nernstCases(call, 'log10Q'),
 };
 
