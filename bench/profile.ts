@@ -3,10 +3,11 @@
  * only (inputs are made before the profiler starts; start-up, compilation and the checks are
  * not in the profile), then summarised by bench/cpuprofileTop.ts.
  *
- *   npx ts-node --transpile-only bench/profile.ts call|sweep|diagram|recalc [outFile]
+ *   npx ts-node --transpile-only bench/profile.ts call|calltable|sweep|diagram|recalc [outFile]
  *
  * call: 20 × 20,000 Excel-shaped single-case POTENTIAL calls (built-in table, distinct
- * activities); sweep: 20 spills of 100,000 cases; diagram: 10 × 1,000 calls of a diagram with
+ * activities); calltable: the same with the user's table (a fresh array each call) and a
+ * distinct temperature each call; sweep: 20 spills of 100,000 cases; diagram: 10 × 1,000 calls of a diagram with
  * changing inline activities; recalc: the runner's in-process recalculation of the
  * 10,000-row ECHEM workbook, 3 times.
  */
@@ -42,12 +43,15 @@ async function main(): Promise<void> {
   const potential = excelFunction('POTENTIAL');
   let work: () => void | Promise<void>;
   let cleanup = () => undefined as void;
-  if (target === 'call' || target === 'diagram') {
-    const reps = target === 'call' ? 20 : 10;
-    const calls = target === 'call' ? 20_000 : 1_000;
+  if (target === 'call' || target === 'calltable' || target === 'diagram') {
+    const single = target !== 'diagram';
+    const reps = single ? 20 : 10;
+    const calls = single ? 20_000 : 1_000;
     const sets = Array.from({ length: reps }, (_, k) =>
       Array.from({ length: calls }, (_, i) => {
         const c = caseInputs(k * calls + i);
+        if (target === 'calltable')
+          return [[[DANIELL_DIAGRAM]], [['Zn2+', 'Cu2+']], [[c.aZn, c.aCu]], [[c.tempC]], daniellTableRange()];
         return target === 'call'
           ? [[[DANIELL_DIAGRAM]], [['Zn2+', 'Cu2+']], [[c.aZn, c.aCu]], null, null]
           : [[[inlineDiagram(c.aZn, c.aCu)]], null, null, null, null];
@@ -91,7 +95,7 @@ async function main(): Promise<void> {
       for (let i = 0; i < 3; i++) await once();
     };
   } else {
-    throw new Error(`unknown target ${target}: call, sweep, diagram or recalc`);
+    throw new Error(`unknown target ${target}: call, calltable, sweep, diagram or recalc`);
   }
   const profile = await profiled(work);
   cleanup();

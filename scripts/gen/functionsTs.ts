@@ -58,9 +58,10 @@ function wrapper(s: FunctionSpec): string {
   const names = s.params.map(jsName);
   // one line per signature, however long: the file is generated, and read by the metadata plugin
   return [
+    `const ${s.id}_ENTRY = entry('${s.id}');`,
     ...lines,
     `export function ${s.id}(${params.join(', ')}): any[][] {`,
-    `  return toExcel(implementation('${s.id}'), ${names.join(', ')});`,
+    `  return callFromExcel(${s.id}_ENTRY, ${names.join(', ')});`,
     '}',
   ].join('\n');
 }
@@ -79,13 +80,14 @@ export function functionsSource(): string {
  * result for Excel (excelErrors.ts).
  */
 /* eslint-disable @typescript-eslint/no-explicit-any -- the metadata plugin reads \`any[][]\` as "any value, matrix" */
-import { CATALOGUE, type Arg, type Result } from './catalogue';
-import { toExcel } from './excelErrors';
+import { CATALOGUE, type CatalogueEntry } from './catalogue';
+import { callFromExcel } from './excelErrors';
 
-function implementation(id: string): (...args: Arg[]) => Result {
-  const entry = CATALOGUE.find((e) => e.id === id);
-  if (!entry) throw new Error(\`\${id} is not in the catalogue\`);
-  return entry.impl;
+/** The catalogue entry of an id, looked up once when the file loads (not on every call). */
+function entry(id: string): CatalogueEntry {
+  const found = CATALOGUE.find((e) => e.id === id);
+  if (!found) throw new Error(\`\${id} is not in the catalogue\`);
+  return found;
 }
 `;
   const body = SPECS.map(wrapper).join('\n\n');

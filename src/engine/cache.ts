@@ -13,6 +13,8 @@ import { inlineUnitFactor } from './notation/species';
 import { type NernstForm, nernstForm } from './thermo/nernstForm';
 import { EngineError } from './errors';
 import { ByteBoundedCache, clearRegisteredCaches, registerCache } from './cacheRegistry';
+import { kelvinFromCelsius, slopePerElectronAtKelvin } from './constants';
+import { type CaseQuantity, type LinearStandardPotential, linearStandardPotential, standardPotentialAt } from './thermo/sweep';
 
 export {
   ByteBoundedCache,
@@ -208,39 +210,88 @@ function buildTemplate(probeText: string, factors: readonly number[], table: Pot
   return { resolved: r, form: nernstForm(r), slots, factors };
 }
 
+/** A diagram's text split around its inline amounts: the probe text (the template's key), the amounts, their unit factors and the literal pieces between them. */
+interface InlineSplit {
+  readonly probeText: string;
+  readonly amounts: readonly number[];
+  readonly factors: readonly number[];
+  /** the text before the first amount, between each two, and after the last (amounts + 1 pieces) */
+  readonly pieces: readonly string[];
+}
+
+function splitInlineAmounts(text: string): InlineSplit | null {
+  if (text.indexOf('|') < 0 || text.indexOf(',') < 0) return null;
+  const amounts: number[] = [];
+  const factors: number[] = [];
+  const pieces: string[] = [];
+  let pieceStart = 0;
+  let bad = false;
+  const probeText = text.replace(INLINE_AMOUNT, (m: string, head: string, num: string, rest: string, offset: number) => {
+    const factor = inlineUnitFactor(rest.trim());
+    const amount = parseFloat(num);
+    if (factor === undefined || !AMOUNT_TEXT.test(num) || !(amount > 0) || !Number.isFinite(amount)) bad = true;
+    amounts.push(amount);
+    factors.push(factor ?? 1);
+    const numStart = offset + head.length;
+    pieces.push(text.slice(pieceStart, numStart));
+    pieceStart = numStart + num.length;
+    return `${head}${String(probe(amounts.length - 1))}${rest})`;
+  });
+  pieces.push(text.slice(pieceStart));
+  if (bad || amounts.length === 0 || amounts.length > MAX_INLINE_AMOUNTS) return null;
+  return { probeText, amounts, factors, pieces };
+}
+
+/** The template of a split diagram against a table (built on first use), or null where none can serve. */
+function templateOf(split: InlineSplit, key: string, table: PotentialTable): InlineTemplate | null {
+  const tkey = resolutionKey(key, split.probeText);
+  let t = inlineTemplates.get(tkey);
+  if (t === undefined) {
+    if (inlineTemplates.size >= MAX_INLINE_TEMPLATES) inlineTemplates.clear();
+    t = buildTemplate(split.probeText, split.factors, table);
+    inlineTemplates.set(tkey, t);
+  }
+  return t;
+}
+
+/** Per species key, the slot whose amount it takes (the last where two give the same species, as the parser keeps the last). */
+function slotsBySide(t: InlineTemplate): { left: Map<string, InlineSlot>; right: Map<string, InlineSlot> } {
+  const left = new Map<string, InlineSlot>();
+  const right = new Map<string, InlineSlot>();
+  for (const s of t.slots) (s.side === 'left' ? left : right).set(s.key, s);
+  return { left, right };
+}
+
+/** The slot a compiled term takes its inline activity from, or undefined (unit activity). */
+function slotOfTerm(
+  t: InlineTemplate,
+  by: { left: Map<string, InlineSlot>; right: Map<string, InlineSlot> },
+  term: { side: 'left' | 'right' | null; key: string },
+): InlineSlot | undefined {
+  return t.resolved.diagram
+    ? (term.side === 'right' ? by.right : by.left).get(term.key)
+    : (by.left.get(term.key) ?? by.right.get(term.key));
+}
+
+/** A slot's inline activity for the call's amounts: amount × unit factor × ion count. */
+function slotValue(s: InlineSlot, amounts: ArrayLike<number>, factors: ArrayLike<number>): number {
+  const value = amounts[s.slot]! * factors[s.slot]!;
+  return s.count === 1 ? value : value * s.count;
+}
+
 /**
  * The compiled form of a cell diagram with inline amounts, from the cached resolution of the same
  * diagram with other amounts; null where the text is not such a diagram or the template cannot
  * serve it (then the caller resolves the text itself).
  */
 function inlineDiagramForm(text: string, key: string, table: PotentialTable): NernstForm | null {
-  if (text.indexOf('|') < 0 || text.indexOf(',') < 0) return null;
-  const amounts: number[] = [];
-  const factors: number[] = [];
-  let bad = false;
-  const probeText = text.replace(INLINE_AMOUNT, (_m, head: string, num: string, rest: string) => {
-    const factor = inlineUnitFactor(rest.trim());
-    const amount = parseFloat(num);
-    if (factor === undefined || !AMOUNT_TEXT.test(num) || !(amount > 0) || !Number.isFinite(amount)) bad = true;
-    amounts.push(amount);
-    factors.push(factor ?? 1);
-    return `${head}${String(probe(amounts.length - 1))}${rest})`;
-  });
-  if (bad || amounts.length === 0 || amounts.length > MAX_INLINE_AMOUNTS) return null;
-  const tkey = resolutionKey(key, probeText);
-  let t = inlineTemplates.get(tkey);
-  if (t === undefined) {
-    if (inlineTemplates.size >= MAX_INLINE_TEMPLATES) inlineTemplates.clear();
-    t = buildTemplate(probeText, factors, table);
-    inlineTemplates.set(tkey, t);
-  }
+  const split = splitInlineAmounts(text);
+  if (!split) return null;
+  const t = templateOf(split, key, table);
   if (!t) return null;
   const left = new Map<string, number>();
   const right = new Map<string, number>();
-  for (const s of t.slots) {
-    const value = amounts[s.slot]! * t.factors[s.slot]!;
-    (s.side === 'left' ? left : right).set(s.key, s.count === 1 ? value : value * s.count);
-  }
+  for (const s of t.slots) (s.side === 'left' ? left : right).set(s.key, slotValue(s, split.amounts, t.factors));
   const base = t.resolved;
   const withHalf = (h: ResolvedHalf, inline: Map<string, number>): ResolvedHalf => ({ ...h, inline });
   const resolved: Resolved = { ...base, text, left: withHalf(base.left, left), right: withHalf(base.right, right) };
@@ -252,6 +303,175 @@ function inlineDiagramForm(text: string, key: string, table: PotentialTable): Ne
     return inline === term.inline ? term : { ...term, inline };
   });
   return { resolved, terms, n: t.form.n };
+}
+
+// ---------------------------------------------------------------------------
+// The same diagrams evaluated without compiling a form per call: a kernel holds the diagram's
+// literal pieces (so a call's text is split by one scan, no pattern) and, per Nernst term, the
+// slot of its amount and its weight.
+
+/**
+ * A cell diagram with inline amounts, ready to evaluate at other amounts of the same text
+ * pieces: E = E°(T) − (RT ln10/nF)·Σ w·log10(amount × unit factor × ion count) over the terms
+ * whose activity is written inline (the others at unit activity), summed in the order the
+ * compiled form sums them.
+ */
+export interface InlineDiagramKernel {
+  /** the text before the first amount, between each two, and after the last */
+  readonly pieces: readonly string[];
+  readonly factors: Float64Array;
+  /** per inline term, in the compiled form's order: its weight, the slot of its amount, the ion count */
+  readonly weight: Float64Array;
+  readonly slot: Int32Array;
+  readonly count: Float64Array;
+  readonly n: number;
+  readonly lin: LinearStandardPotential;
+}
+
+const kernels = new WeakMap<InlineTemplate, InlineDiagramKernel | null>();
+/** Characters that may continue a number: a piece after an amount must not start with one (the one scan could not tell where the amount ends). */
+const NUMBER_CHARS = '0123456789.eE';
+
+function buildKernel(t: InlineTemplate, pieces: readonly string[]): InlineDiagramKernel | null {
+  for (let i = 1; i < pieces.length; i++) if (NUMBER_CHARS.includes(pieces[i]!.charAt(0))) return null;
+  const by = slotsBySide(t);
+  const weight: number[] = [];
+  const slot: number[] = [];
+  const count: number[] = [];
+  for (const term of t.form.terms) {
+    const s = slotOfTerm(t, by, term);
+    if (!s) continue;
+    weight.push(term.weight);
+    slot.push(s.slot);
+    count.push(s.count);
+  }
+  return {
+    pieces,
+    factors: Float64Array.from(t.factors),
+    weight: Float64Array.from(weight),
+    slot: Int32Array.from(slot),
+    count: Float64Array.from(count),
+    n: t.form.n,
+    lin: linearStandardPotential(t.resolved),
+  };
+}
+
+/**
+ * The kernel of a cell diagram with inline amounts against a table (the built-in table where
+ * none is given), from the same cached resolution {@link compiledReaction} uses; null where the
+ * text is no such diagram or the kernel cannot serve it (then compile the text).
+ *
+ * @example
+ * inlineDiagramKernel('Zn | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu', null)?.pieces // ['Zn | Zn2+(aq, ', ' M) || Cu2+(aq, ', ' M) | Cu']
+ */
+export function inlineDiagramKernel(
+  text: string,
+  cells: readonly (readonly unknown[])[] | null | undefined,
+): InlineDiagramKernel | null {
+  const split = splitInlineAmounts(text);
+  if (!split) return null;
+  const { key, table } = tableFor(cells);
+  const t = templateOf(split, key, table);
+  if (!t) return null;
+  let k = kernels.get(t);
+  if (k === undefined) {
+    k = buildKernel(t, split.pieces);
+    kernels.set(t, k);
+  }
+  // a template serves every text of its probe text; the pieces must be this text's
+  if (k && !samePieces(k.pieces, split.pieces)) return buildKernel(t, split.pieces);
+  return k;
+}
+
+function samePieces(a: readonly string[], b: readonly string[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+function isDigit(code: number): boolean {
+  return code >= 48 && code <= 57;
+}
+
+/** The end of the amount that starts at `pos` (digits, a point and digits, an exponent), or −1 where none starts there. */
+function amountEnd(text: string, pos: number): number {
+  let i = pos;
+  const n = text.length;
+  while (i < n && isDigit(text.charCodeAt(i))) i++;
+  let digits = i > pos;
+  if (i < n && text.charCodeAt(i) === 46 /* . */) {
+    const f = i + 1;
+    let j = f;
+    while (j < n && isDigit(text.charCodeAt(j))) j++;
+    if (j > f) {
+      i = j;
+      digits = true;
+    }
+  }
+  if (!digits) return -1;
+  const e = text.charCodeAt(i);
+  if (e === 101 || e === 69 /* e E */) {
+    let j = i + 1;
+    const sign = text.charCodeAt(j);
+    if (sign === 43 || sign === 45 /* + - */) j++;
+    const d = j;
+    while (j < n && isDigit(text.charCodeAt(j))) j++;
+    if (j > d) i = j;
+  }
+  return i;
+}
+
+/**
+ * Reads the amounts of `text` into `into` where the text is the kernel's pieces with an amount
+ * between each two (one scan, no pattern, nothing allocated but the amounts' number text);
+ * false where it is not, or an amount is not a positive finite number (then compile the text).
+ *
+ * @example
+ * readInlineAmounts(kernel, 'Zn | Zn2+(aq, 0.2 M) || Cu2+(aq, 0.03 M) | Cu', amounts) // true, amounts [0.2, 0.03]
+ */
+export function readInlineAmounts(k: InlineDiagramKernel, text: string, into: Float64Array): boolean {
+  const pieces = k.pieces;
+  const first = pieces[0]!;
+  if (!text.startsWith(first)) return false;
+  let pos = first.length;
+  for (let i = 1; i < pieces.length; i++) {
+    const end = amountEnd(text, pos);
+    if (end < 0) return false;
+    const amount = parseFloat(text.slice(pos, end));
+    if (!(amount > 0) || amount === Infinity) return false;
+    into[i - 1] = amount;
+    const piece = pieces[i]!;
+    if (!text.startsWith(piece, end)) return false;
+    pos = end + piece.length;
+  }
+  return pos === text.length;
+}
+
+/**
+ * E (V) or log10 Q of a kernel's diagram at `amounts` and `tempC`: bit for bit what compiling
+ * the text and evaluating its form gives.
+ *
+ * @throws EngineError (`argument`) for a temperature the reaction's data refuse
+ * @example
+ * inlineDiagramValue(kernel, Float64Array.of(0.1, 0.01), 25, 'potential') // 1.0718
+ */
+export function inlineDiagramValue(
+  k: InlineDiagramKernel,
+  amounts: ArrayLike<number>,
+  tempC: number,
+  quantity: CaseQuantity,
+): number {
+  let sum = 0;
+  for (let j = 0; j < k.slot.length; j++) {
+    const s = k.slot[j]!;
+    const value = amounts[s]! * k.factors[s]!;
+    const c = k.count[j]!;
+    sum += k.weight[j]! * Math.log10(c === 1 ? value : value * c);
+  }
+  // no pH column: the OH- term of the sweep is 0
+  if (quantity === 'log10Q') return k.n * (sum + 0);
+  const s = slopePerElectronAtKelvin(kelvinFromCelsius(tempC));
+  return standardPotentialAt(k.lin, tempC) - s * (sum + 0);
 }
 
 /** Resolution only (no compilation), through the same cache. */

@@ -275,3 +275,5 @@ export { ANODE_MATERIALS, ANODE_UTILISATION, DEFAULT_UTILISATION } from './data/
 export { LIMITING_IONIC_CONDUCTIVITY_S_CM2_MOL } from './data/conductivities';
 export { tableCycleProblems, CYCLE_TOLERANCE_V } from './table/cycles';
 export { columnLetters } from './a1';
+export { cellOf, pairKernel, pairColumn, type PairKernel } from './thermo/sweep';
+export { inlineDiagramKernel, readInlineAmounts, inlineDiagramValue, type InlineDiagramKernel } from './cache';

@@ -11,7 +11,7 @@
  * on the way (a bug, never a user's mistake) and returns it as `#VALUE!` with a message asking
  * for a report, so that no input makes a function throw into Excel.
  */
-import { isFiniteColumn } from '../engine';
+import { cellOf, isFiniteColumn } from '../engine';
 import { isCellError, type Arg, type CellError, type ErrorCode, type Result, type Scalar } from './cellTypes';
 
 /** A cell as Excel receives it from a custom function. */
@@ -81,6 +81,23 @@ export function resultToExcel(result: Result): ExcelResult {
   return result.map((row) => row.map(excelCell));
 }
 
+/** What a wrapper of functions.ts calls: a catalogue entry's implementation and, where it has one, its path for Excel's own argument shapes. */
+export interface ExcelEntry {
+  readonly impl: (...args: Arg[]) => Result;
+  /**
+   * A path over the arguments exactly as Excel passes them (before {@link argFromExcel}),
+   * for the common shapes: a result only where every cell is a finite number, computed as
+   * the full path computes it; null otherwise (then the full path runs).
+   */
+  readonly host?: (args: readonly unknown[]) => Result | null;
+}
+
+/** `#VALUE!` "Internal error: …" for anything thrown past a catalogue function. */
+function thrownToExcel(e: unknown): ExcelResult {
+  const detail = e instanceof Error ? e.message || e.name : String(e);
+  return [[internalError(detail)]];
+}
+
 /**
  * Calls a catalogue function with Excel's arguments and gives its result to Excel. Nothing
  * thrown inside escapes: it becomes `#VALUE!` "Internal error: …, please report …".
@@ -92,8 +109,25 @@ export function toExcel(impl: (...args: Arg[]) => Result, ...args: unknown[]): E
   try {
     return resultToExcel(impl(...args.map(argFromExcel)));
   } catch (e) {
-    const detail = e instanceof Error ? e.message || e.name : String(e);
-    return [[internalError(detail)]];
+    return thrownToExcel(e);
+  }
+}
+
+/**
+ * What every wrapper of functions.ts calls: the entry's path for Excel's own argument shapes
+ * where it gives a result (all finite numbers, handed over as they are), else
+ * {@link toExcel}'s path. Nothing thrown inside escapes.
+ *
+ * @example
+ * return callFromExcel(POTENTIAL_ENTRY, reaction, species, values, temp_C, table);
+ */
+export function callFromExcel(entry: ExcelEntry, ...args: unknown[]): ExcelResult {
+  try {
+    const fast = entry.host ? entry.host(args) : null;
+    if (fast) return fast as ExcelResult;
+    return resultToExcel(entry.impl(...args.map(argFromExcel)));
+  } catch (e) {
+    return thrownToExcel(e);
   }
 }
 
@@ -110,13 +144,17 @@ function scalarFromExcel(v: unknown): Scalar {
   return isExcelErrorValue(v) ? v.code : String(v);
 }
 
-/** True where every element is a row of scalar cells (numbers tested first: most cells are). One pass, no closures. */
+/**
+ * True where every element is a row of scalar cells (numbers tested first: most cells are).
+ * One pass, no closures; cells read with `cellOf`, which leaves rows of numbers as they are
+ * (an indexed read here, where text rows pass too, would box every number of the user's rows).
+ */
 function allScalarRows(rows: readonly unknown[]): boolean {
   for (let r = 0; r < rows.length; r++) {
     const row = rows[r];
     if (!Array.isArray(row)) return false;
     for (let c = 0; c < row.length; c++) {
-      const v: unknown = row[c];
+      const v = cellOf(row, c);
       if (typeof v === 'number' || v === null || typeof v === 'string' || typeof v === 'boolean') continue;
       return false;
     }

@@ -10,15 +10,17 @@
  * result for Excel (excelErrors.ts).
  */
 /* eslint-disable @typescript-eslint/no-explicit-any -- the metadata plugin reads `any[][]` as "any value, matrix" */
-import { CATALOGUE, type Arg, type Result } from './catalogue';
-import { toExcel } from './excelErrors';
+import { CATALOGUE, type CatalogueEntry } from './catalogue';
+import { callFromExcel } from './excelErrors';
 
-function implementation(id: string): (...args: Arg[]) => Result {
-  const entry = CATALOGUE.find((e) => e.id === id);
-  if (!entry) throw new Error(`${id} is not in the catalogue`);
-  return entry.impl;
+/** The catalogue entry of an id, looked up once when the file loads (not on every call). */
+function entry(id: string): CatalogueEntry {
+  const found = CATALOGUE.find((e) => e.id === id);
+  if (!found) throw new Error(`${id} is not in the catalogue`);
+  return found;
 }
 
+const POTENTIAL_ENTRY = entry('POTENTIAL');
 /**
  * Electrode potential of a half-reaction, or EMF of a cell or reaction, in V vs SHE, by the Nernst equation at the activities and temperature given. Example: =ECHEM.POTENTIAL("Cu2+/Cu", "Cu2+", 0.01) gives 0.280219.
  * @customfunction POTENTIAL
@@ -31,9 +33,10 @@ function implementation(id: string): (...args: Arg[]) => Result {
  * @returns E in V vs SHE, one row per case
  */
 export function POTENTIAL(reaction: any[][], species?: any[][], values?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('POTENTIAL'), reaction, species, values, temp_C, table);
+  return callFromExcel(POTENTIAL_ENTRY, reaction, species, values, temp_C, table);
 }
 
+const STDPOTENTIAL_ENTRY = entry('STDPOTENTIAL');
 /**
  * Standard potential E° in V vs SHE of a half-reaction, couple or cell at temp_C (with the table's dE°/dT; where it has none, E° at 25 °C). Example: =ECHEM.STDPOTENTIAL("Cu2+/Cu") gives 0.339378.
  * @customfunction STDPOTENTIAL
@@ -44,9 +47,10 @@ export function POTENTIAL(reaction: any[][], species?: any[][], values?: any[][]
  * @returns E° in V vs SHE, one row per case
  */
 export function STDPOTENTIAL(reaction: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('STDPOTENTIAL'), reaction, temp_C, table);
+  return callFromExcel(STDPOTENTIAL_ENTRY, reaction, temp_C, table);
 }
 
+const QUOTIENT_ENTRY = entry('QUOTIENT');
 /**
  * Reaction quotient Q from the activities given (pure solids, liquids and water left out); #NUM! where Q leaves the number range (use LOGQ). Example: =ECHEM.QUOTIENT("Zn + Cu2+ -> Zn2+ + Cu", {"Zn2+","Cu2+"}, {0.1,0.01}) gives 10.
  * @customfunction QUOTIENT
@@ -58,9 +62,10 @@ export function STDPOTENTIAL(reaction: any[][], temp_C?: any[][], table?: any[][
  * @returns Q (dimensionless), one row per case
  */
 export function QUOTIENT(reaction: any[][], species: any[][], values: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('QUOTIENT'), reaction, species, values, table);
+  return callFromExcel(QUOTIENT_ENTRY, reaction, species, values, table);
 }
 
+const LOGQ_ENTRY = entry('LOGQ');
 /**
  * log10 of the reaction quotient Q, computed in log space so that it never overflows. Example: =ECHEM.LOGQ("Zn + Cu2+ -> Zn2+ + Cu", {"Zn2+","Cu2+"}, {0.1,0.01}) gives 1.
  * @customfunction LOGQ
@@ -72,9 +77,10 @@ export function QUOTIENT(reaction: any[][], species: any[][], values: any[][], t
  * @returns log10 Q, one row per case
  */
 export function LOGQ(reaction: any[][], species: any[][], values: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('LOGQ'), reaction, species, values, table);
+  return callFromExcel(LOGQ_ENTRY, reaction, species, values, table);
 }
 
+const CELLNOTATION_ENTRY = entry('CELLNOTATION');
 /**
  * The IUPAC cell notation of a reaction or cell, with the activities given written inline. Example: =ECHEM.CELLNOTATION("Zn + Cu2+ -> Zn2+ + Cu", {"Zn2+","Cu2+"}, {0.1,0.01}) gives Zn(s) | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu(s).
  * @customfunction CELLNOTATION
@@ -86,9 +92,10 @@ export function LOGQ(reaction: any[][], species: any[][], values: any[][], table
  * @returns Cell notation text, one row per case
  */
 export function CELLNOTATION(reaction: any[][], species?: any[][], values?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('CELLNOTATION'), reaction, species, values, table);
+  return callFromExcel(CELLNOTATION_ENTRY, reaction, species, values, table);
 }
 
+const LOGK_ENTRY = entry('LOGK');
 /**
  * log10 of the equilibrium constant, −ΔrG°/(RT ln 10) = nFE°/(RT ln 10), of a reaction (also a solubility or an ionisation, from the species data) or from E° in V and n; activities written in the reaction do not change K. Example: =ECHEM.LOGK(1.1, 2) gives 37.1877.
  * @customfunction LOGK
@@ -100,9 +107,10 @@ export function CELLNOTATION(reaction: any[][], species?: any[][], values?: any[
  * @returns log10 K, one row per case
  */
 export function LOGK(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('LOGK'), reaction_or_E, n, temp_C, table);
+  return callFromExcel(LOGK_ENTRY, reaction_or_E, n, temp_C, table);
 }
 
+const EQCONST_ENTRY = entry('EQCONST');
 /**
  * Equilibrium constant K = 10^(nFE°/(RT ln 10)) from a reaction or from E° in V and n; #NUM! where K leaves the number range (use LOGK). Example: =ECHEM.EQCONST("Zn + Cu2+ -> Zn2+ + Cu") gives 1.68858E+37.
  * @customfunction EQCONST
@@ -114,9 +122,10 @@ export function LOGK(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], tabl
  * @returns K (dimensionless), one row per case
  */
 export function EQCONST(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('EQCONST'), reaction_or_E, n, temp_C, table);
+  return callFromExcel(EQCONST_ENTRY, reaction_or_E, n, temp_C, table);
 }
 
+const GIBBS_ENTRY = entry('GIBBS');
 /**
  * Gibbs energy ΔG = −nFE in kJ/mol from a potential E in V and n; of a reaction, ΔG° at temp_C, or ΔG at the activities written in it (e.g. "Zn | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu"), agreeing with POTENTIAL. Example: =ECHEM.GIBBS(0.434, 2) gives -83.7493.
  * @customfunction GIBBS
@@ -128,9 +137,10 @@ export function EQCONST(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], t
  * @returns ΔG in kJ/mol, one row per case
  */
 export function GIBBS(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('GIBBS'), reaction_or_E, n, temp_C, table);
+  return callFromExcel(GIBBS_ENTRY, reaction_or_E, n, temp_C, table);
 }
 
+const ELECTRONS_ENTRY = entry('ELECTRONS');
 /**
  * Number of electrons n transferred in the balanced half-reaction, cell or reaction. Example: =ECHEM.ELECTRONS("Zn + Cu2+ -> Zn2+ + Cu") gives 2.
  * @customfunction ELECTRONS
@@ -140,9 +150,10 @@ export function GIBBS(reaction_or_E: any[][], n?: any[][], temp_C?: any[][], tab
  * @returns n, one row per case
  */
 export function ELECTRONS(reaction: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('ELECTRONS'), reaction, table);
+  return callFromExcel(ELECTRONS_ENTRY, reaction, table);
 }
 
+const BALANCE_ENTRY = entry('BALANCE');
 /**
  * Balanced reaction text from a skeleton redox equation, half-reaction, couple or cell; medium "acid" balances with H+ and H2O, "base" with OH- and H2O. Example: =ECHEM.BALANCE("MnO4- + Fe2+ -> Mn2+ + Fe3+", "acid") gives MnO4- + 5 Fe2+ + 8 H+ -> Mn2+ + 5 Fe3+ + 4 H2O.
  * @customfunction BALANCE
@@ -153,9 +164,10 @@ export function ELECTRONS(reaction: any[][], table?: any[][]): any[][] {
  * @returns Balanced reaction text, one row per case
  */
 export function BALANCE(reaction: any[][], medium?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('BALANCE'), reaction, medium, table);
+  return callFromExcel(BALANCE_ENTRY, reaction, medium, table);
 }
 
+const NERNSTSLOPE_ENTRY = entry('NERNSTSLOPE');
 /**
  * Nernst slope RT ln10/(nF) in V per decade of activity from the exact SI constants; a negative n gives the negative slope of an anion-responsive electrode. Example: =ECHEM.NERNSTSLOPE(25) gives 0.0591593.
  * @customfunction NERNSTSLOPE
@@ -165,9 +177,10 @@ export function BALANCE(reaction: any[][], medium?: any[][], table?: any[][]): a
  * @returns Slope in V per decade, one row per case
  */
 export function NERNSTSLOPE(temp_C?: any[][], n?: any[][]): any[][] {
-  return toExcel(implementation('NERNSTSLOPE'), temp_C, n);
+  return callFromExcel(NERNSTSLOPE_ENTRY, temp_C, n);
 }
 
+const COMBINE_ENTRY = entry('COMBINE');
 /**
  * E° of the couple made by chaining steps, Σ nᵢEᵢ / Σ nᵢ (Gibbs energies add, potentials do not). Example: =ECHEM.COMBINE({0.771,-0.447}, {1,2}) gives -0.041.
  * @customfunction COMBINE
@@ -177,9 +190,10 @@ export function NERNSTSLOPE(temp_C?: any[][], n?: any[][]): any[][] {
  * @returns E° in V of the combined couple
  */
 export function COMBINE(potentials: any[][], n: any[][]): any[][] {
-  return toExcel(implementation('COMBINE'), potentials, n);
+  return callFromExcel(COMBINE_ENTRY, potentials, n);
 }
 
+const CONCCELL_ENTRY = entry('CONCCELL');
 /**
  * EMF in V of a concentration cell: two like electrodes whose solutions differ in one species' activity (right minus left, as IUPAC writes cells). Example: =ECHEM.CONCCELL("Cu2+/Cu", 0.001, 0.1) gives 0.0591593.
  * @customfunction CONCCELL
@@ -193,9 +207,10 @@ export function COMBINE(potentials: any[][], n: any[][]): any[][] {
  * @returns EMF in V, one row per case
  */
 export function CONCCELL(reaction: any[][], value_left: any[][], value_right: any[][], species?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('CONCCELL'), reaction, value_left, value_right, species, temp_C, table);
+  return callFromExcel(CONCCELL_ENTRY, reaction, value_left, value_right, species, temp_C, table);
 }
 
+const ACTCOEF_ENTRY = entry('ACTCOEF');
 /**
  * Activity coefficient of one ion at an ionic strength, by the Debye–Hückel limiting law, the extended Debye–Hückel equation or the Davies equation. Example: =ECHEM.ACTCOEF("Ca2+", 0.001, "limiting") gives 0.862341.
  * @customfunction ACTCOEF
@@ -209,9 +224,10 @@ export function CONCCELL(reaction: any[][], value_left: any[][], value_right: an
  * @returns γ (dimensionless), one row per case
  */
 export function ACTCOEF(species: any[][], ionic_strength: any[][], model?: any[][], ion_size?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
-  return toExcel(implementation('ACTCOEF'), species, ionic_strength, model, ion_size, temp_C, extrapolate);
+  return callFromExcel(ACTCOEF_ENTRY, species, ionic_strength, model, ion_size, temp_C, extrapolate);
 }
 
+const ACTIVITY_ENTRY = entry('ACTIVITY');
 /**
  * Activities of the species of a composition (same shape as values), with the ionic strength of each row unless one is given. Example: =ECHEM.ACTIVITY({"Na+","Cl-"}, {0.004,0.004}, , "limiting") gives {0.00371449, 0.00371449}.
  * @customfunction ACTIVITY
@@ -225,9 +241,10 @@ export function ACTCOEF(species: any[][], ionic_strength: any[][], model?: any[]
  * @returns Activities, one row per case and one column per species
  */
 export function ACTIVITY(species: any[][], values: any[][], ionic_strength?: any[][], model?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
-  return toExcel(implementation('ACTIVITY'), species, values, ionic_strength, model, temp_C, extrapolate);
+  return callFromExcel(ACTIVITY_ENTRY, species, values, ionic_strength, model, temp_C, extrapolate);
 }
 
+const IONICSTR_ENTRY = entry('IONICSTR');
 /**
  * Ionic strength I = ½ Σ mᵢ zᵢ² of each row of a composition, in mol/kg. Example: =ECHEM.IONICSTR({"Na+","SO4 2-"}, {0.02,0.01}) gives 0.03.
  * @customfunction IONICSTR
@@ -237,9 +254,10 @@ export function ACTIVITY(species: any[][], values: any[][], ionic_strength?: any
  * @returns I in mol/kg, one row per case
  */
 export function IONICSTR(species: any[][], values: any[][]): any[][] {
-  return toExcel(implementation('IONICSTR'), species, values);
+  return callFromExcel(IONICSTR_ENTRY, species, values);
 }
 
+const VSREF_ENTRY = entry('VSREF');
 /**
  * A potential converted from one reference-electrode scale to another (SHE, SCE, Ag/AgCl in several KCl strengths, saturated Cu/CuSO4, Hg/Hg2SO4, Hg/HgO, RHE). Example: =ECHEM.VSREF(0, "SCE", "SHE") gives 0.2412.
  * @customfunction VSREF
@@ -252,9 +270,10 @@ export function IONICSTR(species: any[][], values: any[][]): any[][] {
  * @returns The potential in V vs to_ref, one row per case
  */
 export function VSREF(potential: any[][], from_ref: any[][], to_ref: any[][], pH?: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('VSREF'), potential, from_ref, to_ref, pH, temp_C);
+  return callFromExcel(VSREF_ENTRY, potential, from_ref, to_ref, pH, temp_C);
 }
 
+const SOURCE_ENTRY = entry('SOURCE');
 /**
  * Which table rows (built-in or yours) gave E°, with their sources and any derivation. Example: =ECHEM.SOURCE("Cu2+/Cu") gives Cu2+ + 2 e- -> Cu: E° = 0.339378 V from Cu2+ + 2 e- -> Cu, E° = 0.33938 V, dE°/dT = 0.011 mV/K (built-in row 73: E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory); OpenStax Chemistry 2e, Appendix L prints 0.34 V); E°(T) by Gibbs–Helmholtz from the species data (ΔrS°, constant ΔrCp°; valid 0–100 °C), dE°/dT = 0.0107 mV/K at 25 °C; no Cp° for Cu2+: left out of ΔrCp°.
  * @customfunction SOURCE
@@ -264,9 +283,10 @@ export function VSREF(potential: any[][], from_ref: any[][], to_ref: any[][], pH
  * @returns Provenance text, one row per case
  */
 export function SOURCE(reaction: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('SOURCE'), reaction, table);
+  return callFromExcel(SOURCE_ENTRY, reaction, table);
 }
 
+const LISTTABLE_ENTRY = entry('LISTTABLE');
 /**
  * The built-in potentials table (or the rows a filter picks), spilled with a header row. Example: =ECHEM.LISTTABLE("Cu") gives {Half-reaction, E° (V vs SHE, 25 °C), dE°/dT (mV/K), Source; Cu2O(s) + H2O + 2 e- -> 2 Cu + 2 OH-, -0.3557, -1.29, E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory); CRC Handbook of Chemistry and Physics, 92nd ed., Electrochemical Series (from memory) prints -0.36 V; Cu2+ + e- -> Cu+, 0.1607, 0.776, E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory); OpenStax Chemistry 2e, Appendix L prints 0.153 V; Cu2+ + 2 e- -> Cu, 0.3394, 0.011, E° and dE°/dT from the species data (NBS tables, Wagman et al. 1982, from memory); OpenStax Chemistry 2e, Appendix L prints 0.34 V; … (5 rows)}.
  * @customfunction LISTTABLE
@@ -275,9 +295,10 @@ export function SOURCE(reaction: any[][], table?: any[][]): any[][] {
  * @returns Rows: half-reaction | E° (V) | dE°/dT (mV/K) | source, under a header row
  */
 export function LISTTABLE(filter?: any[][]): any[][] {
-  return toExcel(implementation('LISTTABLE'), filter);
+  return callFromExcel(LISTTABLE_ENTRY, filter);
 }
 
+const CHECKTABLE_ENTRY = entry('CHECKTABLE');
 /**
  * The problems in your potentials table (unbalanced rows, bad numbers, duplicates, thermodynamic cycles that disagree by more than 2 mV), one per row, or OK. Example: =ECHEM.CHECKTABLE({"Cu2+ + 2 e- -> Cu",0.337}) gives OK.
  * @customfunction CHECKTABLE
@@ -286,9 +307,10 @@ export function LISTTABLE(filter?: any[][]): any[][] {
  * @returns OK, or one problem per row
  */
 export function CHECKTABLE(table: any[][]): any[][] {
-  return toExcel(implementation('CHECKTABLE'), table);
+  return callFromExcel(CHECKTABLE_ENTRY, table);
 }
 
+const CORRATE_ENTRY = entry('CORRATE');
 /**
  * Corrosion rate in mm/y from a corrosion current density, CR = K1·i_corr·EW/ρ (ASTM G102). Example: =ECHEM.CORRATE("Fe", 1) gives 0.0116019.
  * @customfunction CORRATE
@@ -300,9 +322,10 @@ export function CHECKTABLE(table: any[][]): any[][] {
  * @returns Corrosion rate in mm/y, one row per case
  */
 export function CORRATE(metal_or_alloy: any[][], current_density_uA_cm2: any[][], density_g_cm3?: any[][], equivalent_weight?: any[][]): any[][] {
-  return toExcel(implementation('CORRATE'), metal_or_alloy, current_density_uA_cm2, density_g_cm3, equivalent_weight);
+  return callFromExcel(CORRATE_ENTRY, metal_or_alloy, current_density_uA_cm2, density_g_cm3, equivalent_weight);
 }
 
+const MASSLOSS_ENTRY = entry('MASSLOSS');
 /**
  * Mass-loss rate in g/(m²·d) from a corrosion current density, MR = K2·i_corr·EW (ASTM G102). Example: =ECHEM.MASSLOSS("Fe", 1) gives 0.250018.
  * @customfunction MASSLOSS
@@ -314,9 +337,10 @@ export function CORRATE(metal_or_alloy: any[][], current_density_uA_cm2: any[][]
  * @returns Mass-loss rate in g/(m²·d), one row per case
  */
 export function MASSLOSS(metal_or_alloy: any[][], current_density_uA_cm2: any[][], density_g_cm3?: any[][], equivalent_weight?: any[][]): any[][] {
-  return toExcel(implementation('MASSLOSS'), metal_or_alloy, current_density_uA_cm2, density_g_cm3, equivalent_weight);
+  return callFromExcel(MASSLOSS_ENTRY, metal_or_alloy, current_density_uA_cm2, density_g_cm3, equivalent_weight);
 }
 
+const ANODELIFE_ENTRY = entry('ANODELIFE');
 /**
  * Life in years of a galvanic anode: mass·capacity·utilisation/(current·8760), with published capacities and utilisation factors by name. Example: =ECHEM.ANODELIFE(100, "zinc", 0.5, "long slender stand-off") gives 16.0274.
  * @customfunction ANODELIFE
@@ -328,9 +352,10 @@ export function MASSLOSS(metal_or_alloy: any[][], current_density_uA_cm2: any[][
  * @returns Anode life in years, one row per case
  */
 export function ANODELIFE(mass_kg: any[][], capacity_Ah_kg: any[][], current_A: any[][], utilisation?: any[][]): any[][] {
-  return toExcel(implementation('ANODELIFE'), mass_kg, capacity_Ah_kg, current_A, utilisation);
+  return callFromExcel(ANODELIFE_ENTRY, mass_kg, capacity_Ah_kg, current_A, utilisation);
 }
 
+const PREDOMINANT_ENTRY = entry('PREDOMINANT');
 /**
  * The thermodynamically stable species of an element at a potential and pH (E–pH / Pourbaix diagram). Example: =ECHEM.PREDOMINANT("Fe", -1, 7) gives Fe(s).
  * @customfunction PREDOMINANT
@@ -343,9 +368,10 @@ export function ANODELIFE(mass_kg: any[][], capacity_Ah_kg: any[][], current_A: 
  * @returns Species text, e.g. "Fe2O3(s)", one row per case
  */
 export function PREDOMINANT(element: any[][], E_V: any[][], pH: any[][], activity?: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('PREDOMINANT'), element, E_V, pH, activity, temp_C);
+  return callFromExcel(PREDOMINANT_ENTRY, element, E_V, pH, activity, temp_C);
 }
 
+const EPHCLASS_ENTRY = entry('EPHCLASS');
 /**
  * Immunity, corrosion or passivation: the class of the stable species of an element at a potential and pH. Example: =ECHEM.EPHCLASS("Zn", -0.5, 4) gives corrosion.
  * @customfunction EPHCLASS
@@ -358,9 +384,10 @@ export function PREDOMINANT(element: any[][], E_V: any[][], pH: any[][], activit
  * @returns "immunity" (the metal), "corrosion" (a dissolved species) or "passivation" (a solid oxide or hydroxide), one row per case
  */
 export function EPHCLASS(element: any[][], E_V: any[][], pH: any[][], activity?: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('EPHCLASS'), element, E_V, pH, activity, temp_C);
+  return callFromExcel(EPHCLASS_ENTRY, element, E_V, pH, activity, temp_C);
 }
 
+const EPHLINES_ENTRY = entry('EPHLINES');
 /**
  * An element's E–pH diagram as line segments (species A, species B, pH1, E1, pH2, E2) plus the two water lines, for an XY chart. Example: =ECHEM.EPHLINES("Zn") gives {species A, species B, pH1, E1 (V vs SHE), pH2, E2 (V vs SHE); Zn(s), ZnO2 2-, 13.9804, -1.36492, 14, -1.36725; Zn(s), HZnO2-, 10.0177, -1.01328, 13.9804, -1.36492; Zn(s), ZnO(s), 8.76681, -0.939278, 10.0177, -1.01328; … (10 rows)}.
  * @customfunction EPHLINES
@@ -373,9 +400,10 @@ export function EPHCLASS(element: any[][], E_V: any[][], pH: any[][], activity?:
  * @returns Rows under a header: species A | species B | pH1 | E1 (V vs SHE) | pH2 | E2 (V vs SHE)
  */
 export function EPHLINES(element: any[][], activity?: any[][], temp_C?: any[][], pH_min?: any[][], pH_max?: any[][]): any[][] {
-  return toExcel(implementation('EPHLINES'), element, activity, temp_C, pH_min, pH_max);
+  return callFromExcel(EPHLINES_ENTRY, element, activity, temp_C, pH_min, pH_max);
 }
 
+const DEPOSIT_ENTRY = entry('DEPOSIT');
 /**
  * Mass in g deposited (or dissolved) by a charge through a half-reaction, by Faraday's law m = Q·M·ε/(n·F). Example: =ECHEM.DEPOSIT("Cu2+ + 2 e- -> Cu", 96485.33212) gives 31.773.
  * @customfunction DEPOSIT
@@ -386,9 +414,10 @@ export function EPHLINES(element: any[][], activity?: any[][], temp_C?: any[][],
  * @returns Mass in g, one row per case
  */
 export function DEPOSIT(reaction: any[][], charge_C: any[][], efficiency?: any[][]): any[][] {
-  return toExcel(implementation('DEPOSIT'), reaction, charge_C, efficiency);
+  return callFromExcel(DEPOSIT_ENTRY, reaction, charge_C, efficiency);
 }
 
+const PLATETIME_ENTRY = entry('PLATETIME');
 /**
  * Time in s to plate a thickness at a current density: t = ρ·d·n·F/(i·M·ε). Example: =ECHEM.PLATETIME("Cu2+ + 2 e- -> Cu", 25, 200, 8.96) gives 3401.11.
  * @customfunction PLATETIME
@@ -401,9 +430,10 @@ export function DEPOSIT(reaction: any[][], charge_C: any[][], efficiency?: any[]
  * @returns Time in s, one row per case
  */
 export function PLATETIME(reaction: any[][], thickness_um: any[][], current_density_A_m2: any[][], density_g_cm3: any[][], efficiency?: any[][]): any[][] {
-  return toExcel(implementation('PLATETIME'), reaction, thickness_um, current_density_A_m2, density_g_cm3, efficiency);
+  return callFromExcel(PLATETIME_ENTRY, reaction, thickness_um, current_density_A_m2, density_g_cm3, efficiency);
 }
 
+const THICKNESS_ENTRY = entry('THICKNESS');
 /**
  * Thickness in µm plated by a current density over a time: d = i·t·M·ε/(n·F·ρ). Example: =ECHEM.THICKNESS("Ni2+ + 2 e- -> Ni", 300, 3600, 8.9, 0.95) gives 35.0633.
  * @customfunction THICKNESS
@@ -416,9 +446,10 @@ export function PLATETIME(reaction: any[][], thickness_um: any[][], current_dens
  * @returns Thickness in µm, one row per case
  */
 export function THICKNESS(reaction: any[][], current_density_A_m2: any[][], time_s: any[][], density_g_cm3: any[][], efficiency?: any[][]): any[][] {
-  return toExcel(implementation('THICKNESS'), reaction, current_density_A_m2, time_s, density_g_cm3, efficiency);
+  return callFromExcel(THICKNESS_ENTRY, reaction, current_density_A_m2, time_s, density_g_cm3, efficiency);
 }
 
+const CAPACITY_ENTRY = entry('CAPACITY');
 /**
  * Theoretical specific capacity in mAh/g of an electrode reaction or active material: n·F/(3.6·M). Example: =ECHEM.CAPACITY("Li+ + e- -> Li") gives 3861.88.
  * @customfunction CAPACITY
@@ -428,9 +459,10 @@ export function THICKNESS(reaction: any[][], current_density_A_m2: any[][], time
  * @returns Specific capacity in mAh/g, one row per case
  */
 export function CAPACITY(reaction_or_species: any[][], basis?: any[][]): any[][] {
-  return toExcel(implementation('CAPACITY'), reaction_or_species, basis);
+  return callFromExcel(CAPACITY_ENTRY, reaction_or_species, basis);
 }
 
+const SPECENERGY_ENTRY = entry('SPECENERGY');
 /**
  * Theoretical specific energy in Wh/kg of a cell reaction, n·F·E°/(3.6·Σ reactant masses), with E° from the potentials table. Example: =ECHEM.SPECENERGY("Pb + PbO2 + 2 H2SO4 -> 2 PbSO4 + 2 H2O") gives 170.225.
  * @customfunction SPECENERGY
@@ -440,9 +472,10 @@ export function CAPACITY(reaction_or_species: any[][], basis?: any[][]): any[][]
  * @returns Specific energy in Wh per kg of reactants, one row per case
  */
 export function SPECENERGY(cell_reaction: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('SPECENERGY'), cell_reaction, temp_C);
+  return callFromExcel(SPECENERGY_ENTRY, cell_reaction, temp_C);
 }
 
+const BVCURRENT_ENTRY = entry('BVCURRENT');
 /**
  * Butler–Volmer current density at an overpotential, with an optional mass-transfer limit; anodic positive, same unit as i0. Example: =ECHEM.BVCURRENT(0.05, 0.001, 0.5) gives 0.00226805.
  * @customfunction BVCURRENT
@@ -456,9 +489,10 @@ export function SPECENERGY(cell_reaction: any[][], temp_C?: any[][]): any[][] {
  * @returns Current density (unit of i0), one row per case
  */
 export function BVCURRENT(eta_V: any[][], i0: any[][], alpha_a: any[][], alpha_c?: any[][], temp_C?: any[][], i_lim?: any[][]): any[][] {
-  return toExcel(implementation('BVCURRENT'), eta_V, i0, alpha_a, alpha_c, temp_C, i_lim);
+  return callFromExcel(BVCURRENT_ENTRY, eta_V, i0, alpha_a, alpha_c, temp_C, i_lim);
 }
 
+const OVERPOTENTIAL_ENTRY = entry('OVERPOTENTIAL');
 /**
  * Overpotential in V that gives a current density, the inverse of BVCURRENT (exact for αa = αc, else a safeguarded Newton iteration). Example: =ECHEM.OVERPOTENTIAL(0.001, 0.001, 0.5) gives 0.0247271.
  * @customfunction OVERPOTENTIAL
@@ -472,9 +506,10 @@ export function BVCURRENT(eta_V: any[][], i0: any[][], alpha_a: any[][], alpha_c
  * @returns Overpotential in V, one row per case
  */
 export function OVERPOTENTIAL(i: any[][], i0: any[][], alpha_a: any[][], alpha_c?: any[][], temp_C?: any[][], i_lim?: any[][]): any[][] {
-  return toExcel(implementation('OVERPOTENTIAL'), i, i0, alpha_a, alpha_c, temp_C, i_lim);
+  return callFromExcel(OVERPOTENTIAL_ENTRY, i, i0, alpha_a, alpha_c, temp_C, i_lim);
 }
 
+const TAFELSLOPE_ENTRY = entry('TAFELSLOPE');
 /**
  * Tafel slope b = ln10·RT/(α·n·F) in V per decade of current. Example: =ECHEM.TAFELSLOPE(0.5) gives 0.118319.
  * @customfunction TAFELSLOPE
@@ -485,9 +520,10 @@ export function OVERPOTENTIAL(i: any[][], i0: any[][], alpha_a: any[][], alpha_c
  * @returns Tafel slope in V/decade, one row per case
  */
 export function TAFELSLOPE(alpha: any[][], temp_C?: any[][], n?: any[][]): any[][] {
-  return toExcel(implementation('TAFELSLOPE'), alpha, temp_C, n);
+  return callFromExcel(TAFELSLOPE_ENTRY, alpha, temp_C, n);
 }
 
+const MIXEDPOTENTIAL_ENTRY = entry('MIXEDPOTENTIAL');
 /**
  * Corrosion potential and current (two cells) where an anodic and a cathodic Tafel reaction balance (Wagner–Traud), solved exactly in log space. Example: =ECHEM.MIXEDPOTENTIAL(-0.5, 0.000001, 0.06, 0, 1e-7, 0.12) gives {-0.373333, 0.000129155}.
  * @customfunction MIXEDPOTENTIAL
@@ -501,9 +537,10 @@ export function TAFELSLOPE(alpha: any[][], temp_C?: any[][], n?: any[][]): any[]
  * @returns Two cells per case: E_corr in V (the scale of E_a and E_c) and i_corr (the unit of i0)
  */
 export function MIXEDPOTENTIAL(E_a: any[][], i0_a: any[][], b_a: any[][], E_c: any[][], i0_c: any[][], b_c: any[][]): any[][] {
-  return toExcel(implementation('MIXEDPOTENTIAL'), E_a, i0_a, b_a, E_c, i0_c, b_c);
+  return callFromExcel(MIXEDPOTENTIAL_ENTRY, E_a, i0_a, b_a, E_c, i0_c, b_c);
 }
 
+const SOLVEFOR_ENTRY = entry('SOLVEFOR');
 /**
  * The activity of one species, or the pH, that gives a measured potential (the Nernst equation solved exactly in log space). Example: =ECHEM.SOLVEFOR("2 H+ + 2 e- -> H2", -0.2, "pH", "H2", 1) gives 3.3807.
  * @customfunction SOLVEFOR
@@ -518,9 +555,10 @@ export function MIXEDPOTENTIAL(E_a: any[][], i0_a: any[][], b_a: any[][], E_c: a
  * @returns Activity (mol/L; bar for a gas) or pH, one row per case
  */
 export function SOLVEFOR(reaction: any[][], E_V: any[][], unknown: any[][], species?: any[][], values?: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('SOLVEFOR'), reaction, E_V, unknown, species, values, temp_C, table);
+  return callFromExcel(SOLVEFOR_ENTRY, reaction, E_V, unknown, species, values, temp_C, table);
 }
 
+const JUNCTION_ENTRY = entry('JUNCTION');
 /**
  * Liquid-junction potential E_j = φ(right) − φ(left) in V by the Henderson equation, from limiting ionic conductivities at 25 °C (CRC Handbook). Example: =ECHEM.JUNCTION({"HCl","KCl"}, {0.1,0}, {0,0.1}) gives 0.0268516.
  * @customfunction JUNCTION
@@ -532,9 +570,10 @@ export function SOLVEFOR(reaction: any[][], E_V: any[][], unknown: any[][], spec
  * @returns E_j in V, one row per case
  */
 export function JUNCTION(species: any[][], left_values: any[][], right_values: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('JUNCTION'), species, left_values, right_values, temp_C);
+  return callFromExcel(JUNCTION_ENTRY, species, left_values, right_values, temp_C);
 }
 
+const ISERESPONSE_ENTRY = entry('ISERESPONSE');
 /**
  * Potential in V of an ion-selective electrode by the Nikolsky–Eisenman equation, E = E0 + (S/z)·log10(a_i + Σ K_ij·a_j^(z_i/z_j)). Example: =ECHEM.ISERESPONSE(0.2, 0.05916, {"K+","Na+"}, {0.0001,0.1}, 0.001) gives -0.0188311.
  * @customfunction ISERESPONSE
@@ -547,9 +586,10 @@ export function JUNCTION(species: any[][], left_values: any[][], right_values: a
  * @returns E in V, one row per case
  */
 export function ISERESPONSE(E0_V: any[][], slope_V: any[][], primary: any[][], activities: any[][], selectivities?: any[][]): any[][] {
-  return toExcel(implementation('ISERESPONSE'), E0_V, slope_V, primary, activities, selectivities);
+  return callFromExcel(ISERESPONSE_ENTRY, E0_V, slope_V, primary, activities, selectivities);
 }
 
+const MEANACTCOEF_ENTRY = entry('MEANACTCOEF');
 /**
  * Mean activity coefficient γ± of a salt at a molality, by the Pitzer model (default) or a Debye–Hückel-family model. Example: =ECHEM.MEANACTCOEF("NaCl", 1) gives 0.655537.
  * @customfunction MEANACTCOEF
@@ -562,9 +602,10 @@ export function ISERESPONSE(E0_V: any[][], slope_V: any[][], primary: any[][], a
  * @returns γ± (dimensionless, molal scale), one row per case
  */
 export function MEANACTCOEF(salt: any[][], molality: any[][], model?: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
-  return toExcel(implementation('MEANACTCOEF'), salt, molality, model, temp_C, extrapolate);
+  return callFromExcel(MEANACTCOEF_ENTRY, salt, molality, model, temp_C, extrapolate);
 }
 
+const WATERACTIVITY_ENTRY = entry('WATERACTIVITY');
 /**
  * Activity of water a(H2O) in a salt solution or a mixture, from the Pitzer osmotic coefficient: ln a_w = −φ·M_w·Σm. Example: =ECHEM.WATERACTIVITY("NaCl", 1) gives 0.966842.
  * @customfunction WATERACTIVITY
@@ -576,9 +617,10 @@ export function MEANACTCOEF(salt: any[][], molality: any[][], model?: any[][], t
  * @returns a(H2O) (dimensionless, pure water 1), one row per case
  */
 export function WATERACTIVITY(salt_or_species: any[][], molality_or_values: any[][], temp_C?: any[][], extrapolate?: any[][]): any[][] {
-  return toExcel(implementation('WATERACTIVITY'), salt_or_species, molality_or_values, temp_C, extrapolate);
+  return callFromExcel(WATERACTIVITY_ENTRY, salt_or_species, molality_or_values, temp_C, extrapolate);
 }
 
+const MOLALITY_ENTRY = entry('MOLALITY');
 /**
  * Molality (mol/kg of water) of a salt solution from its molarity (mol/L of solution): m = c / (ρ − c·M/1000). Example: =ECHEM.MOLALITY("NaCl", 1.832, , 20) gives 1.90114.
  * @customfunction MOLALITY
@@ -590,9 +632,10 @@ export function WATERACTIVITY(salt_or_species: any[][], molality_or_values: any[
  * @returns m in mol/kg, one row per case
  */
 export function MOLALITY(salt: any[][], molarity: any[][], density_g_cm3?: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('MOLALITY'), salt, molarity, density_g_cm3, temp_C);
+  return callFromExcel(MOLALITY_ENTRY, salt, molarity, density_g_cm3, temp_C);
 }
 
+const FORMATION_ENTRY = entry('FORMATION');
 /**
  * Standard formation data of a species at 298.15 K and 1 bar from the species data: ΔfG° or ΔfH° in kJ/mol, S° or Cp° in J/(mol·K), or the source. Example: =ECHEM.FORMATION("H2O(l)", "H") gives -285.83.
  * @customfunction FORMATION
@@ -602,9 +645,10 @@ export function MOLALITY(salt: any[][], molarity: any[][], density_g_cm3?: any[]
  * @returns The quantity (kJ/mol, J/(mol·K)) or the source text, one row per case
  */
 export function FORMATION(species: any[][], quantity?: any[][]): any[][] {
-  return toExcel(implementation('FORMATION'), species, quantity);
+  return callFromExcel(FORMATION_ENTRY, species, quantity);
 }
 
+const ENTHALPY_ENTRY = entry('ENTHALPY');
 /**
  * Standard reaction enthalpy ΔrH° in kJ/mol at temp_C (Gibbs–Helmholtz with constant ΔCp° from the species data, or the table rows’ dE°/dT). Example: =ECHEM.ENTHALPY("H2 + 1/2 O2 -> H2O") gives -285.83.
  * @customfunction ENTHALPY
@@ -615,9 +659,10 @@ export function FORMATION(species: any[][], quantity?: any[][]): any[][] {
  * @returns ΔrH° in kJ/mol, one row per case
  */
 export function ENTHALPY(reaction: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('ENTHALPY'), reaction, temp_C, table);
+  return callFromExcel(ENTHALPY_ENTRY, reaction, temp_C, table);
 }
 
+const ENTROPY_ENTRY = entry('ENTROPY');
 /**
  * Standard reaction entropy ΔrS° in J/(mol·K) at temp_C, from the species data or the table rows’ dE°/dT. Example: =ECHEM.ENTROPY("H2 + 1/2 O2 -> H2O") gives -163.343.
  * @customfunction ENTROPY
@@ -628,9 +673,10 @@ export function ENTHALPY(reaction: any[][], temp_C?: any[][], table?: any[][]): 
  * @returns ΔrS° in J/(mol·K), one row per case
  */
 export function ENTROPY(reaction: any[][], temp_C?: any[][], table?: any[][]): any[][] {
-  return toExcel(implementation('ENTROPY'), reaction, temp_C, table);
+  return callFromExcel(ENTROPY_ENTRY, reaction, temp_C, table);
 }
 
+const THERMONEUTRAL_ENTRY = entry('THERMONEUTRAL');
 /**
  * Thermoneutral voltage ΔrH°/(nF) in V of a redox reaction as written (positive for an electrolysis such as "H2O -> H2 + 1/2 O2"), for electrolysers and fuel cells. Example: =ECHEM.THERMONEUTRAL("H2O -> H2 + 1/2 O2") gives 1.48121.
  * @customfunction THERMONEUTRAL
@@ -640,7 +686,7 @@ export function ENTROPY(reaction: any[][], temp_C?: any[][], table?: any[][]): a
  * @returns V, one row per case
  */
 export function THERMONEUTRAL(reaction: any[][], temp_C?: any[][]): any[][] {
-  return toExcel(implementation('THERMONEUTRAL'), reaction, temp_C);
+  return callFromExcel(THERMONEUTRAL_ENTRY, reaction, temp_C);
 }
 
 // Excel finds each function by its id. Guarded so that the page also loads outside Excel.

@@ -193,6 +193,90 @@ function generalCase<E>(
 }
 
 /**
+ * A cell of a values row read without changing the row. An indexed read (`row[c]`) at a site
+ * that has met rows of numbers and rows of text makes V8's optimised code convert every
+ * number row it reads into a row of boxed numbers (an elements-kind transition), which then
+ * costs an allocation per cell and the garbage after it, in this pass and in every later one;
+ * `Array.prototype.at` reads any row as it is. Null where the row is no array.
+ */
+type CellReader = (row: unknown, c: number) => unknown;
+const HAS_AT = typeof (Array.prototype as { at?: unknown }).at === 'function';
+
+/** The cell `c` of a host row (see {@link CellReader}); undefined outside the row or where it is no array. */
+export const cellOf: CellReader = HAS_AT
+  ? (row, c) => (Array.isArray(row) ? (row as unknown as { at(i: number): unknown }).at(c) : undefined)
+  : (row, c) => (Array.isArray(row) ? (row as unknown[])[c] : undefined);
+
+/**
+ * The two-species kernel at one temperature: where the binding reads two value columns of
+ * opposite, equal weights (a cell or a redox couple, the common case),
+ * Σ w·log10 a = w·log10(a[c1]/a[c2]), so each case is `k0 + k·log10(a[c1]/a[c2])`: one
+ * logarithm, E° and RT ln10/nF worked out once for the temperature (a temperature-independent
+ * call pays no temperature term per case).
+ */
+export interface PairKernel {
+  readonly c1: number;
+  readonly c2: number;
+  readonly k0: number;
+  readonly k: number;
+}
+
+/**
+ * The {@link PairKernel} of a binding at `tempC`, or null where the binding is not a ratio pair.
+ *
+ * @throws EngineError (`argument`) for a temperature the reaction's data refuse (as {@link sweepToColumn})
+ * @example
+ * pairKernel(bindSpecies(compiledReaction('Zn | Zn2+ || Cu2+ | Cu', null), ['Zn2+', 'Cu2+']), 25, 'potential') // { c1: 0, c2: 1, k0: 1.1018, k: 0.02958 }
+ */
+export function pairKernel(b: Binding, tempC: number, quantity: CaseQuantity): PairKernel | null {
+  const pair = ratioPair(b);
+  if (!pair) return null;
+  const { c1, c2, w } = pair;
+  if (quantity === 'log10Q') return { c1, c2, k0: b.form.n * b.fixedLog, k: b.form.n * w };
+  const s = slopePerElectronAtKelvin(kelvinFromCelsius(tempC));
+  const e0 = standardPotentialAt(linearStandardPotential(b.form.resolved), tempC);
+  return { c1, c2, k0: e0 - s * b.fixedLog, k: -s * w };
+}
+
+/**
+ * Writes `out[i] = [k0 + k·log10(a[c1]/a[c2])]` from case `from` on, while the two cells are
+ * positive numbers and the result is finite; returns the first case it could not write (the
+ * caller's general path takes that one).
+ */
+function pairCells(kern: PairKernel, rows: readonly unknown[], out: unknown[][], from: number): number {
+  const { c1, c2, k0, k } = kern;
+  const n = rows.length;
+  let i = from;
+  for (; i < n; i++) {
+    const row = rows[i];
+    const a1 = cellOf(row, c1);
+    const a2 = cellOf(row, c2);
+    if (typeof a1 !== 'number' || typeof a2 !== 'number' || !(a1 > 0) || !(a2 > 0)) break;
+    const x = k0 + k * Math.log10(a1 / a2);
+    if (x - x !== 0) break;
+    out[i] = [x];
+  }
+  return i;
+}
+
+/**
+ * The kernel over all rows where every case is a plain number: the column of one-cell rows
+ * (marked by {@link isFiniteColumn} from 32 cases), or null at the first case that is not (a
+ * cell that is no positive number, a result beyond the number range) so that the caller takes
+ * its general path with its messages.
+ *
+ * @example
+ * pairColumn(kernel, [[0.1, 0.01]]) // [[1.0718]]
+ */
+export function pairColumn(kern: PairKernel, rows: readonly unknown[]): number[][] | null {
+  const n = rows.length;
+  const out = new Array<number[]>(n);
+  if (pairCells(kern, rows, out, 0) !== n) return null;
+  if (n >= MARK_FROM_CASES) FINITE_COLUMNS.add(out);
+  return out;
+}
+
+/**
  * The same computation as {@link sweepCases}, written straight into a column of
  * one-cell rows (the shape a spreadsheet spill takes), with each case's error
  * turned into a cell by `onError`. One pass, no intermediate array; where every cell is a
@@ -214,39 +298,17 @@ export function sweepToColumn<E>(
   const tK = kelvinFromCelsius(tempC);
   const e0 = standardPotentialAt(lin, tempC);
   const s = slopePerElectronAtKelvin(tK);
-  const n = b.form.n;
   const potential = quantity === 'potential';
   // an OH- activity set by a pH column: log10 a(OH-) = pH − pKw(T) (log Q at 25 °C)
   const oh = ohOffset(b, potential ? tempC : 25);
-  // With two value columns of opposite, equal weights (a cell or a redox couple, the common
-  // case) Σ w·log10 a = w·log10(a1/a2): one logarithm per case instead of two.
-  const pair = ratioPair(b);
+  const kern = pairKernel(b, tempC, quantity);
   let allFinite = true;
-  if (pair) {
-    const { c1, c2, w } = pair;
-    const k = potential ? -s * w : n * w;
-    const k0 = potential ? e0 - s * b.fixedLog : n * b.fixedLog;
-    for (let i = 0; i < caseCount; i++) {
-      const row = rows[i]!;
-      const a1 = row[c1];
-      const a2 = row[c2];
-      if (typeof a1 === 'number' && typeof a2 === 'number' && a1 > 0 && a2 > 0) {
-        const x = k0 + k * Math.log10(a1 / a2);
-        if (x - x === 0) {
-          out[i] = [x];
-          continue;
-        }
-      }
-      const cell = generalCase(b, row, oh, potential, e0, s, onError, tempC);
-      if (typeof cell !== 'number') allFinite = false;
-      out[i] = [cell];
-    }
-  } else {
-    for (let i = 0; i < caseCount; i++) {
-      const cell = generalCase(b, rows[i]!, oh, potential, e0, s, onError, tempC);
-      if (typeof cell !== 'number') allFinite = false;
-      out[i] = [cell];
-    }
+  let i = kern ? pairCells(kern, rows, out, 0) : 0;
+  while (i < caseCount) {
+    const cell = generalCase(b, rows[i]!, oh, potential, e0, s, onError, tempC);
+    if (typeof cell !== 'number') allFinite = false;
+    out[i] = [cell];
+    i = kern ? pairCells(kern, rows, out, i + 1) : i + 1;
   }
   if (allFinite && caseCount >= MARK_FROM_CASES) FINITE_COLUMNS.add(out);
   return out;

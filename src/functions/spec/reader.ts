@@ -4,7 +4,7 @@
  * computation per case or over all cases, and return a grid. Nothing throws past here: a bad
  * case gives an error in its own cell, a bad call one error cell.
  */
-import { EngineError, isFiniteColumn } from '../../engine';
+import { EngineError, cellOf, isFiniteColumn } from '../../engine';
 import type { Arg, Result, ResultCell, Scalar } from '../cellTypes';
 import { asGrid } from '../args';
 import { at, caseColumn, caseCount, type CaseColumn } from '../broadcast';
@@ -239,7 +239,8 @@ export function propagateInputErrors(
   for (let r = 0; r < result.length; r++) {
     const row = result[r]!;
     let erring = false;
-    for (let c = 0; c < row.length; c++) if (typeof row[c] === 'object') erring = true;
+    // cellOf: a result row of numbers is read as it is, never converted to boxed numbers
+    for (let c = 0; c < row.length; c++) if (typeof cellOf(row, c) === 'object') erring = true;
     if (!erring) continue;
     const src = rows.length === 1 ? rows[0] : rows[r];
     const e = src ? inputErrorInRow(src, headers, valuesName) : null;

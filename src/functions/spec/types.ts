@@ -206,4 +206,12 @@ export interface FunctionSpec {
    * error policy itself (reader.ts `propagateInputErrors`).
    */
   readonly fast?: (args: readonly Arg[]) => Result | null;
+  /**
+   * Optional, for the Excel wrappers (excelErrors.ts `callFromExcel`): the arguments exactly as
+   * Excel passes them (matrices, error values not yet turned into their codes). A result only
+   * where every cell is a finite number, the same the computation gives; null for anything
+   * else (then the arguments are converted and the computation runs with its checks and
+   * messages).
+   */
+  readonly host?: (args: readonly unknown[]) => Result | null;
 }

@@ -3,7 +3,7 @@
  * src/engine/notation/speciesHeader.ts), values matrices, lists and the potentials table.
  * See docs/design.md, "Sweeps".
  */
-import { EngineError, canonicalSpeciesHeader } from '../../engine';
+import { EngineError, canonicalSpeciesHeader, cellOf } from '../../engine';
 import { isInputErrorText, type Arg, type Grid, type Scalar, type TableCells } from '../cellTypes';
 import { asGrid, asList, isBlank, isBlankGrid, isEmptyTextGrid, readNumber, shapeOf } from '../args';
 import { inputErrorOf } from './kinds';
@@ -77,7 +77,7 @@ export function inputErrorInRow(
   valuesName: string,
 ): EngineError | null {
   for (let c = 0; c < row.length; c++) {
-    const v = row[c];
+    const v = cellOf(row, c); // the user's row of numbers stays as it is
     if (typeof v === 'string' && isInputErrorText(v))
       return inputErrorOf(`${valuesName} (${headers[c] ?? `column ${c + 1}`})`, v);
   }

@@ -11,7 +11,15 @@ import {
   standardPotentialV,
   sweepCases,
   sweepToColumn,
+  cellOf,
+  pairColumn,
+  pairKernel,
+  inlineDiagramKernel,
+  inlineDiagramValue,
+  readInlineAmounts,
   type Binding,
+  type InlineDiagramKernel,
+  type PairKernel,
 } from '../../engine';
 import type { Arg, Result, ResultCell, Scalar } from '../cellTypes';
 import { asGrid } from '../args';
@@ -36,19 +44,39 @@ type Quantity = 'potential' | 'log10Q';
  * is a copy of the table argument's cells (hosts such as Excel pass a fresh array every call,
  * so it is compared by content, never by identity).
  */
-let lastPrepared: { reaction: string; species: Scalar[]; headers: string[]; table: Arg; binding: Binding } | null = null;
+let lastPrepared: {
+  reaction: string;
+  species: Scalar[];
+  headers: string[];
+  table: Arg;
+  binding: Binding;
+  /** the two-species kernel at `kernelTempC` for `kernelQuantity` (null where the binding has none) */
+  kernel: PairKernel | null;
+  kernelTempC: number;
+  kernelQuantity: Quantity | null;
+} | null = null;
 
 /**
- * The one-entry cache above, in the engine's cache registry (name, clear, stats), so that the
+ * The last cell diagram with inline amounts computed without species or values: its kernel
+ * (the diagram's text pieces around its amounts, the resolution without them) and a copy of
+ * the table argument's cells.
+ */
+let lastDiagram: { kernel: InlineDiagramKernel; table: Arg } | null = null;
+/** The amounts of one call's diagram, read in place (a diagram holds at most 64). */
+const diagramAmounts = new Float64Array(64);
+
+/**
+ * The one-entry caches above, in the engine's cache registry (name, clear, stats), so that the
  * registry's one clear empties it too.
  */
 export const LAST_NERNST_CALL_CACHE = {
   name: 'functions.lastNernstCall',
   clear(): void {
     lastPrepared = null;
+    lastDiagram = null;
   },
   stats(): { name: string; entries: number; bytes: number } {
-    return { name: 'functions.lastNernstCall', entries: lastPrepared ? 1 : 0, bytes: 0 };
+    return { name: 'functions.lastNernstCall', entries: (lastPrepared ? 1 : 0) + (lastDiagram ? 1 : 0), bytes: 0 };
   },
 };
 registerCache(LAST_NERNST_CALL_CACHE);
@@ -109,6 +137,89 @@ function fastNernst(args: readonly Arg[], quantity: Quantity): Result | null {
   return propagateInputErrors(result, values as Scalar[][], p.headers, 'values');
 }
 
+/**
+ * The temperature of a call as Excel passes it (omitted, a 1×1 matrix or a number), read by the
+ * one temperature check; null for any other shape or a value the check refuses (then the full
+ * path gives its message).
+ */
+function hostTempC(v: unknown): number | null {
+  let t: unknown = v;
+  if (Array.isArray(v)) {
+    if (v.length !== 1) return null;
+    const row: unknown = v[0];
+    if (!Array.isArray(row) || row.length !== 1) return null;
+    t = cellOf(row, 0);
+  }
+  if (t === null || t === undefined) return STANDARD_TEMP_C;
+  if (typeof t !== 'number') return null;
+  try {
+    return readTempC(t, TEMP_C);
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The Excel path of POTENTIAL and LOGQ (spec `host`): the same reaction text, species row and
+ * table (by content) as the previous call, one temperature, and a values matrix of as many
+ * columns as species; every case worked out by the two-species kernel, E° and RT ln10/nF
+ * computed once per temperature. The rows are read as Excel passes them (no conversion pass):
+ * where any case is not a plain finite number (an error value, text, a blank, a non-positive
+ * activity) the result is null and the full path runs with its checks and messages.
+ */
+function hostNernst(args: readonly unknown[], quantity: Quantity): Result | null {
+  const p = lastPrepared;
+  if (p === null) return null;
+  const values = args[2];
+  if (!Array.isArray(values) || values.length === 0) return null;
+  const first: unknown = values[0];
+  if (!Array.isArray(first) || first.length !== p.species.length) return null;
+  const table = (quantity === 'potential' ? args[4] : args[3]) as Arg;
+  if (scalarOf(args[0] as Arg) !== p.reaction || !sameSpeciesRow(p.species, args[1] as Arg) || !sameTable(p.table, table))
+    return null;
+  const tempC = quantity === 'potential' ? hostTempC(args[3]) : STANDARD_TEMP_C;
+  if (tempC === null) return null;
+  if (p.kernelQuantity !== quantity || p.kernelTempC !== tempC) {
+    let k: PairKernel | null = null;
+    try {
+      k = pairKernel(p.binding, tempC, quantity);
+    } catch {
+      k = null;
+    }
+    p.kernel = k;
+    p.kernelTempC = tempC;
+    p.kernelQuantity = quantity;
+  }
+  return p.kernel ? pairColumn(p.kernel, values) : null;
+}
+
+/**
+ * The Excel path of POTENTIAL and LOGQ for a cell diagram whose activities are written in its
+ * text (`"Zn | Zn2+(aq, 0.1 M) || Cu2+(aq, 0.01 M) | Cu"`), species and values omitted: where
+ * the text is the last such diagram's text pieces with other amounts and the table the same
+ * (by content), the amounts are read in one scan and bound into the cached resolution. Null for
+ * anything else, or a result that is not a finite number (then the full path runs).
+ */
+function hostDiagram(args: readonly unknown[], quantity: Quantity): Result | null {
+  const d = lastDiagram;
+  if (d === null || !isOmitted(args[1]) || !isOmitted(args[2])) return null;
+  const text = scalarOf(args[0] as Arg);
+  if (typeof text !== 'string' || !sameTable(d.table, (quantity === 'potential' ? args[4] : args[3]) as Arg)) return null;
+  const tempC = quantity === 'potential' ? hostTempC(args[3]) : STANDARD_TEMP_C;
+  if (tempC === null || !readInlineAmounts(d.kernel, text, diagramAmounts)) return null;
+  let x: number;
+  try {
+    x = inlineDiagramValue(d.kernel, diagramAmounts, tempC, quantity);
+  } catch {
+    return null;
+  }
+  return Number.isFinite(x) ? [[x]] : null;
+}
+
+function isOmitted(v: unknown): boolean {
+  return v === null || v === undefined;
+}
+
 function toColumn(res: { values: Float64Array; errors: ReadonlyMap<number, unknown> }, n: number): Result {
   const out: Result = new Array<ResultCell[]>(n);
   for (let i = 0; i < n; i++) {
@@ -134,8 +245,21 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
     const reaction = scalarOf(call.raw('reaction'));
     lastPrepared =
       sg && sg.length === 1 && typeof reaction === 'string' && text === reaction
-        ? { reaction, species: sg[0]!.slice(), headers, table: snapshotTable(call.raw('table')), binding: b }
+        ? {
+            reaction,
+            species: sg[0]!.slice(),
+            headers,
+            table: snapshotTable(call.raw('table')),
+            binding: b,
+            kernel: null,
+            kernelTempC: NaN,
+            kernelQuantity: null,
+          }
         : null;
+    if (headers.length === 0 && rows === null && typeof reaction === 'string' && text === reaction) {
+      const kernel = inlineDiagramKernel(text, cells);
+      if (kernel) lastDiagram = { kernel, table: snapshotTable(call.raw('table')) };
+    }
     const temps = quantity === 'potential' ? call.column('temp_C') : null;
     if (!temps || temps.length === 1) return sweepToColumn<ResultCell>(b, valueRows, tempOf(0), quantity, toCellError);
     return toColumn(sweepCases(b, valueRows, tempOf, quantity, n), n);
@@ -187,6 +311,7 @@ const POTENTIAL: FunctionSpec = {
     },
   ],
   fast: (args) => fastNernst(args, 'potential'),
+  host: (args) => hostNernst(args, 'potential') ?? hostDiagram(args, 'potential'),
   run: (call) => nernstCases(call, 'potential'),
 };
 
@@ -253,6 +378,7 @@ const LOGQ: FunctionSpec = {
     },
   ],
   fast: (args) => fastNernst(args, 'log10Q'),
+  host: (args) => hostNernst(args, 'log10Q') ?? hostDiagram(args, 'log10Q'),
   run: (call) => nernstCases(call, 'log10Q'),
 };
 
