@@ -5,11 +5,13 @@
  * not break lookups that do not touch it.
  */
 import { EngineError, isEngineError, quote } from '../errors';
-import { sign, type Rational, div } from '../rational';
+import { sign, type Rational, div, rat, ONE } from '../rational';
 import { parseNotation } from '../notation/notation';
-import { formatReaction, type Reaction } from '../notation/reaction';
+import { formatReaction, type Reaction, type Term } from '../notation/reaction';
+import { ELECTRON, type Phase, type Species } from '../notation/species';
 import { checkBalance } from '../balance/balance';
 import { BUILTIN_POTENTIALS } from '../data/potentials';
+import BUILTIN_TERMS from '../data/potentialTerms.json';
 import { type StoichMap, reactionMap, electronsOf, proportionality, scaleMap } from './halfReaction';
 import { toNumber } from '../rational';
 import {
@@ -112,7 +114,7 @@ function readablePerElectron(text: string): StoichMap | null {
     if (n.kind !== 'half') return null;
     const map = reactionMap(n.reaction);
     const e = electronsOf(map);
-    return sign(e) > 0 ? scaleMap(map, div({ num: 1n, den: 1n }, e)) : null;
+    return sign(e) > 0 ? scaleMap(map, div(ONE, e)) : null;
   } catch {
     return null;
   }
@@ -123,13 +125,15 @@ export function describeOrigin(o: RowOrigin): string {
   return o.kind === 'builtin' ? `built-in row ${o.index + 1}` : `your table, row ${o.row}`;
 }
 
-function makeRow(
-  text: string,
-  e0V: number,
-  dE0dTmVperK: number | null,
-  source: string,
-  origin: RowOrigin,
-): TableRow {
+/** A row's half-reaction read: the reaction as written, its map and its electrons. */
+interface ReadHalfReaction {
+  readonly reaction: Reaction;
+  readonly map: StoichMap;
+  readonly e: Rational;
+}
+
+/** Parse and check a row's half-reaction (balanced, written as a reduction). */
+function readHalfReaction(text: string): ReadHalfReaction {
   const n = parseNotation(text, 'half-reaction');
   if (n.kind !== 'half') {
     throw new EngineError(
@@ -148,7 +152,24 @@ function makeRow(
       `${quote(text)} is written as an oxidation; write it as a reduction (electrons on the left).`,
     );
   }
-  const electrons = Number(e.num) / Number(e.den);
+  return { reaction: n.reaction, map, e };
+}
+
+/** The temperature-dependent part of a row: E°, dE°/dT and how E° moves with temperature. */
+interface RowThermo {
+  readonly e0V: number;
+  readonly dE0dTmVperK: number | null;
+  readonly temperature: RowTemperature;
+  readonly speciesE0V: number | null;
+}
+
+function rowThermo(
+  map: StoichMap,
+  electrons: number,
+  e0V: number,
+  dE0dTmVperK: number | null,
+  builtin: boolean,
+): RowThermo {
   const sp = speciesModel(map, electrons);
   let temperature: RowTemperature;
   let value = e0V;
@@ -166,7 +187,7 @@ function makeRow(
     mv === null
       ? { slopeVPerK: 0, cpVPerK: 0, basis: 'none', cpMissing, entropyMissing }
       : { slopeVPerK: mv * 1e-3, cpVPerK: 0, basis: 'row', cpMissing, entropyMissing };
-  if (origin.kind === 'builtin' && sp) {
+  if (builtin && sp) {
     // built-in rows: E° and its temperature dependence from the species data
     value = sp.model.e0V;
     if (sp.model.slopeVPerK !== null) {
@@ -176,34 +197,123 @@ function makeRow(
   } else if (dE0dTmVperK !== null) temperature = fromRow(dE0dTmVperK);
   else if (sp && sp.model.slopeVPerK !== null) temperature = fromSpecies();
   else temperature = fromRow(null);
+  return { e0V: value, dE0dTmVperK: slopeMv, temperature, speciesE0V: sp ? sp.model.e0V : null };
+}
+
+function electronCount(e: Rational): number {
+  return Number(e.num) / Number(e.den);
+}
+
+function makeRow(
+  text: string,
+  e0V: number,
+  dE0dTmVperK: number | null,
+  source: string,
+  origin: RowOrigin,
+): TableRow {
+  const { reaction, map, e } = readHalfReaction(text);
+  const electrons = electronCount(e);
   return {
     text,
-    reaction: n.reaction,
+    reaction,
     map,
-    perElectron: scaleMap(map, div({ num: 1n, den: 1n }, e)),
+    perElectron: scaleMap(map, div(ONE, e)),
     n: electrons,
-    e0V: value,
-    dE0dTmVperK: slopeMv,
+    ...rowThermo(map, electrons, e0V, dE0dTmVperK, origin.kind === 'builtin'),
     source,
     origin,
-    temperature,
-    speciesE0V: sp ? sp.model.e0V : null,
   };
+}
+
+/**
+ * A built-in row: its half-reaction as stored in potentialTerms.json (read by the notation
+ * parser when that file was generated; checked there to balance and to be a reduction), its
+ * E° and temperature dependence from the species data computed on first use.
+ */
+class BuiltinRow implements TableRow {
+  readonly perElectron: StoichMap;
+  readonly n: number;
+  readonly origin: RowOrigin;
+  private thermo: RowThermo | null = null;
+
+  constructor(
+    readonly text: string,
+    readonly reaction: Reaction,
+    readonly map: StoichMap,
+    e: Rational,
+    private readonly givenE0V: number,
+    private readonly givenSlopeMvPerK: number | null,
+    readonly source: string,
+    index: number,
+  ) {
+    this.perElectron = scaleMap(map, div(ONE, e));
+    this.n = electronCount(e);
+    this.origin = { kind: 'builtin', index };
+  }
+
+  private computed(): RowThermo {
+    if (!this.thermo) this.thermo = rowThermo(this.map, this.n, this.givenE0V, this.givenSlopeMvPerK, true);
+    return this.thermo;
+  }
+  get e0V(): number {
+    return this.computed().e0V;
+  }
+  get dE0dTmVperK(): number | null {
+    return this.computed().dE0dTmVperK;
+  }
+  get temperature(): RowTemperature {
+    return this.computed().temperature;
+  }
+  get speciesE0V(): number | null {
+    return this.computed().speciesE0V;
+  }
+}
+
+/** A stored term: [coefficient, formula, charge, phase?]; a coefficient is an integer or "num/den". */
+type StoredTerm = readonly [number | string, string, number, Phase?];
+type StoredRow = readonly [string, readonly StoredTerm[], readonly StoredTerm[]];
+
+function storedTerm(t: StoredTerm): Term {
+  const [c, formula, charge, phase] = t;
+  let coefficient: Rational;
+  if (typeof c === 'number') coefficient = c === 1 ? ONE : rat(BigInt(c));
+  else {
+    const [num, den] = c.split('/');
+    coefficient = rat(BigInt(num!), BigInt(den!));
+  }
+  const species: Species =
+    formula === 'e' && charge === -1 && phase === undefined
+      ? ELECTRON
+      : Object.freeze({ formula, charge, phase: phase ?? null, isElectron: false });
+  return { coefficient, species, activity: null };
+}
+
+const STORED_ROWS = BUILTIN_TERMS.rows as unknown as readonly StoredRow[];
+
+/** The built-in row's half-reaction from potentialTerms.json, or null where the stored text differs. */
+function storedHalfReaction(index: number, text: string): ReadHalfReaction | null {
+  const stored = STORED_ROWS[index];
+  if (!stored || stored[0] !== text) return null;
+  const reaction: Reaction = { reactants: stored[1].map(storedTerm), products: stored[2].map(storedTerm) };
+  const map = reactionMap(reaction);
+  return { reaction, map, e: electronsOf(map) };
 }
 
 let builtinRows: TableRow[] | null = null;
 
 /**
- * The built-in rows, parsed once.
+ * The built-in rows, read once (their half-reactions from the stored parse, their E° from
+ * the species data when first asked for).
  *
  * @example
  * builtinTable().length >= 60 // true
  */
 export function builtinTable(): readonly TableRow[] {
   if (!builtinRows) {
-    builtinRows = BUILTIN_POTENTIALS.map((r, index) =>
-      makeRow(r.halfReaction, r.e0V, r.dE0dTmVperK, r.source, { kind: 'builtin', index }),
-    );
+    builtinRows = BUILTIN_POTENTIALS.map((r, index) => {
+      const read = storedHalfReaction(index, r.halfReaction) ?? readHalfReaction(r.halfReaction);
+      return new BuiltinRow(r.halfReaction, read.reaction, read.map, read.e, r.e0V, r.dE0dTmVperK, r.source, index);
+    });
   }
   return builtinRows;
 }
