@@ -5,13 +5,12 @@
  * not break lookups that do not touch it.
  */
 import { EngineError, isEngineError, quote } from '../errors';
-import { sign, type Rational, div, rat, ONE } from '../rational';
+import { sign, type Rational, div, ONE } from '../rational';
 import { parseNotation } from '../notation/notation';
-import { formatReaction, type Reaction, type Term } from '../notation/reaction';
-import { ELECTRON, type Phase, type Species } from '../notation/species';
+import { formatReaction, type Reaction } from '../notation/reaction';
 import { checkBalance } from '../balance/balance';
 import { BUILTIN_POTENTIALS } from '../data/potentials';
-import BUILTIN_TERMS from '../data/potentialTerms.json';
+import { storedHalfReactions } from '../data/storedParseReader';
 import { type StoichMap, reactionMap, electronsOf, proportionality, scaleMap } from './halfReaction';
 import { toNumber } from '../rational';
 import {
@@ -226,7 +225,7 @@ function makeRow(
 }
 
 /**
- * A built-in row: its half-reaction as stored in potentialTerms.json (read by the notation
+ * A built-in row: its half-reaction as stored in storedParse.json (read by the notation
  * parser when that file was generated; checked there to balance and to be a reduction), its
  * E° and temperature dependence from the species data computed on first use.
  */
@@ -269,36 +268,6 @@ class BuiltinRow implements TableRow {
   }
 }
 
-/** A stored term: [coefficient, formula, charge, phase?]; a coefficient is an integer or "num/den". */
-type StoredTerm = readonly [number | string, string, number, Phase?];
-type StoredRow = readonly [string, readonly StoredTerm[], readonly StoredTerm[]];
-
-function storedTerm(t: StoredTerm): Term {
-  const [c, formula, charge, phase] = t;
-  let coefficient: Rational;
-  if (typeof c === 'number') coefficient = c === 1 ? ONE : rat(BigInt(c));
-  else {
-    const [num, den] = c.split('/');
-    coefficient = rat(BigInt(num!), BigInt(den!));
-  }
-  const species: Species =
-    formula === 'e' && charge === -1 && phase === undefined
-      ? ELECTRON
-      : Object.freeze({ formula, charge, phase: phase ?? null, isElectron: false });
-  return { coefficient, species, activity: null };
-}
-
-const STORED_ROWS = BUILTIN_TERMS.rows as unknown as readonly StoredRow[];
-
-/** The built-in row's half-reaction from potentialTerms.json, or null where the stored text differs. */
-function storedHalfReaction(index: number, text: string): ReadHalfReaction | null {
-  const stored = STORED_ROWS[index];
-  if (!stored || stored[0] !== text) return null;
-  const reaction: Reaction = { reactants: stored[1].map(storedTerm), products: stored[2].map(storedTerm) };
-  const map = reactionMap(reaction);
-  return { reaction, map, e: electronsOf(map) };
-}
-
 let builtinRows: TableRow[] | null = null;
 
 /**
@@ -310,8 +279,14 @@ let builtinRows: TableRow[] | null = null;
  */
 export function builtinTable(): readonly TableRow[] {
   if (!builtinRows) {
+    const stored = storedHalfReactions(BUILTIN_POTENTIALS.map((r) => r.halfReaction));
     builtinRows = BUILTIN_POTENTIALS.map((r, index) => {
-      const read = storedHalfReaction(index, r.halfReaction) ?? readHalfReaction(r.halfReaction);
+      const reaction = stored?.[index];
+      let read: ReadHalfReaction;
+      if (reaction) {
+        const map = reactionMap(reaction);
+        read = { reaction, map, e: electronsOf(map) };
+      } else read = readHalfReaction(r.halfReaction);
       return new BuiltinRow(r.halfReaction, read.reaction, read.map, read.e, r.e0V, r.dE0dTmVperK, r.source, index);
     });
   }

@@ -1,0 +1,92 @@
+/**
+ * Readers of src/engine/data/storedParse.json: the built-in half-reactions and the
+ * species-data species as the notation parser read them when `npm run gen:terms` wrote the
+ * file, so that the engine builds its built-in table and species registry without parsing
+ * some 330 texts on its first call. Each list carries a hash of the texts it was made from;
+ * where the texts have changed since (the file is stale), a reader returns null and the
+ * caller parses the texts itself, so a stale file costs time, never a wrong row. The
+ * tests (test/engine/tableStoredTerms.test.ts) fail while the file is stale.
+ *
+ * Pure data handling: no parsing of chemistry, only splitting the stored fields.
+ */
+import { type Rational, rat, ONE } from '../rational';
+import { ELECTRON, type Phase, type Species } from '../notation/species';
+import type { Reaction, Term } from '../notation/reaction';
+import STORED from './storedParse.json';
+
+/**
+ * FNV-1a (32-bit) hash of texts joined by line feeds: the fingerprint of the texts a stored
+ * list was made from.
+ *
+ * Domain: any strings (UTF-16 code units hashed). Precision: a 32-bit hash; used to detect
+ * an edit, not as a security check.
+ *
+ * @example
+ * textsHash(['Zn2+ + 2 e- -> Zn']) === textsHash(['Zn2+ + 2 e- -> Zn']) // true
+ */
+export function textsHash(texts: readonly string[]): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < texts.length; i++) {
+    const t = texts[i]!;
+    if (i > 0) h = Math.imul(h ^ 10, 0x01000193);
+    for (let j = 0; j < t.length; j++) h = Math.imul(h ^ t.charCodeAt(j), 0x01000193);
+  }
+  return h >>> 0;
+}
+
+/** One term as stored: `coefficient formula charge [phase]`, coefficient an integer or `num/den`. */
+function storedTerm(text: string): Term {
+  const [c, formula, charge, phase] = text.split(' ') as [string, string, string, Phase | undefined];
+  const slash = c.indexOf('/');
+  const coefficient: Rational =
+    slash < 0 ? (c === '1' ? ONE : rat(BigInt(c))) : rat(BigInt(c.slice(0, slash)), BigInt(c.slice(slash + 1)));
+  const z = Number(charge);
+  const species: Species =
+    formula === 'e' && z === -1 && phase === undefined
+      ? ELECTRON
+      : Object.freeze({ formula, charge: z, phase: phase ?? null, isElectron: false });
+  return { coefficient, species, activity: null };
+}
+
+/** A stored reaction: terms joined by `,`, reactants and products separated by `>`. */
+function storedReaction(text: string): Reaction {
+  const arrow = text.indexOf('>');
+  return {
+    reactants: text.slice(0, arrow).split(',').map(storedTerm),
+    products: text.slice(arrow + 1).split(',').map(storedTerm),
+  };
+}
+
+/**
+ * The built-in half-reactions as the parser reads `texts` (the rows of
+ * src/engine/data/potentials.ts, in order), or null where the stored list was made from
+ * other texts.
+ *
+ * @example
+ * storedHalfReactions(BUILTIN_POTENTIALS.map((r) => r.halfReaction))?.[0]?.reactants.length // 2
+ */
+export function storedHalfReactions(texts: readonly string[]): Reaction[] | null {
+  const p = STORED.potentials;
+  if (p.rows.length !== texts.length || p.textsHash !== textsHash(texts)) return null;
+  return p.rows.map(storedReaction);
+}
+
+/** A stored species key `formula|charge|phase` as the species it names (phase as inferred). */
+function speciesOfKey(key: string): Species {
+  const [formula, charge, phase] = key.split('|') as [string, string, string];
+  return { formula, charge: Number(charge), phase: phase === '' ? null : (phase as Phase), isElectron: false };
+}
+
+/**
+ * The species of the species-data records, phases completed as the parser infers them
+ * (`{ ...parseSpecies(text), phase: phaseOf(…) }`), for the record texts `texts` of one
+ * list (`standard` or `eph`), or null where the stored list was made from other texts.
+ *
+ * @example
+ * storedSpecies('standard', STANDARD_SPECIES.map((r) => r.species))?.[0]?.formula // 'H2'
+ */
+export function storedSpecies(list: 'standard' | 'eph', texts: readonly string[]): Species[] | null {
+  const s = STORED.species[list];
+  if (s.keys.length !== texts.length || s.textsHash !== textsHash(texts)) return null;
+  return s.keys.map(speciesOfKey);
+}
