@@ -34,26 +34,49 @@ export function textsHash(texts: readonly string[]): number {
   return h >>> 0;
 }
 
+/** Coefficients and species read so far (the same few recur in every row), by their stored text. */
+interface Interned {
+  readonly coefficients: Map<string, Rational>;
+  readonly species: Map<string, Species>;
+}
+
 /** One term as stored: `coefficient formula charge [phase]`, coefficient an integer or `num/den`. */
-function storedTerm(text: string): Term {
-  const [c, formula, charge, phase] = text.split(' ') as [string, string, string, Phase | undefined];
-  const slash = c.indexOf('/');
-  const coefficient: Rational =
-    slash < 0 ? (c === '1' ? ONE : rat(BigInt(c))) : rat(BigInt(c.slice(0, slash)), BigInt(c.slice(slash + 1)));
-  const z = Number(charge);
-  const species: Species =
-    formula === 'e' && z === -1 && phase === undefined
-      ? ELECTRON
-      : Object.freeze({ formula, charge: z, phase: phase ?? null, isElectron: false });
+function storedTerm(text: string, seen: Interned): Term {
+  const space = text.indexOf(' ');
+  const c = text.slice(0, space);
+  const speciesText = text.slice(space + 1);
+  let coefficient = seen.coefficients.get(c);
+  if (!coefficient) {
+    const slash = c.indexOf('/');
+    coefficient =
+      slash < 0 ? (c === '1' ? ONE : rat(BigInt(c))) : rat(BigInt(c.slice(0, slash)), BigInt(c.slice(slash + 1)));
+    seen.coefficients.set(c, coefficient);
+  }
+  let species = seen.species.get(speciesText);
+  if (!species) {
+    const [formula, charge, phase] = speciesText.split(' ') as [string, string, Phase | undefined];
+    const z = Number(charge);
+    species =
+      formula === 'e' && z === -1 && phase === undefined
+        ? ELECTRON
+        : Object.freeze({ formula, charge: z, phase: phase ?? null, isElectron: false });
+    seen.species.set(speciesText, species);
+  }
   return { coefficient, species, activity: null };
 }
 
 /** A stored reaction: terms joined by `,`, reactants and products separated by `>`. */
-function storedReaction(text: string): Reaction {
+function storedReaction(text: string, seen: Interned): Reaction {
   const arrow = text.indexOf('>');
   return {
-    reactants: text.slice(0, arrow).split(',').map(storedTerm),
-    products: text.slice(arrow + 1).split(',').map(storedTerm),
+    reactants: text
+      .slice(0, arrow)
+      .split(',')
+      .map((t) => storedTerm(t, seen)),
+    products: text
+      .slice(arrow + 1)
+      .split(',')
+      .map((t) => storedTerm(t, seen)),
   };
 }
 
@@ -68,7 +91,8 @@ function storedReaction(text: string): Reaction {
 export function storedHalfReactions(texts: readonly string[]): Reaction[] | null {
   const p = STORED.potentials;
   if (p.rows.length !== texts.length || p.textsHash !== textsHash(texts)) return null;
-  return p.rows.map(storedReaction);
+  const seen: Interned = { coefficients: new Map(), species: new Map() };
+  return p.rows.map((r) => storedReaction(r, seen));
 }
 
 /** A stored species key `formula|charge|phase` as the species it names (phase as inferred). */

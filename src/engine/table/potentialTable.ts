@@ -230,24 +230,28 @@ function makeRow(
  * E° and temperature dependence from the species data computed on first use.
  */
 class BuiltinRow implements TableRow {
-  readonly perElectron: StoichMap;
   readonly n: number;
   readonly origin: RowOrigin;
   private thermo: RowThermo | null = null;
+  private perElectronMap: StoichMap | null = null;
 
   constructor(
     readonly text: string,
     readonly reaction: Reaction,
     readonly map: StoichMap,
-    e: Rational,
+    private readonly e: Rational,
     private readonly givenE0V: number,
     private readonly givenSlopeMvPerK: number | null,
     readonly source: string,
     index: number,
   ) {
-    this.perElectron = scaleMap(map, div(ONE, e));
     this.n = electronCount(e);
     this.origin = { kind: 'builtin', index };
+  }
+
+  get perElectron(): StoichMap {
+    if (!this.perElectronMap) this.perElectronMap = scaleMap(this.map, div(ONE, this.e));
+    return this.perElectronMap;
   }
 
   private computed(): RowThermo {
