@@ -20,6 +20,7 @@ import {
   checkSpeciesTemperature,
   cpFactorK,
   T0_K,
+  type MissingSpeciesData,
 } from '../thermo/reactionThermo';
 
 /** Where a row came from. `row` is 1-based within the user's range (header included). */
@@ -50,16 +51,13 @@ export interface TableRow {
  * A row's E°(T) = e0V + slopeVPerK·(T − 298.15 K) + cpVPerK·cpFactorK(T).
  * `basis`: `species` where the slope and ΔCp° come from the species data (valid
  * 0–100 °C), `row` where the row's own dE°/dT is used (linear), `none` where E° is taken
- * as its 25 °C value at every temperature.
+ * as its 25 °C value at every temperature. `cpMissing`: species whose heat capacity is left
+ * out of ΔrCp°; `entropyMissing`: species without S° (then the basis is not `species`).
  */
-export interface RowTemperature {
+export interface RowTemperature extends MissingSpeciesData {
   readonly slopeVPerK: number;
   readonly cpVPerK: number;
   readonly basis: 'species' | 'row' | 'none';
-  /** species without Cp° (their heat capacity is left out of ΔrCp°) */
-  readonly cpMissing: readonly string[];
-  /** species without S° (then the basis is not `species`) */
-  readonly entropyMissing: readonly string[];
 }
 
 /**
