@@ -111,7 +111,7 @@ describe('a stale stored file', () => {
       // a file made from other texts: the first row's stored reaction is another couple's
       jest.doMock('../../src/engine/data/storedParse.json', () => ({
         ...STORED,
-        potentials: { textsHash: 1, rows: ['1 Li 1,1 e -1>1 Li 0', ...STORED.potentials.rows.slice(1)] },
+        potentials: { textsHash: 1, rows: ['Li 1,e>Li', ...STORED.potentials.rows.slice(1)] },
         species: { standard: { textsHash: 1, keys: [] }, eph: { textsHash: 1, keys: [] } },
       }));
       // eslint-disable-next-line @typescript-eslint/no-require-imports

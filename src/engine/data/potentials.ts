@@ -28,7 +28,8 @@
  *
  * The rows themselves are data, in potentialRows.json beside this file: each row
  * [halfReaction, e0V, dE0dTmVperK, publishedE0V, publishedSource], publishedSource a key of its
- * `sources` (the publications' citations); the groups are named by element.
+ * `sources` (the publications' citations); `groups` names the element of each run of rows
+ * (documentation, checked by the data test, not read at run time).
  */
 import TABLE from './potentialRows.json';
 
@@ -61,13 +62,13 @@ type StoredRow = readonly [string, number, number | null, number, string];
 
 const SOURCES: Readonly<Record<string, string>> = TABLE.sources;
 
-/** The rows in table order (groups by element, in order of atomic number; E° increasing within a group). */
-const ROWS: readonly Omit<BuiltinPotentialRow, 'source'>[] = TABLE.groups.flatMap((g) =>
-  (g.rows as unknown as readonly StoredRow[]).map(([halfReaction, e0V, dE0dTmVperK, publishedE0V, key]) => {
+/** The rows in table order (grouped by element, in order of atomic number; published E° increasing within a group). */
+const ROWS: readonly Omit<BuiltinPotentialRow, 'source'>[] = (TABLE.rows as unknown as readonly StoredRow[]).map(
+  ([halfReaction, e0V, dE0dTmVperK, publishedE0V, key]) => {
     const source = SOURCES[key];
     if (source === undefined) throw new Error(`potentialRows.json: row ${halfReaction} names an unknown source ${key}`);
     return { halfReaction, e0V, dE0dTmVperK, published: { e0V: publishedE0V, source } };
-  }),
+  },
 );
 
 /**

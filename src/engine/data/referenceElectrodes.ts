@@ -99,12 +99,22 @@ export interface AmbiguousReferenceName {
   readonly candidateIds: readonly string[];
 }
 
-/** An electrode of referenceElectrodeRows.json: aliases and source still in their stored form. */
-interface StoredElectrode extends Omit<ReferenceElectrodeRow, 'source'> {
-  readonly source: string;
-  /** Spellings "head filling" of every head of `heads[heads]` (see {@link filling}). */
-  readonly aliasVariants?: { readonly heads: string; readonly filling: readonly [string, string, boolean] };
-}
+/**
+ * An electrode row of referenceElectrodeRows.json, in the order of its `columns`: aliases and
+ * source in their stored form, and the filling spellings to add as [heads, concentration,
+ * salt, salt optional] (see {@link filling}) or null.
+ */
+type StoredElectrode = readonly [
+  id: string,
+  name: string,
+  aliases: readonly string[],
+  aliasVariants: readonly [string, string, string, boolean] | null,
+  potentialVvsSHE: number,
+  tempCoeffMvPerK: number | null,
+  source: string,
+  needsPH: boolean,
+  model: ReferenceTemperatureModel,
+];
 
 const NOTES: Readonly<Record<string, string>> = DATA.notes;
 const HEADS: Readonly<Record<string, readonly string[]>> = DATA.heads;
@@ -149,17 +159,15 @@ function variants(heads: readonly string[], electrolytes: readonly string[]): st
  */
 export const REFERENCE_ELECTRODE_ROWS: readonly ReferenceElectrodeRow[] = (
   DATA.electrodes as unknown as readonly StoredElectrode[]
-).map(({ aliasVariants, ...e }) => ({
-  id: e.id,
-  name: e.name,
-  aliases: aliasVariants
-    ? [...e.aliases, ...variants(headsNamed(aliasVariants.heads), filling(...aliasVariants.filling))]
-    : e.aliases,
-  potentialVvsSHE: e.potentialVvsSHE,
-  tempCoeffMvPerK: e.tempCoeffMvPerK,
-  source: withNotes(e.source),
-  needsPH: e.needsPH,
-  model: e.model,
+).map(([id, name, aliases, more, potentialVvsSHE, tempCoeffMvPerK, source, needsPH, model]) => ({
+  id,
+  name,
+  aliases: more ? [...aliases, ...variants(headsNamed(more[0]), filling(more[1], more[2], more[3]))] : aliases,
+  potentialVvsSHE,
+  tempCoeffMvPerK,
+  source: withNotes(source),
+  needsPH,
+  model,
 }));
 
 /**

@@ -40,11 +40,16 @@ interface Interned {
   readonly species: Map<string, Species>;
 }
 
-/** One term as stored: `coefficient formula charge [phase]`, coefficient an integer or `num/den`. */
+/**
+ * One term as stored: `[coefficient ]formula[ charge[ phase]]`. The coefficient (an integer or
+ * `num/den`, first since no formula starts with a digit) is left out where it is 1, the charge
+ * where it is 0 and no phase follows; the electron is `e`.
+ */
 function storedTerm(text: string, seen: Interned): Term {
-  const space = text.indexOf(' ');
-  const c = text.slice(0, space);
-  const speciesText = text.slice(space + 1);
+  const digit = text.charCodeAt(0) >= 48 && text.charCodeAt(0) <= 57;
+  const space = digit ? text.indexOf(' ') : -1;
+  const c = digit ? text.slice(0, space) : '1';
+  const speciesText = digit ? text.slice(space + 1) : text;
   let coefficient = seen.coefficients.get(c);
   if (!coefficient) {
     const slash = c.indexOf('/');
@@ -54,12 +59,11 @@ function storedTerm(text: string, seen: Interned): Term {
   }
   let species = seen.species.get(speciesText);
   if (!species) {
-    const [formula, charge, phase] = speciesText.split(' ') as [string, string, Phase | undefined];
-    const z = Number(charge);
+    const [formula, charge, phase] = speciesText.split(' ') as [string, string | undefined, Phase | undefined];
     species =
-      formula === 'e' && z === -1 && phase === undefined
+      speciesText === 'e'
         ? ELECTRON
-        : Object.freeze({ formula, charge: z, phase: phase ?? null, isElectron: false });
+        : Object.freeze({ formula, charge: charge === undefined ? 0 : Number(charge), phase: phase ?? null, isElectron: false });
     seen.species.set(speciesText, species);
   }
   return { coefficient, species, activity: null };
