@@ -8,8 +8,8 @@
 import { EngineError, quote } from './errors';
 import { kelvinFromCelsius, slopePerElectronAtKelvin, STANDARD_TEMP_C } from './constants';
 import {
-  AMBIGUOUS_REFERENCE_NAMES,
-  REFERENCE_ELECTRODE_ROWS,
+  ambiguousReferenceNames,
+  referenceElectrodeRows,
   BATES_BOWER_COEFFS,
   SEAWATER_CHLORIDE,
   type ReferenceTemperatureModel,
@@ -154,7 +154,7 @@ let referenceIndex: ReferenceIndex | null = null;
 function references(): ReferenceIndex {
   if (referenceIndex) return referenceIndex;
   const electrodes: readonly ReferenceElectrode[] = Object.freeze(
-    REFERENCE_ELECTRODE_ROWS.map((r) =>
+    referenceElectrodeRows().map((r) =>
       Object.freeze({
         id: r.id,
         name: r.name,
@@ -179,7 +179,7 @@ function references(): ReferenceIndex {
       byName.set(key, e);
     }
   }
-  for (const a of AMBIGUOUS_REFERENCE_NAMES) {
+  for (const a of ambiguousReferenceNames()) {
     for (const n of a.names) {
       const key = normaliseReferenceName(n);
       if (byName.has(key)) throw new Error(`ambiguous reference name "${n}" is also an alias`);

@@ -28,9 +28,9 @@ function parsed(text: string): Reaction {
   return n.reaction;
 }
 
-/** A map as sorted [key, formula, charge, phase, num/den] rows, for comparison. */
+/** A map as [key, formula, charge, phase, num/den] rows in its order, for comparison. */
 function mapRows(m: ReturnType<typeof reactionMap>): string[] {
-  return [...m].map(([k, v]) => `${k} ${v.species.formula} ${v.species.charge} ${String(v.species.phase)} ${v.nu.num}/${v.nu.den}`).sort();
+  return [...m].map(([k, v]) => `${k} ${v.species.formula} ${v.species.charge} ${String(v.species.phase)} ${v.nu.num}/${v.nu.den}`);
 }
 
 const potentialTexts = BUILTIN_POTENTIALS.map((r) => r.halfReaction);

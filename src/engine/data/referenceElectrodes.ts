@@ -28,7 +28,7 @@ import DATA from './referenceElectrodeRows.json';
  * One built-in reference electrode.
  *
  * @example
- * const row = REFERENCE_ELECTRODE_ROWS.find((r) => r.id === 'SCE'); // potentialVvsSHE 0.2412
+ * const row = referenceElectrodeRows().find((r) => r.id === 'SCE'); // potentialVvsSHE 0.2412
  */
 export interface ReferenceElectrodeRow {
   /** Short, typeable identifier, unique; also accepted as a name (e.g. "SCE", "Ag/AgCl-3M-KCl"). */
@@ -90,7 +90,7 @@ export const SEAWATER_CHLORIDE = Object.freeze({ molalityAtS35: 0.5658, gamma: 0
  * by up to 92.5 mV.
  *
  * @example
- * AMBIGUOUS_REFERENCE_NAMES[0]?.candidateIds // ['Ag/AgCl-sat-KCl', 'Ag/AgCl-3.5M-KCl', …]
+ * ambiguousReferenceNames()[0]?.candidateIds // ['Ag/AgCl-sat-KCl', 'Ag/AgCl-3.5M-KCl', …]
  */
 export interface AmbiguousReferenceName {
   /** The generic names (normalised before matching). */
@@ -148,35 +148,41 @@ function variants(heads: readonly string[], electrolytes: readonly string[]): st
   return out;
 }
 
+let electrodeRows: readonly ReferenceElectrodeRow[] | null = null;
+
 /**
- * The built-in reference electrodes, SHE first and RHE last. Potentials to the published
- * precision (0.1–1 mV; the printed values of one electrode differ by up to a few mV between
- * publications, see each source). The rows are data, in referenceElectrodeRows.json beside
- * this file.
+ * The built-in reference electrodes, SHE first and RHE last, read from
+ * referenceElectrodeRows.json on first use (a worksheet that converts no potential never
+ * reads them). Potentials to the published precision (0.1–1 mV; the printed values of one
+ * electrode differ by up to a few mV between publications, see each source).
  *
  * @example
- * REFERENCE_ELECTRODE_ROWS.map((r) => r.id) // ['SHE', 'SCE', 'calomel-1M-KCl', …, 'RHE']
+ * referenceElectrodeRows().map((r) => r.id) // ['SHE', 'SCE', 'calomel-1M-KCl', …, 'RHE']
  */
-export const REFERENCE_ELECTRODE_ROWS: readonly ReferenceElectrodeRow[] = (
-  DATA.electrodes as unknown as readonly StoredElectrode[]
-).map(([id, name, aliases, more, potentialVvsSHE, tempCoeffMvPerK, source, needsPH, model]) => ({
-  id,
-  name,
-  aliases: more ? [...aliases, ...variants(headsNamed(more[0]), filling(more[1], more[2], more[3]))] : aliases,
-  potentialVvsSHE,
-  tempCoeffMvPerK,
-  source: withNotes(source),
-  needsPH,
-  model,
-}));
+export function referenceElectrodeRows(): readonly ReferenceElectrodeRow[] {
+  if (!electrodeRows) {
+    electrodeRows = (DATA.electrodes as unknown as readonly StoredElectrode[]).map(
+      ([id, name, aliases, more, potentialVvsSHE, tempCoeffMvPerK, source, needsPH, model]) => ({
+        id,
+        name,
+        aliases: more ? [...aliases, ...variants(headsNamed(more[0]), filling(more[1], more[2], more[3]))] : aliases,
+        potentialVvsSHE,
+        tempCoeffMvPerK,
+        source: withNotes(source),
+        needsPH,
+        model,
+      }),
+    );
+  }
+  return electrodeRows;
+}
 
 /**
  * Generic names that fit several built-in electrodes; looking them up is an `ambiguous` error.
  *
  * @example
- * AMBIGUOUS_REFERENCE_NAMES.some((a) => a.names.includes('calomel')) // true
+ * ambiguousReferenceNames().some((a) => a.names.includes('calomel')) // true
  */
-export const AMBIGUOUS_REFERENCE_NAMES: readonly AmbiguousReferenceName[] = DATA.ambiguous.map((a) => ({
-  names: [...headsNamed(a.heads), ...a.names],
-  candidateIds: a.candidateIds,
-}));
+export function ambiguousReferenceNames(): readonly AmbiguousReferenceName[] {
+  return DATA.ambiguous.map((a) => ({ names: [...headsNamed(a.heads), ...a.names], candidateIds: a.candidateIds }));
+}

@@ -5,9 +5,10 @@
  * not break lookups that do not touch it.
  */
 import { EngineError, isEngineError, quote } from '../errors';
-import { sign, type Rational, div, ONE } from '../rational';
+import { sign, type Rational, div, neg, ONE } from '../rational';
 import { parseNotation } from '../notation/notation';
 import { formatReaction, type Reaction } from '../notation/reaction';
+import { speciesKey } from '../notation/species';
 import { checkBalance } from '../balance/balance';
 import { BUILTIN_POTENTIALS } from '../data/potentials';
 import { storedHalfReactions } from '../data/storedParseReader';
@@ -270,6 +271,18 @@ class BuiltinRow implements TableRow {
   }
 }
 
+/**
+ * The map of a stored built-in reaction: where no species occurs twice (by formula and charge)
+ * nothing merges or cancels, so the map is the terms in order, reactants negative; otherwise
+ * {@link reactionMap}. Saves inferring every species' phase on the first call.
+ */
+function storedMap(reaction: Reaction): StoichMap {
+  const map: StoichMap = new Map();
+  for (const t of reaction.reactants) map.set(speciesKey(t.species), { species: t.species, nu: neg(t.coefficient) });
+  for (const t of reaction.products) map.set(speciesKey(t.species), { species: t.species, nu: t.coefficient });
+  return map.size === reaction.reactants.length + reaction.products.length ? map : reactionMap(reaction);
+}
+
 let builtinRows: TableRow[] | null = null;
 
 /**
@@ -286,7 +299,7 @@ export function builtinTable(): readonly TableRow[] {
       const reaction = stored?.[index];
       let read: ReadHalfReaction;
       if (reaction) {
-        const map = reactionMap(reaction);
+        const map = storedMap(reaction);
         read = { reaction, map, e: electronsOf(map) };
       } else read = readHalfReaction(r.halfReaction);
       return new BuiltinRow(r.halfReaction, read.reaction, read.map, read.e, r.e0V, r.dE0dTmVperK, r.source, index);
