@@ -8,8 +8,8 @@
 import { EngineError, quote } from './errors';
 import { kelvinFromCelsius, slopePerElectronAtKelvin, STANDARD_TEMP_C } from './constants';
 import {
-  AMBIGUOUS_REFERENCE_NAMES,
-  REFERENCE_ELECTRODE_ROWS,
+  ambiguousReferenceNames,
+  referenceElectrodeRows,
   BATES_BOWER_COEFFS,
   SEAWATER_CHLORIDE,
   type ReferenceTemperatureModel,
@@ -137,20 +137,58 @@ function coefficientAt25(row: { id: string; name: string; potentialVvsSHE: numbe
   return ((modelPotentialV(row, 26) - modelPotentialV(row, 24)) / 2) * 1000;
 }
 
-const ELECTRODES: readonly ReferenceElectrode[] = Object.freeze(
-  REFERENCE_ELECTRODE_ROWS.map((r) =>
-    Object.freeze({
-      id: r.id,
-      name: r.name,
-      aliases: Object.freeze([...r.aliases]),
-      potentialVvsSHE: r.potentialVvsSHE,
-      tempCoeffMvPerK: coefficientAt25(r),
-      source: r.source,
-      needsPH: r.needsPH,
-      model: r.model,
-    }),
-  ),
-);
+/**
+ * The electrodes and their name index, built on first use: the coefficients at 25 °C of the
+ * `couple` models read the potentials table, which the first POTENTIAL of a workbook does
+ * not otherwise need in full.
+ */
+interface ReferenceIndex {
+  readonly electrodes: readonly ReferenceElectrode[];
+  readonly byName: ReadonlyMap<string, ReferenceElectrode>;
+  readonly ambiguous: ReadonlyMap<string, readonly string[]>;
+  readonly knownIds: string;
+}
+
+let referenceIndex: ReferenceIndex | null = null;
+
+function references(): ReferenceIndex {
+  if (referenceIndex) return referenceIndex;
+  const electrodes: readonly ReferenceElectrode[] = Object.freeze(
+    referenceElectrodeRows().map((r) =>
+      Object.freeze({
+        id: r.id,
+        name: r.name,
+        aliases: Object.freeze([...r.aliases]),
+        potentialVvsSHE: r.potentialVvsSHE,
+        tempCoeffMvPerK: coefficientAt25(r),
+        source: r.source,
+        needsPH: r.needsPH,
+        model: r.model,
+      }),
+    ),
+  );
+  const byName = new Map<string, ReferenceElectrode>();
+  const ambiguous = new Map<string, readonly string[]>();
+  for (const e of electrodes) {
+    for (const n of [e.id, ...e.aliases]) {
+      const key = normaliseReferenceName(n);
+      const prior = byName.get(key);
+      if (prior && prior !== e) {
+        throw new Error(`reference electrode alias "${n}" of ${e.id} collides with ${prior.id}`);
+      }
+      byName.set(key, e);
+    }
+  }
+  for (const a of ambiguousReferenceNames()) {
+    for (const n of a.names) {
+      const key = normaliseReferenceName(n);
+      if (byName.has(key)) throw new Error(`ambiguous reference name "${n}" is also an alias`);
+      ambiguous.set(key, a.candidateIds);
+    }
+  }
+  referenceIndex = { electrodes, byName, ambiguous, knownIds: electrodes.map((e) => e.id).join(', ') };
+  return referenceIndex;
+}
 
 /**
  * The normalised form of a reference-electrode name, used for matching: Unicode
@@ -175,29 +213,6 @@ export function normaliseReferenceName(text: string): string {
     .replace(/saturated|sat'd|sat’d/g, 'sat')
     .replace(/[\s_\-‐‑‒–—/\\|.,:;'’()[\]{}]+/g, '');
 }
-
-const BY_NAME = new Map<string, ReferenceElectrode>();
-const AMBIGUOUS = new Map<string, readonly string[]>();
-
-for (const e of ELECTRODES) {
-  for (const n of [e.id, ...e.aliases]) {
-    const key = normaliseReferenceName(n);
-    const prior = BY_NAME.get(key);
-    if (prior && prior !== e) {
-      throw new Error(`reference electrode alias "${n}" of ${e.id} collides with ${prior.id}`);
-    }
-    BY_NAME.set(key, e);
-  }
-}
-for (const a of AMBIGUOUS_REFERENCE_NAMES) {
-  for (const n of a.names) {
-    const key = normaliseReferenceName(n);
-    if (BY_NAME.has(key)) throw new Error(`ambiguous reference name "${n}" is also an alias`);
-    AMBIGUOUS.set(key, a.candidateIds);
-  }
-}
-
-const KNOWN_IDS = ELECTRODES.map((e) => e.id).join(', ');
 
 /** Raw text → electrode, so that repeated look-ups of the same text skip normalisation. */
 const lookupCache = new Map<string, ReferenceElectrode>();
@@ -234,17 +249,18 @@ export function findReference(name: string, argName = 'reference'): ReferenceEle
       argName,
     );
   }
-  const found = BY_NAME.get(key);
+  const { byName, ambiguous, knownIds } = references();
+  const found = byName.get(key);
   if (found) {
     if (lookupCache.size >= LOOKUP_CACHE_LIMIT) lookupCache.clear();
     lookupCache.set(name, found);
     return found;
   }
-  const candidates = AMBIGUOUS.get(key);
+  const candidates = ambiguous.get(key);
   if (candidates) {
     const list = candidates
       .map((id) => {
-        const e = BY_NAME.get(normaliseReferenceName(id)) as ReferenceElectrode;
+        const e = byName.get(normaliseReferenceName(id)) as ReferenceElectrode;
         return `${e.id} (${e.potentialVvsSHE} V vs SHE)`;
       })
       .join(', ');
@@ -256,7 +272,7 @@ export function findReference(name: string, argName = 'reference'): ReferenceEle
   }
   throw new EngineError(
     'notFound',
-    `${argName} ${quote(text)} is not a known reference electrode. Use one of: ${KNOWN_IDS} ` +
+    `${argName} ${quote(text)} is not a known reference electrode. Use one of: ${knownIds} ` +
       `(case, spaces, hyphens and slashes do not matter; aliases such as "saturated calomel" or "Cu/CuSO4" work too).`,
     argName,
   );
@@ -379,5 +395,5 @@ export function convertPotentialV(
  * listReferences().map((r) => r.id) // ['SHE', 'SCE', 'calomel-1M-KCl', …, 'RHE']
  */
 export function listReferences(): readonly ReferenceElectrode[] {
-  return ELECTRODES;
+  return references().electrodes;
 }

@@ -16,77 +16,32 @@
  * for estimates only.
  */
 
-/** A galvanic anode material. */
-export interface AnodeMaterial {
+import DATA from './anodeRows.json';
+
+/** A named design value a user picks by name: its display name, typeable aliases and source. */
+interface NamedDesignValue {
   readonly name: string;
   /** Lower-case names a user may type. */
   readonly aliases: readonly string[];
+  readonly source: string;
+}
+
+/** A galvanic anode material. */
+export interface AnodeMaterial extends NamedDesignValue {
   /** Design electrochemical capacity, Ah/kg. */
   readonly capacityAhKg: number;
-  readonly source: string;
 }
-
-export const ANODE_MATERIALS: readonly AnodeMaterial[] = Object.freeze<AnodeMaterial[]>([
-  {
-    name: 'Al-Zn-In (seawater, ≤ 30 °C)',
-    aliases: ['al-zn-in', 'alznin', 'aluminium', 'aluminum', 'al', 'al-zn-in seawater'],
-    capacityAhKg: 2000,
-    source: 'DNV-RP-B401 (2017), Table 10-6, seawater, anode surface ≤ 30 °C (from memory)',
-  },
-  {
-    name: 'zinc (seawater, ≤ 30 °C)',
-    aliases: ['zinc', 'zn', 'zinc seawater'],
-    capacityAhKg: 780,
-    source: 'DNV-RP-B401 (2017), Table 10-6, seawater, anode surface ≤ 30 °C (from memory)',
-  },
-  {
-    name: 'magnesium H-1 (AZ63)',
-    aliases: ['magnesium', 'mg', 'h-1', 'h1', 'az63', 'magnesium h-1'],
-    capacityAhKg: 1100,
-    source: 'common practice for onshore design, about 50 % efficiency (from memory)',
-  },
-  {
-    name: 'magnesium, high potential (Mg-Mn)',
-    aliases: ['high-potential magnesium', 'high potential magnesium', 'mg-mn', 'magnesium high potential'],
-    capacityAhKg: 1230,
-    source: 'common practice for onshore design, about 50 % efficiency (from memory)',
-  },
-]);
 
 /** A utilisation factor by anode shape. */
-export interface AnodeUtilisation {
-  readonly name: string;
-  readonly aliases: readonly string[];
+export interface AnodeUtilisation extends NamedDesignValue {
   readonly factor: number;
-  readonly source: string;
 }
 
-export const ANODE_UTILISATION: readonly AnodeUtilisation[] = Object.freeze<AnodeUtilisation[]>([
-  {
-    name: 'long slender stand-off (L ≥ 4r)',
-    aliases: ['long slender stand-off', 'long slender', 'slender stand-off', 'stand-off'],
-    factor: 0.9,
-    source: 'DNV-RP-B401 (2017), Table 10-8 (from memory)',
-  },
-  {
-    name: 'short slender stand-off (L < 4r)',
-    aliases: ['short slender stand-off', 'short slender', 'short stand-off'],
-    factor: 0.85,
-    source: 'DNV-RP-B401 (2017), Table 10-8 (from memory)',
-  },
-  {
-    name: 'long flush-mounted (L ≥ 4 × width and thickness)',
-    aliases: ['long flush-mounted', 'long flush', 'flush-mounted', 'flush'],
-    factor: 0.85,
-    source: 'DNV-RP-B401 (2017), Table 10-8 (from memory)',
-  },
-  {
-    name: 'short flush-mounted, bracelet and other types',
-    aliases: ['short flush-mounted', 'short flush', 'bracelet', 'other'],
-    factor: 0.8,
-    source: 'DNV-RP-B401 (2017), Table 10-8 (from memory)',
-  },
-]);
+/** The anode materials (rows in anodeRows.json beside this file). */
+export const ANODE_MATERIALS: readonly AnodeMaterial[] = Object.freeze<AnodeMaterial[]>(DATA.materials);
+
+/** Utilisation factors by anode shape (rows in anodeRows.json beside this file). */
+export const ANODE_UTILISATION: readonly AnodeUtilisation[] = Object.freeze<AnodeUtilisation[]>(DATA.utilisation);
 
 /** The utilisation used where none is given: DNV-RP-B401's factor for bracelets and other types, the lowest listed. */
 export const DEFAULT_UTILISATION = 0.8;

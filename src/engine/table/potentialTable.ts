@@ -5,11 +5,13 @@
  * not break lookups that do not touch it.
  */
 import { EngineError, isEngineError, quote } from '../errors';
-import { sign, type Rational, div } from '../rational';
+import { sign, type Rational, div, neg, ONE } from '../rational';
 import { parseNotation } from '../notation/notation';
 import { formatReaction, type Reaction } from '../notation/reaction';
+import { speciesKey } from '../notation/species';
 import { checkBalance } from '../balance/balance';
 import { BUILTIN_POTENTIALS } from '../data/potentials';
+import { storedHalfReactions } from '../data/storedParseReader';
 import { type StoichMap, reactionMap, electronsOf, proportionality, scaleMap } from './halfReaction';
 import { toNumber } from '../rational';
 import {
@@ -19,6 +21,7 @@ import {
   checkSpeciesTemperature,
   cpFactorK,
   T0_K,
+  type MissingSpeciesData,
 } from '../thermo/reactionThermo';
 
 /** Where a row came from. `row` is 1-based within the user's range (header included). */
@@ -49,16 +52,13 @@ export interface TableRow {
  * A row's E°(T) = e0V + slopeVPerK·(T − 298.15 K) + cpVPerK·cpFactorK(T).
  * `basis`: `species` where the slope and ΔCp° come from the species data (valid
  * 0–100 °C), `row` where the row's own dE°/dT is used (linear), `none` where E° is taken
- * as its 25 °C value at every temperature.
+ * as its 25 °C value at every temperature. `cpMissing`: species whose heat capacity is left
+ * out of ΔrCp°; `entropyMissing`: species without S° (then the basis is not `species`).
  */
-export interface RowTemperature {
+export interface RowTemperature extends MissingSpeciesData {
   readonly slopeVPerK: number;
   readonly cpVPerK: number;
   readonly basis: 'species' | 'row' | 'none';
-  /** species without Cp° (their heat capacity is left out of ΔrCp°) */
-  readonly cpMissing: readonly string[];
-  /** species without S° (then the basis is not `species`) */
-  readonly entropyMissing: readonly string[];
 }
 
 /**
@@ -112,7 +112,7 @@ function readablePerElectron(text: string): StoichMap | null {
     if (n.kind !== 'half') return null;
     const map = reactionMap(n.reaction);
     const e = electronsOf(map);
-    return sign(e) > 0 ? scaleMap(map, div({ num: 1n, den: 1n }, e)) : null;
+    return sign(e) > 0 ? scaleMap(map, div(ONE, e)) : null;
   } catch {
     return null;
   }
@@ -123,13 +123,15 @@ export function describeOrigin(o: RowOrigin): string {
   return o.kind === 'builtin' ? `built-in row ${o.index + 1}` : `your table, row ${o.row}`;
 }
 
-function makeRow(
-  text: string,
-  e0V: number,
-  dE0dTmVperK: number | null,
-  source: string,
-  origin: RowOrigin,
-): TableRow {
+/** A row's half-reaction read: the reaction as written, its map and its electrons. */
+interface ReadHalfReaction {
+  readonly reaction: Reaction;
+  readonly map: StoichMap;
+  readonly e: Rational;
+}
+
+/** Parse and check a row's half-reaction (balanced, written as a reduction). */
+function readHalfReaction(text: string): ReadHalfReaction {
   const n = parseNotation(text, 'half-reaction');
   if (n.kind !== 'half') {
     throw new EngineError(
@@ -148,7 +150,24 @@ function makeRow(
       `${quote(text)} is written as an oxidation; write it as a reduction (electrons on the left).`,
     );
   }
-  const electrons = Number(e.num) / Number(e.den);
+  return { reaction: n.reaction, map, e };
+}
+
+/** The temperature-dependent part of a row: E°, dE°/dT and how E° moves with temperature. */
+interface RowThermo {
+  readonly e0V: number;
+  readonly dE0dTmVperK: number | null;
+  readonly temperature: RowTemperature;
+  readonly speciesE0V: number | null;
+}
+
+function rowThermo(
+  map: StoichMap,
+  electrons: number,
+  e0V: number,
+  dE0dTmVperK: number | null,
+  builtin: boolean,
+): RowThermo {
   const sp = speciesModel(map, electrons);
   let temperature: RowTemperature;
   let value = e0V;
@@ -166,7 +185,7 @@ function makeRow(
     mv === null
       ? { slopeVPerK: 0, cpVPerK: 0, basis: 'none', cpMissing, entropyMissing }
       : { slopeVPerK: mv * 1e-3, cpVPerK: 0, basis: 'row', cpMissing, entropyMissing };
-  if (origin.kind === 'builtin' && sp) {
+  if (builtin && sp) {
     // built-in rows: E° and its temperature dependence from the species data
     value = sp.model.e0V;
     if (sp.model.slopeVPerK !== null) {
@@ -176,34 +195,115 @@ function makeRow(
   } else if (dE0dTmVperK !== null) temperature = fromRow(dE0dTmVperK);
   else if (sp && sp.model.slopeVPerK !== null) temperature = fromSpecies();
   else temperature = fromRow(null);
+  return { e0V: value, dE0dTmVperK: slopeMv, temperature, speciesE0V: sp ? sp.model.e0V : null };
+}
+
+function electronCount(e: Rational): number {
+  return Number(e.num) / Number(e.den);
+}
+
+function makeRow(
+  text: string,
+  e0V: number,
+  dE0dTmVperK: number | null,
+  source: string,
+  origin: RowOrigin,
+): TableRow {
+  const { reaction, map, e } = readHalfReaction(text);
+  const electrons = electronCount(e);
   return {
     text,
-    reaction: n.reaction,
+    reaction,
     map,
-    perElectron: scaleMap(map, div({ num: 1n, den: 1n }, e)),
+    perElectron: scaleMap(map, div(ONE, e)),
     n: electrons,
-    e0V: value,
-    dE0dTmVperK: slopeMv,
+    ...rowThermo(map, electrons, e0V, dE0dTmVperK, origin.kind === 'builtin'),
     source,
     origin,
-    temperature,
-    speciesE0V: sp ? sp.model.e0V : null,
   };
+}
+
+/**
+ * A built-in row: its half-reaction as stored in storedParse.json (read by the notation
+ * parser when that file was generated; checked there to balance and to be a reduction), its
+ * E° and temperature dependence from the species data computed on first use.
+ */
+class BuiltinRow implements TableRow {
+  readonly n: number;
+  readonly origin: RowOrigin;
+  private thermo: RowThermo | null = null;
+  private perElectronMap: StoichMap | null = null;
+
+  constructor(
+    readonly text: string,
+    readonly reaction: Reaction,
+    readonly map: StoichMap,
+    private readonly e: Rational,
+    private readonly givenE0V: number,
+    private readonly givenSlopeMvPerK: number | null,
+    readonly source: string,
+    index: number,
+  ) {
+    this.n = electronCount(e);
+    this.origin = { kind: 'builtin', index };
+  }
+
+  get perElectron(): StoichMap {
+    if (!this.perElectronMap) this.perElectronMap = scaleMap(this.map, div(ONE, this.e));
+    return this.perElectronMap;
+  }
+
+  private computed(): RowThermo {
+    if (!this.thermo) this.thermo = rowThermo(this.map, this.n, this.givenE0V, this.givenSlopeMvPerK, true);
+    return this.thermo;
+  }
+  get e0V(): number {
+    return this.computed().e0V;
+  }
+  get dE0dTmVperK(): number | null {
+    return this.computed().dE0dTmVperK;
+  }
+  get temperature(): RowTemperature {
+    return this.computed().temperature;
+  }
+  get speciesE0V(): number | null {
+    return this.computed().speciesE0V;
+  }
+}
+
+/**
+ * The map of a stored built-in reaction: where no species occurs twice (by formula and charge)
+ * nothing merges or cancels, so the map is the terms in order, reactants negative; otherwise
+ * {@link reactionMap}. Saves inferring every species' phase on the first call.
+ */
+function storedMap(reaction: Reaction): StoichMap {
+  const map: StoichMap = new Map();
+  for (const t of reaction.reactants) map.set(speciesKey(t.species), { species: t.species, nu: neg(t.coefficient) });
+  for (const t of reaction.products) map.set(speciesKey(t.species), { species: t.species, nu: t.coefficient });
+  return map.size === reaction.reactants.length + reaction.products.length ? map : reactionMap(reaction);
 }
 
 let builtinRows: TableRow[] | null = null;
 
 /**
- * The built-in rows, parsed once.
+ * The built-in rows, read once (their half-reactions from the stored parse, their E° from
+ * the species data when first asked for).
  *
  * @example
  * builtinTable().length >= 60 // true
  */
 export function builtinTable(): readonly TableRow[] {
   if (!builtinRows) {
-    builtinRows = BUILTIN_POTENTIALS.map((r, index) =>
-      makeRow(r.halfReaction, r.e0V, r.dE0dTmVperK, r.source, { kind: 'builtin', index }),
-    );
+    const stored = storedHalfReactions(BUILTIN_POTENTIALS.map((r) => r.halfReaction));
+    builtinRows = BUILTIN_POTENTIALS.map((r, index) => {
+      const reaction = stored?.[index];
+      let read: ReadHalfReaction;
+      if (reaction) {
+        const map = storedMap(reaction);
+        read = { reaction, map, e: electronsOf(map) };
+      } else read = readHalfReaction(r.halfReaction);
+      return new BuiltinRow(r.halfReaction, read.reaction, read.map, read.e, r.e0V, r.dE0dTmVperK, r.source, index);
+    });
   }
   return builtinRows;
 }

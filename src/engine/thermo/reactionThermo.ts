@@ -28,18 +28,22 @@ export const SPECIES_DATA_RANGE_C = Object.freeze({ min: 0, max: 100 });
 /** The reference temperature of the species data, K. */
 export const T0_K = 298.15;
 
+/** The species of a reaction that the species data gives no S° or no Cp° for (as text). */
+export interface MissingSpeciesData {
+  /** species without S° */
+  readonly entropyMissing: readonly string[];
+  /** species without Cp° */
+  readonly cpMissing: readonly string[];
+}
+
 /** Thermodynamics of one reaction at 25 °C from the species data. */
-export interface ReactionThermo {
+export interface ReactionThermo extends MissingSpeciesData {
   /** ΔrG° at 25 °C, J/mol */
   readonly dGJ: number;
   /** ΔrS° at 25 °C, J/(mol·K), or null where a species has no S° */
   readonly dSJK: number | null;
   /** ΔrCp°, J/(mol·K), from the species that have a Cp° */
   readonly dCpJK: number;
-  /** species (as text) without S° */
-  readonly entropyMissing: readonly string[];
-  /** species (as text) without Cp° */
-  readonly cpMissing: readonly string[];
   /** the sources of the species data used, without repeats */
   readonly sources: readonly string[];
 }

@@ -3,6 +3,7 @@
  * counter below is written for this test only and does not use the engine's parser.
  */
 import { BUILTIN_POTENTIALS, BuiltinPotentialRow } from '../../../src/engine/data/potentials';
+import TABLE from '../../../src/engine/data/potentialRows.json';
 
 // ---------------------------------------------------------------------------------------
 // A small, strict counter for the notation the table is written in.
@@ -469,5 +470,22 @@ describe('BUILTIN_POTENTIALS: cells of common practice', () => {
     // OpenStax Chemistry 2e, chapter 17 worked example (seen)
     const e = row('Ag+ + e- -> Ag').e0V - row('Cu2+ + 2 e- -> Cu').e0V;
     expect(e).toBeCloseTo(0.46, 2);
+  });
+});
+
+describe('potentialRows.json: groups', () => {
+  // the groups document the table's order (by element, the published E° increasing within a
+  // group); the engine does not read them, so they are checked here
+  it('cover every row once, in order, each run sorted by increasing published E°', () => {
+    const groups = TABLE.groups as unknown as readonly (readonly [string, number])[];
+    expect(groups.reduce((n, [, count]) => n + count, 0)).toBe(BUILTIN_POTENTIALS.length);
+    let at = 0;
+    for (const [element, count] of groups) {
+      expect(element).not.toBe('');
+      expect(count).toBeGreaterThan(0);
+      const e0 = BUILTIN_POTENTIALS.slice(at, at + count).map((r) => r.published.e0V);
+      expect([...e0].sort((a, b) => a - b)).toEqual(e0);
+      at += count;
+    }
   });
 });

@@ -17,6 +17,7 @@ import { type Species, parseSpecies, speciesPhaseKey, formatSpecies, phaseOf } f
 import type { SpeciesThermoRecord } from './types';
 import { STANDARD_SPECIES } from './standard';
 import { EPH_SPECIES } from './ephSpecies';
+import { storedSpecies } from '../storedParseReader';
 
 export type { SpeciesThermoRecord } from './types';
 export { STANDARD_SPECIES } from './standard';
@@ -44,9 +45,17 @@ function register(
   into: Map<string, RegisteredSpecies>,
   dups: DuplicateSpecies[],
 ): void {
-  for (const record of records) {
-    const parsed = parseSpecies(record.species, 'species');
-    const species: Species = { ...parsed, phase: phaseOf(parsed) };
+  const stored = storedSpecies(
+    list,
+    records.map((r) => r.species),
+  );
+  for (let i = 0; i < records.length; i++) {
+    const record = records[i]!;
+    let species = stored?.[i];
+    if (!species) {
+      const parsed = parseSpecies(record.species, 'species');
+      species = { ...parsed, phase: phaseOf(parsed) };
+    }
     const key = speciesPhaseKey(species);
     const entry: RegisteredSpecies = { record, species, key, list };
     const prior = into.get(key);

@@ -1,0 +1,124 @@
+/**
+ * The built-in table and the species registry are built from src/engine/data/storedParse.json
+ * (each built-in half-reaction and each species-data species as the notation parser reads
+ * them, written by `npm run gen:terms`) instead of parsing every text on the first call.
+ * These checks hold the stored form to the parser: the same reaction, term by term, the same
+ * stoichiometry and electron count, the same species with the same inferred phase; and a
+ * stale file (texts changed since) is not used: the texts are parsed at run time.
+ */
+import {
+  BUILTIN_POTENTIALS,
+  builtinTable,
+  checkBalance,
+  listSpecies,
+  parseNotation,
+  parseSpecies,
+  STANDARD_SPECIES,
+} from '../../src/engine';
+import { reactionMap } from '../../src/engine/table/halfReaction';
+import { EPH_SPECIES } from '../../src/engine/data/species/ephSpecies';
+import { phaseOf } from '../../src/engine/notation/species';
+import { storedHalfReactions, storedSpecies, textsHash } from '../../src/engine/data/storedParseReader';
+import STORED from '../../src/engine/data/storedParse.json';
+import type { Reaction } from '../../src/engine/notation/reaction';
+
+function parsed(text: string): Reaction {
+  const n = parseNotation(text, 'half-reaction');
+  if (n.kind !== 'half') throw new Error(`${text} is not a half-reaction`);
+  return n.reaction;
+}
+
+/** A map as [key, formula, charge, phase, num/den] rows in its order, for comparison. */
+function mapRows(m: ReturnType<typeof reactionMap>): string[] {
+  return [...m].map(([k, v]) => `${k} ${v.species.formula} ${v.species.charge} ${String(v.species.phase)} ${v.nu.num}/${v.nu.den}`);
+}
+
+const potentialTexts = BUILTIN_POTENTIALS.map((r) => r.halfReaction);
+
+describe('textsHash (FNV-1a, 32-bit)', () => {
+  // FNV-1a test vectors (Fowler, Noll, Vo; the published FNV test suite, from memory)
+  test.each([
+    ['', 0x811c9dc5],
+    ['a', 0xe40c292c],
+    ['foobar', 0xbf9cf968],
+  ])('of %j is %d', (text, hash) => {
+    expect(textsHash([text])).toBe(hash);
+  });
+  test('separates texts by a line feed: ["a", "b"] hashes as "a\\nb"', () => {
+    expect(textsHash(['a', 'b'])).toBe(textsHash(['a\nb']));
+    expect(textsHash(['a', 'b'])).not.toBe(textsHash(['ab']));
+  });
+});
+
+describe('stored parse of the built-in rows (storedParse.json)', () => {
+  test('is fresh: made from the texts of the rows as they are (else run npm run gen:terms)', () => {
+    expect(STORED.potentials.rows).toHaveLength(BUILTIN_POTENTIALS.length);
+    expect(STORED.potentials.textsHash).toBe(textsHash(potentialTexts));
+    expect(storedHalfReactions(potentialTexts)).not.toBeNull();
+  });
+
+  const rows = BUILTIN_POTENTIALS.map((r, i) => [i + 1, r.halfReaction] as const);
+
+  test.each(rows)('row %d: %s is read as the parser reads it', (i, text) => {
+    const row = builtinTable()[i - 1]!;
+    const reaction = parsed(text);
+    expect(row.reaction).toEqual(reaction);
+    expect(checkBalance(row.reaction).balanced).toBe(true);
+    expect(mapRows(row.map)).toEqual(mapRows(reactionMap(reaction)));
+    const electrons = -Number(reactionMap(reaction).get('e')!.nu.num) / Number(reactionMap(reaction).get('e')!.nu.den);
+    expect(row.n).toBe(electrons);
+    expect(row.n).toBeGreaterThan(0);
+    // per electron: every coefficient divided by the electron count
+    for (const [k, v] of row.perElectron) {
+      const whole = row.map.get(k)!.nu;
+      expect(Number(v.nu.num) / Number(v.nu.den)).toBeCloseTo(Number(whole.num) / Number(whole.den) / electrons, 12);
+    }
+    expect(row.perElectron.size).toBe(row.map.size);
+  });
+});
+
+describe('stored species of the species data (storedParse.json)', () => {
+  const lists = [
+    ['standard', STANDARD_SPECIES.map((r) => r.species)],
+    ['eph', EPH_SPECIES.map((r) => r.species)],
+  ] as const;
+  test.each(lists)('the %s list is fresh and each species is the parsed one, phase as inferred', (list, texts) => {
+    const s = STORED.species[list];
+    expect(s.textsHash).toBe(textsHash(texts));
+    const stored = storedSpecies(list, texts);
+    expect(stored).not.toBeNull();
+    texts.forEach((t, i) => {
+      const p = parseSpecies(t, 'species');
+      expect(stored![i]).toEqual({ ...p, phase: phaseOf(p) });
+    });
+  });
+  test('the registry holds every species of both lists under its parsed key', () => {
+    const keys = new Set(listSpecies().map((r) => r.key));
+    for (const t of [...lists[0][1], ...lists[1][1]]) {
+      const p = parseSpecies(t, 'species');
+      expect(keys.has(`${p.formula}|${p.charge}|${phaseOf(p) ?? ''}`)).toBe(true);
+    }
+  });
+});
+
+describe('a stale stored file', () => {
+  test('is not used for texts that changed: they are parsed', () => {
+    // the stored lists now describe other texts (another couple in row 1, species renamed)
+    expect(storedHalfReactions(['Li+ + e- -> Li', ...potentialTexts.slice(1)])).toBeNull();
+    expect(storedHalfReactions(potentialTexts.slice(1))).toBeNull();
+    expect(storedSpecies('standard', ['Li+(aq)'])).toBeNull();
+    jest.isolateModules(() => {
+      // a file made from other texts: the first row's stored reaction is another couple's
+      jest.doMock('../../src/engine/data/storedParse.json', () => ({
+        ...STORED,
+        potentials: { textsHash: 1, rows: ['Li 1,e>Li', ...STORED.potentials.rows.slice(1)] },
+        species: { standard: { textsHash: 1, keys: [] }, eph: { textsHash: 1, keys: [] } },
+      }));
+      // eslint-disable-next-line @typescript-eslint/no-require-imports
+      const engine = require('../../src/engine') as typeof import('../../src/engine');
+      const first = engine.builtinTable()[0]!;
+      expect(first.reaction).toEqual(parsed(BUILTIN_POTENTIALS[0]!.halfReaction));
+      expect(engine.listSpecies().length).toBe(listSpecies().length);
+    });
+  });
+});
