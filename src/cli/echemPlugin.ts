@@ -43,6 +43,7 @@ import type {
 import { CATALOGUE, isCellError, isPerCase, kindOf } from '../functions/catalogue';
 import type { Arg, ErrorCode, FunctionSpec, Grid, Result, ResultCell, Scalar } from '../functions/catalogue';
 import { ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
+import { indexGraphEdges } from './graphEdges';
 import { isFiniteColumn } from '../engine';
 
 /** The namespace of our functions in formulas. */
@@ -384,9 +385,13 @@ function buildImplementedFunctions(): ImplementedFunctions {
 
 let registered = false;
 
-/** Registers the ECHEM functions with HyperFormula (once per process). */
+/**
+ * Registers the ECHEM functions with HyperFormula (once per process), and indexes its
+ * dependency graph's edges (graphEdges.ts) so that large workbooks load in linear time.
+ */
 export function registerEchemFunctions(): void {
   if (registered) return;
+  indexGraphEdges();
   const names: Record<string, string> = {};
   for (const name of echemFunctionNames()) names[name] = name;
   HyperFormula.registerFunctionPlugin(EchemPlugin, { enGB: names, enUS: names });
