@@ -214,6 +214,9 @@ function toHfCell(cell: ResultCell | undefined): InternalScalarValue {
 // ---------------------------------------------------------------------------------------
 // The plugin
 
+/** Ranges of at least this many cells keep their conversion (tables always do). */
+const CACHED_RANGE_CELLS = 64;
+
 type Sized = { width: number; height: number };
 
 /**
@@ -298,9 +301,15 @@ export class EchemPlugin extends FunctionPlugin {
    * own range vertex, whose cache HyperFormula clears whenever a cell of the range changes.
    * Every call that reads the same unchanged range (a Potentials table read by thousands of
    * formulas) then gets the same object, which also lets the engine skip re-reading the table.
+   * Small ranges that are not tables (a row of one case, `A2:B2`, one per formula) are
+   * converted each time instead: kept, they would hold a copy of every case in memory.
    */
   private convertCached(v: unknown, isTable: boolean): ConvertedArg {
-    if (v instanceof SimpleRangeValue && v.range !== undefined) {
+    if (
+      v instanceof SimpleRangeValue &&
+      v.range !== undefined &&
+      (isTable || v.range.width() * v.range.height() >= CACHED_RANGE_CELLS)
+    ) {
       const vertex = this.dependencyGraph.getRange(v.range.start, v.range.end);
       if (vertex !== undefined) {
         const key = isTable ? 'ECHEM:table' : 'ECHEM:range';
