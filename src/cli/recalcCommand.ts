@@ -16,7 +16,7 @@ import * as os from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { EXIT_CELL_ERRORS, EXIT_INTERNAL, EXIT_OK, EXIT_USAGE, UsageError } from './io';
 import { checkPackage, DEFAULT_LIMITS, DEFAULT_MAX_CELLS, DEFAULT_MAX_UNCOMPRESSED_MB } from './limits';
-import type { ReadLimits } from './limits';
+import type { PackageSize, ReadLimits } from './limits';
 import { checkOutput, writeFileAtomically } from './safeWrite';
 import { withDynamicArrays } from './dynamicArrays';
 import type { Io } from './io';
@@ -94,15 +94,20 @@ export function checkInputFile(file: string): void {
   );
 }
 
+/** An .xlsx file's bytes and what the limit check read of them (its entries and XML parts). */
+export interface WorkbookBytes {
+  data: Buffer;
+  contents: PackageSize;
+}
+
 /**
  * Reads an .xlsx file's bytes, checked against the limits first (unpacked size, cell count)
  * before anything parses it.
  */
-export function readWorkbookBytes(file: string, limits: ReadLimits = DEFAULT_LIMITS): Buffer {
+export function readWorkbookBytes(file: string, limits: ReadLimits = DEFAULT_LIMITS): WorkbookBytes {
   checkInputFile(file);
   const data = fs.readFileSync(file);
-  checkPackage(file, data, limits);
-  return data;
+  return { data, contents: checkPackage(file, data, limits) };
 }
 
 /** The ExcelJS model of an .xlsx file's bytes, its failures turned into a clear message. */
@@ -127,7 +132,7 @@ export async function readWorkbookFile(
   file: string,
   limits: ReadLimits = DEFAULT_LIMITS,
 ): Promise<ExcelJS.Workbook> {
-  return workbookFromBytes(file, readWorkbookBytes(file, limits));
+  return workbookFromBytes(file, readWorkbookBytes(file, limits).data);
 }
 
 /** Progress on standard error: a bar only where it helps; otherwise nothing. */
@@ -239,14 +244,14 @@ export async function recalcFile(
   checkInputFile(input);
   checkOutput(input, output, options.force);
 
-  const data = readWorkbookBytes(input, options.limits);
+  const read = readWorkbookBytes(input, options.limits);
   const show = (formulaCount: number) =>
     options.progress !== 'never' &&
     (options.progress === 'always' || (io.errIsTTY && formulaCount > PROGRESS_THRESHOLD));
   let progress: Progress | undefined;
   let summary: RecalcSummary & { warnings: string[] };
   try {
-    const fast = await recalcPackage(data, options.limits.maxCells, (formulas) => {
+    const fast = recalcPackage(read, options.limits.maxCells, (formulas) => {
       progress = makeProgress(io, show(formulas));
       return progress;
     });
@@ -257,7 +262,7 @@ export async function recalcFile(
     } else {
       // The model path: spills, array formulas and the other cases xlsxPackage.ts leaves to it.
       progress?.stop();
-      const wb = await workbookFromBytes(input, data);
+      const wb = await workbookFromBytes(input, read.data);
       progress = makeProgress(io, show(countFormulas(wb)));
       summary = recalcWorkbook(wb, progress, options.limits.maxCells);
       progress.phase('saving', 1);
@@ -295,17 +300,18 @@ function countFormulas(wb: ExcelJS.Workbook): number {
  * patched, no spreadsheet model. Undefined where the workbook needs the model path (nothing
  * is written then). `startProgress` gets the number of formulas once they are known.
  */
-export async function recalcPackage(
-  data: Uint8Array,
+export function recalcPackage(
+  read: WorkbookBytes,
   maxCells: number,
   startProgress?: (formulas: number) => Progress,
-): Promise<{ summary: RecalcSummary & { warnings: string[] }; bytes: Uint8Array } | undefined> {
-  const pkg = await openPackage(data);
-  const loaded = pkg === undefined ? undefined : await loadPackage(pkg, maxCells);
+): { summary: RecalcSummary & { warnings: string[] }; bytes: Uint8Array } | undefined {
+  const pkg = openPackage(read.data, read.contents);
+  const loaded = pkg === undefined ? undefined : loadPackage(pkg, maxCells);
   if (pkg === undefined || loaded === undefined || loaded.needsModel) return undefined;
   const progress = startProgress?.(loaded.formulas.length);
   progress?.phase('computing', 1);
   const { hf, warnings } = buildEngine(loaded);
+  loaded.sheets = {}; // the engine holds its own copy
   let summary: RecalcSummary | undefined;
   try {
     progress?.tick(1);
@@ -314,10 +320,8 @@ export async function recalcPackage(
     hf.destroy();
   }
   if (summary === undefined) return undefined;
-  // Free the engine's sheets before the package is compressed (the peak of memory).
-  loaded.sheets = {};
   progress?.phase('saving', 1);
-  return { summary: { ...summary, warnings }, bytes: await packageBytes(pkg) };
+  return { summary: { ...summary, warnings }, bytes: packageBytes(pkg) };
 }
 
 /** The bytes of the .xlsx file for a recalculated workbook. */

@@ -19,7 +19,6 @@
  * macro-enabled workbook (written as a plain .xlsx), the 1904 date system, cells without
  * their address, or a part this reader does not find.
  */
-import JSZip from 'jszip';
 import type { HyperFormula } from 'hyperformula';
 import type { RawCellContent } from 'hyperformula';
 import { sheetParts, unescapeXml } from './dynamicArrays';
@@ -27,6 +26,9 @@ import { isHfError, spillSize } from './engineValues';
 import { formulaForEngine, slideFormula } from './formulaText';
 import { UsageError } from './io';
 import { DEFAULT_MAX_CELLS, ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
+import type { PackageSize } from './limits';
+import { writeZip } from './zipPackage';
+import type { ZipEntry } from './zipPackage';
 import {
   a1,
   checkSheetSize,
@@ -48,9 +50,14 @@ interface PackageSheet {
 
 /** An .xlsx package opened for the fast path. */
 export interface XlsxPackage {
-  zip: JSZip;
+  data: Buffer;
+  entries: ZipEntry[];
+  /** The XML parts not yet read (by entry name). */
+  parts: Map<string, Buffer>;
   sheets: PackageSheet[];
   workbookXml: string;
+  /** New contents of the parts patched so far. */
+  replaced: Map<string, Buffer>;
 }
 
 /** A workbook read from its package: the engine's sheets, and where each formula sits. */
@@ -64,43 +71,42 @@ export interface PackageWorkbook extends LoadedWorkbook {
 
 const decoder = new TextDecoder('utf-8');
 
-async function partText(zip: JSZip, name: string): Promise<string | undefined> {
-  const file = zip.file(name);
-  return file === null ? undefined : decoder.decode(await file.async('uint8array'));
+/** The text of an XML part, taken out of `parts` (it is needed once). */
+function takePart(parts: Map<string, Buffer>, name: string): string | undefined {
+  const bytes = parts.get(name);
+  if (bytes === undefined) return undefined;
+  parts.delete(name);
+  return decoder.decode(bytes);
 }
 
 /**
- * Opens an .xlsx package for the fast path, or returns undefined where the model path must
- * handle it (see the module comment).
+ * Opens an .xlsx package for the fast path, from its bytes and what `checkPackage` read of
+ * it (its entries and XML parts, which it takes over), or returns undefined where the model
+ * path must handle it (see the module comment).
  */
-export async function openPackage(data: Uint8Array): Promise<XlsxPackage | undefined> {
-  let zip: JSZip;
-  try {
-    zip = await JSZip.loadAsync(data);
-  } catch {
-    return undefined; // the model path reports what is wrong with the file
-  }
-  const [workbookXml, relsXml, typesXml] = await Promise.all([
-    partText(zip, 'xl/workbook.xml'),
-    partText(zip, 'xl/_rels/workbook.xml.rels'),
-    partText(zip, '[Content_Types].xml'),
-  ]);
+export function openPackage(data: Buffer, contents: PackageSize): XlsxPackage | undefined {
+  const parts = contents.parts;
+  const workbookXml = takePart(parts, 'xl/workbook.xml');
+  const relsXml = parts.has('xl/_rels/workbook.xml.rels')
+    ? decoder.decode(parts.get('xl/_rels/workbook.xml.rels'))
+    : undefined;
+  const typesXml = takePart(parts, '[Content_Types].xml');
   if (workbookXml === undefined || relsXml === undefined || typesXml === undefined) return undefined;
   if (/macroEnabled/i.test(typesXml)) return undefined;
   if (/<(\w+:)?workbookPr\b[^>]*\bdate1904="(1|true)"/.test(workbookXml)) return undefined;
-  const parts = sheetParts(workbookXml, relsXml);
+  const sheetPart = sheetParts(workbookXml, relsXml);
   const sheets: PackageSheet[] = [];
   for (const m of workbookXml.matchAll(/<(?:\w+:)?sheet\b[^>]*>/g)) {
     const name = attr(m[0], 'name');
     if (name === undefined) return undefined;
-    const part = parts.get(unescapeXml(name));
+    const part = sheetPart.get(unescapeXml(name));
     if (part === undefined) return undefined;
-    const xml = await partText(zip, part);
+    const xml = takePart(parts, part);
     if (xml === undefined) return undefined;
     sheets.push({ name: unescapeXml(name), part, xml });
   }
   if (sheets.length === 0) return undefined;
-  return { zip, sheets, workbookXml };
+  return { data, entries: contents.entries, parts, sheets, workbookXml, replaced: new Map() };
 }
 
 function attr(tag: string, name: string): string | undefined {
@@ -138,7 +144,7 @@ function runsText(inner: string): string {
   return out;
 }
 
-async function sharedStrings(zip: JSZip, workbookRels: string | undefined): Promise<string[]> {
+function sharedStrings(parts: Map<string, Buffer>, workbookRels: string | undefined): string[] {
   let part = 'xl/sharedStrings.xml';
   for (const m of (workbookRels ?? '').matchAll(/<Relationship\b[^>]*>/g)) {
     if (/\/sharedStrings"/.test(m[0])) {
@@ -146,7 +152,7 @@ async function sharedStrings(zip: JSZip, workbookRels: string | undefined): Prom
       if (target !== undefined) part = target.startsWith('/') ? target.slice(1) : `xl/${target}`;
     }
   }
-  const xml = await partText(zip, part);
+  const xml = takePart(parts, part);
   if (xml === undefined) return [];
   const out: string[] = [];
   for (const m of xml.matchAll(/<si\b[^>]*?(?:\/>|>([\s\S]*?)<\/si>)/g)) out.push(runsText(m[1] ?? ''));
@@ -197,11 +203,8 @@ const ROW_RX = /<row\b([^>]*?)(\/?)>/g;
  *
  * @throws UsageError for a sheet larger than the engine holds or a damaged array range
  */
-export async function loadPackage(
-  pkg: XlsxPackage,
-  maxCells: number = DEFAULT_MAX_CELLS,
-): Promise<PackageWorkbook | undefined> {
-  const strings = await sharedStrings(pkg.zip, await partText(pkg.zip, 'xl/_rels/workbook.xml.rels'));
+export function loadPackage(pkg: XlsxPackage, maxCells: number = DEFAULT_MAX_CELLS): PackageWorkbook | undefined {
+  const strings = sharedStrings(pkg.parts, takePart(pkg.parts, 'xl/_rels/workbook.xml.rels'));
   const sheetNames: string[] = [];
   const sheets: Record<string, RawCellContent[][]> = {};
   const formulas: FormulaCell[] = [];
@@ -422,7 +425,8 @@ export function patchResults(
     }
     if (pieces.length === 0) continue;
     pieces.push(sheet.xml.slice(at));
-    pkg.zip.file(sheet.part, pieces.join(''));
+    pkg.replaced.set(sheet.part, Buffer.from(pieces.join(''), 'utf8'));
+    sheet.xml = ''; // the text is no longer needed: free it before the package is compressed
   }
   return {
     formulas: loaded.formulas.length,
@@ -432,7 +436,7 @@ export function patchResults(
   };
 }
 
-/** The package's bytes, the changed sheets compressed at `level` (1 fastest … 9 smallest). */
-export function packageBytes(pkg: XlsxPackage, level = 6): Promise<Uint8Array> {
-  return pkg.zip.generateAsync({ type: 'uint8array', compression: 'DEFLATE', compressionOptions: { level } });
+/** The package's bytes: the patched sheets deflated at `level` (1 fastest … 9 smallest), the rest as it was. */
+export function packageBytes(pkg: XlsxPackage, level = 6): Buffer {
+  return writeZip(pkg.data, pkg.entries, pkg.replaced, level);
 }

@@ -138,7 +138,7 @@ describe('fast path: the package patched, no model', () => {
   });
 
   test('this workbook takes the fast path', async () => {
-    const r = await recalcPackage(readWorkbookBytes(input), DEFAULT_MAX_CELLS);
+    const r = recalcPackage(readWorkbookBytes(input), DEFAULT_MAX_CELLS);
     expect(r).toBeDefined();
     expect(r?.summary.formulas).toBe(11);
     expect(r?.summary.errors.map((e) => `${e.sheet}!${e.cell} ${e.code}`)).toEqual(['Cases!C5 #DIV/0!']);
@@ -198,7 +198,7 @@ describe('fast path on SpreadsheetML as other programs write it', () => {
       '<row r="4"><c r="B4"><f t="shared" si="0"/></c><c r="C4" t="b"><v>1</v></c><c r="D4"><f>IF(C4,C1*C1,0)</f></c></row>';
     const file = path.join(dir, 'raw.xlsx');
     fs.writeFileSync(file, await xlsxFromXml([{ name: 'Raw', rows }]));
-    const r = await recalcPackage(readWorkbookBytes(file), DEFAULT_MAX_CELLS);
+    const r = recalcPackage(readWorkbookBytes(file), DEFAULT_MAX_CELLS);
     expect(r).toBeDefined();
     const out = path.join(dir, 'raw.out.xlsx');
     fs.writeFileSync(out, r!.bytes);
@@ -223,7 +223,7 @@ describe('workbooks the fast path hands to the model path', () => {
     ws.getCell('B1').value = { formula: 'ECHEM.POTENTIAL("Cu2+ + 2e- = Cu","Cu2+",A1:A3)' } as ExcelJS.CellFormulaValue;
     const file = path.join(dir, 'spill.xlsx');
     await wb.xlsx.writeFile(file);
-    expect(await recalcPackage(readWorkbookBytes(file), DEFAULT_MAX_CELLS)).toBeUndefined();
+    expect(recalcPackage(readWorkbookBytes(file), DEFAULT_MAX_CELLS)).toBeUndefined();
     const out = path.join(dir, 'spill.out.xlsx');
     expect(await recalcFile(file, out, OPTIONS, captureIo())).toBe(0);
     const back = new ExcelJS.Workbook();
@@ -240,7 +240,7 @@ describe('workbooks the fast path hands to the model path', () => {
       '<row r="2"><c r="A2"><v>5</v></c><c r="B2"><v>99</v></c></row>';
     const file = path.join(dir, 'array.xlsx');
     fs.writeFileSync(file, await xlsxFromXml([{ name: 'Arr', rows }]));
-    expect(await recalcPackage(readWorkbookBytes(file), DEFAULT_MAX_CELLS)).toBeUndefined();
+    expect(recalcPackage(readWorkbookBytes(file), DEFAULT_MAX_CELLS)).toBeUndefined();
     const out = path.join(dir, 'array.out.xlsx');
     expect(await recalcFile(file, out, OPTIONS, captureIo())).toBe(0);
     const back = new ExcelJS.Workbook();
