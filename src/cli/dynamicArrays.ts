@@ -37,7 +37,8 @@ function attr(tag: string, name: string): string | undefined {
   return new RegExp(`\\s${name}="([^"]*)"`).exec(tag)?.[1];
 }
 
-function unescapeXml(s: string): string {
+/** Text with the five predefined XML entities resolved. */
+export function unescapeXml(s: string): string {
   return s
     .replace(/&quot;/g, '"')
     .replace(/&apos;/g, "'")
@@ -47,7 +48,7 @@ function unescapeXml(s: string): string {
 }
 
 /** The part name of each sheet, by sheet name, from the workbook part and its relationships. */
-function sheetParts(workbookXml: string, relsXml: string): Map<string, string> {
+export function sheetParts(workbookXml: string, relsXml: string): Map<string, string> {
   const targets = new Map<string, string>();
   for (const m of relsXml.matchAll(/<Relationship\b[^>]*>/g)) {
     const id = attr(m[0], 'Id');

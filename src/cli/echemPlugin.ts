@@ -43,6 +43,7 @@ import type {
 import { CATALOGUE, isCellError, isPerCase, kindOf } from '../functions/catalogue';
 import type { Arg, ErrorCode, FunctionSpec, Grid, Result, ResultCell, Scalar } from '../functions/catalogue';
 import { ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
+import { indexGraphEdges } from './graphEdges';
 import { isFiniteColumn } from '../engine';
 
 /** The namespace of our functions in formulas. */
@@ -213,6 +214,9 @@ function toHfCell(cell: ResultCell | undefined): InternalScalarValue {
 // ---------------------------------------------------------------------------------------
 // The plugin
 
+/** Ranges of at least this many cells keep their conversion (tables always do). */
+const CACHED_RANGE_CELLS = 64;
+
 type Sized = { width: number; height: number };
 
 /**
@@ -297,9 +301,15 @@ export class EchemPlugin extends FunctionPlugin {
    * own range vertex, whose cache HyperFormula clears whenever a cell of the range changes.
    * Every call that reads the same unchanged range (a Potentials table read by thousands of
    * formulas) then gets the same object, which also lets the engine skip re-reading the table.
+   * Small ranges that are not tables (a row of one case, `A2:B2`, one per formula) are
+   * converted each time instead: kept, they would hold a copy of every case in memory.
    */
   private convertCached(v: unknown, isTable: boolean): ConvertedArg {
-    if (v instanceof SimpleRangeValue && v.range !== undefined) {
+    if (
+      v instanceof SimpleRangeValue &&
+      v.range !== undefined &&
+      (isTable || v.range.width() * v.range.height() >= CACHED_RANGE_CELLS)
+    ) {
       const vertex = this.dependencyGraph.getRange(v.range.start, v.range.end);
       if (vertex !== undefined) {
         const key = isTable ? 'ECHEM:table' : 'ECHEM:range';
@@ -384,9 +394,13 @@ function buildImplementedFunctions(): ImplementedFunctions {
 
 let registered = false;
 
-/** Registers the ECHEM functions with HyperFormula (once per process). */
+/**
+ * Registers the ECHEM functions with HyperFormula (once per process), and indexes its
+ * dependency graph's edges (graphEdges.ts) so that large workbooks load in linear time.
+ */
 export function registerEchemFunctions(): void {
   if (registered) return;
+  indexGraphEdges();
   const names: Record<string, string> = {};
   for (const name of echemFunctionNames()) names[name] = name;
   HyperFormula.registerFunctionPlugin(EchemPlugin, { enGB: names, enUS: names });

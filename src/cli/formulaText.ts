@@ -32,7 +32,9 @@ function isNameChar(ch: string | undefined): boolean {
  * normalizeFormulaText('=ECHEM.POTENTIAL("Zn2+/Zn","Zn2+",1E-6)') // '=ECHEM.POTENTIAL("Zn2+/Zn","Zn2+",1e-6)'
  */
 export function normalizeFormulaText(formula: string): string {
-  let out = '';
+  // Pieces joined once at the end: a flat string (appending piece by piece would keep a
+  // chain of partial strings per formula, about 1 KB each, for as long as the text lives).
+  const out: string[] = [];
   let i = 0;
   const n = formula.length;
   while (i < n) {
@@ -46,7 +48,7 @@ export function normalizeFormulaText(formula: string): string {
           else break;
         } else j++;
       }
-      out += formula.slice(i, Math.min(n, j + 1));
+      out.push(formula.slice(i, Math.min(n, j + 1)));
       i = j + 1;
       continue;
     }
@@ -56,7 +58,7 @@ export function normalizeFormulaText(formula: string): string {
       if (prefix !== undefined) {
         i += prefix.length;
         if (prefix === '_xldudf_' && /^ECHEM_/i.test(formula.slice(i, i + 6))) {
-          out += `${formula.slice(i, i + 5)}.`;
+          out.push(`${formula.slice(i, i + 5)}.`);
           i += 6;
         }
         continue;
@@ -70,7 +72,7 @@ export function normalizeFormulaText(formula: string): string {
       const name = formula.slice(i, j);
       const upper = name.toUpperCase();
       const next = formula[j];
-      out += (upper === 'TRUE' || upper === 'FALSE') && next !== '(' && next !== '!' ? `${upper}()` : name;
+      out.push((upper === 'TRUE' || upper === 'FALSE') && next !== '(' && next !== '!' ? `${upper}()` : name);
       i = j;
       continue;
     }
@@ -97,19 +99,19 @@ export function normalizeFormulaText(formula: string): string {
       }
       // A number directly followed by a name character is part of something else (e.g. "1A").
       if (isNameChar(formula[j]) && formula[j] !== '.') {
-        out += formula.slice(i, j);
+        out.push(formula.slice(i, j));
         i = j;
         continue;
       }
       if (mantissa.startsWith('.')) mantissa = `0${mantissa}`;
-      out += mantissa + exponent;
+      out.push(mantissa + exponent);
       i = j;
       continue;
     }
-    out += ch;
+    out.push(ch);
     i++;
   }
-  return out;
+  return out.join('');
 }
 
 /**
@@ -121,4 +123,83 @@ export function normalizeFormulaText(formula: string): string {
 export function formulaForEngine(stored: string): string {
   const body = stored.startsWith('=') ? stored.slice(1) : stored;
   return `=${normalizeFormulaText(body)}`;
+}
+
+const REF_CANDIDATE = /(([a-z_\-0-9]*)!)?([a-z0-9_$]{2,})([(])?/gi;
+const CELL_REF = /^([$])?([a-z]+)([$])?([1-9][0-9]*)$/i;
+
+/** A1 column letters of a 0-based column. */
+function letters(col: number): string {
+  let n = col + 1;
+  let s = '';
+  while (n > 0) {
+    s = String.fromCharCode(65 + ((n - 1) % 26)) + s;
+    n = Math.floor((n - 1) / 26);
+  }
+  return s;
+}
+
+/** 0-based column of A1 column letters. */
+function columnIndex(text: string): number {
+  let col = 0;
+  for (const ch of text.toUpperCase()) col = col * 26 + (ch.charCodeAt(0) - 64);
+  return col - 1;
+}
+
+function moveReferences(part: string, dRow: number, dCol: number): string {
+  return part.replace(REF_CANDIDATE, (whole, sheet: string | undefined, _name: unknown, ref: string, paren?: string) => {
+    if (paren) return whole; // a function name
+    const m = CELL_REF.exec(ref);
+    if (!m || m[2] === undefined || m[4] === undefined) return whole;
+    const colText = m[2].toUpperCase();
+    if (colText.length > 3 || (colText.length === 3 && colText > 'XFD')) return whole; // a name
+    const col = m[1] ? columnIndex(colText) : columnIndex(colText) + dCol;
+    const row = m[3] ? Number(m[4]) : Number(m[4]) + dRow;
+    if (col < 0 || row < 1) return whole;
+    return `${sheet ?? ''}${m[1] ?? ''}${letters(col)}${m[3] ?? ''}${row}`;
+  });
+}
+
+/**
+ * The text of a shared formula for one of its followers: the master's relative references
+ * moved by the follower's offset from the master (a file stores a filled-down formula once,
+ * on its first cell). Text inside string literals ("Cu2+ + 2e- = Cu") and quoted sheet names
+ * is never changed; absolute references (`$A$1`) and function names stay as they are.
+ *
+ * @param formula the master's formula (no leading "=")
+ * @param from the master's 0-based row and column
+ * @param to the follower's 0-based row and column
+ * @example
+ * slideFormula('ECHEM.POTENTIAL("Cu2+ + 2e- = Cu","Cu2+",A2)', { row: 1, col: 1 }, { row: 3, col: 1 })
+ * // 'ECHEM.POTENTIAL("Cu2+ + 2e- = Cu","Cu2+",A4)'
+ */
+export function slideFormula(
+  formula: string,
+  from: { row: number; col: number },
+  to: { row: number; col: number },
+): string {
+  const dRow = to.row - from.row;
+  const dCol = to.col - from.col;
+  const out: string[] = [];
+  let plain = 0;
+  let i = 0;
+  while (i < formula.length) {
+    const ch = formula[i];
+    if (ch !== '"' && ch !== "'") {
+      i++;
+      continue;
+    }
+    let j = i + 1;
+    while (j < formula.length) {
+      if (formula[j] === ch) {
+        if (formula[j + 1] === ch) j += 2;
+        else break;
+      } else j++;
+    }
+    out.push(moveReferences(formula.slice(plain, i), dRow, dCol), formula.slice(i, j + 1));
+    i = j + 1;
+    plain = i;
+  }
+  out.push(moveReferences(formula.slice(plain), dRow, dCol));
+  return out.join('');
 }

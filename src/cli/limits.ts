@@ -3,8 +3,9 @@
  * file (a "ZIP bomb", a sheet of millions of cells) is refused with a clear message and exit
  * code 2 instead of exhausting memory. Both limits can be raised on the command line.
  */
-import * as zlib from 'node:zlib';
 import { UsageError } from './io';
+import { entryBytes, readZipDirectory } from './zipPackage';
+import type { ZipEntry } from './zipPackage';
 
 /** Default bound on the total uncompressed size of a workbook's parts: 200 MiB. */
 export const DEFAULT_MAX_UNCOMPRESSED_MB = 200;
@@ -32,11 +33,11 @@ export const DEFAULT_LIMITS: ReadLimits = {
 export interface PackageSize {
   uncompressedBytes: number;
   cells: number;
+  /** The package's ZIP entries, and its XML parts uncompressed (by entry name). */
+  entries: ZipEntry[];
+  parts: Map<string, Buffer>;
 }
 
-const EOCD = 0x06054b50;
-const CENTRAL = 0x02014b50;
-const LOCAL = 0x04034b50;
 
 function damaged(file: string, what: string): UsageError {
   return new UsageError(
@@ -65,51 +66,28 @@ function countCells(xml: Buffer): number {
  *   package that is not a readable ZIP
  */
 export function checkPackage(file: string, zip: Buffer, limits: ReadLimits = DEFAULT_LIMITS): PackageSize {
-  // The end-of-central-directory record: in the last 65,557 bytes.
-  let eocd = -1;
-  for (let i = zip.length - 22; i >= Math.max(0, zip.length - 65557); i--) {
-    if (zip.readUInt32LE(i) === EOCD) {
-      eocd = i;
-      break;
-    }
-  }
-  if (eocd < 0) throw damaged(file, 'no ZIP directory at its end');
-  const entries = zip.readUInt16LE(eocd + 10);
-  let p = zip.readUInt32LE(eocd + 16);
+  const entries = readZipDirectory(zip);
+  if (typeof entries === 'string') throw damaged(file, entries);
   let total = 0;
   let cells = 0;
-  for (let k = 0; k < entries; k++) {
-    if (p + 46 > zip.length || zip.readUInt32LE(p) !== CENTRAL) throw damaged(file, 'a broken ZIP directory');
-    const method = zip.readUInt16LE(p + 10);
-    const compressedSize = zip.readUInt32LE(p + 20);
-    const nameLength = zip.readUInt16LE(p + 28);
-    const extraLength = zip.readUInt16LE(p + 30);
-    const commentLength = zip.readUInt16LE(p + 32);
-    const localOffset = zip.readUInt32LE(p + 42);
-    const name = zip.toString('utf8', p + 46, p + 46 + nameLength);
-    p += 46 + nameLength + extraLength + commentLength;
-    if (localOffset + 30 > zip.length || zip.readUInt32LE(localOffset) !== LOCAL) {
-      throw damaged(file, `a broken entry ${name}`);
-    }
-    const dataStart =
-      localOffset + 30 + zip.readUInt16LE(localOffset + 26) + zip.readUInt16LE(localOffset + 28);
-    const data = zip.subarray(dataStart, Math.min(zip.length, dataStart + compressedSize));
+  const parts = new Map<string, Buffer>();
+  for (const entry of entries) {
     const budget = limits.maxUncompressedBytes - total;
     let part: Buffer;
-    if (method === 0) part = data;
-    else if (method === 8) {
-      try {
-        part = zlib.inflateRawSync(data, { maxOutputLength: Math.max(1, budget + 1) });
-      } catch (e) {
-        if ((e as { code?: string }).code === 'ERR_BUFFER_TOO_LARGE' || e instanceof RangeError) {
-          throw tooBig(file, limits);
-        }
-        throw damaged(file, `entry ${name} does not decompress`);
+    if (entry.method !== 0 && entry.method !== 8)
+      throw damaged(file, `entry ${entry.name} uses compression method ${entry.method}`);
+    try {
+      part = entryBytes(zip, entry, Math.max(1, budget + 1));
+    } catch (e) {
+      if ((e as { code?: string }).code === 'ERR_BUFFER_TOO_LARGE' || e instanceof RangeError) {
+        throw tooBig(file, limits);
       }
-    } else throw damaged(file, `entry ${name} uses compression method ${method}`);
+      throw damaged(file, `entry ${entry.name} does not decompress`);
+    }
     total += part.length;
     if (total > limits.maxUncompressedBytes) throw tooBig(file, limits);
-    if (/^xl\/worksheets\/[^/]+\.xml$/i.test(name)) {
+    if (/\.(xml|rels)$/i.test(entry.name)) parts.set(entry.name, part);
+    if (/^xl\/worksheets\/[^/]+\.xml$/i.test(entry.name)) {
       cells += countCells(part);
       if (cells > limits.maxCells) {
         throw new UsageError(
@@ -119,7 +97,7 @@ export function checkPackage(file: string, zip: Buffer, limits: ReadLimits = DEF
       }
     }
   }
-  return { uncompressedBytes: total, cells };
+  return { uncompressedBytes: total, cells, entries, parts };
 }
 
 function tooBig(file: string, limits: ReadLimits): UsageError {

@@ -16,11 +16,12 @@ import * as os from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { EXIT_CELL_ERRORS, EXIT_INTERNAL, EXIT_OK, EXIT_USAGE, UsageError } from './io';
 import { checkPackage, DEFAULT_LIMITS, DEFAULT_MAX_CELLS, DEFAULT_MAX_UNCOMPRESSED_MB } from './limits';
-import type { ReadLimits } from './limits';
+import type { PackageSize, ReadLimits } from './limits';
 import { checkOutput, writeFileAtomically } from './safeWrite';
 import { withDynamicArrays } from './dynamicArrays';
 import type { Io } from './io';
 import { buildEngine, loadWorkbook, writeResults } from './workbook';
+import { loadPackage, openPackage, packageBytes, patchResults } from './xlsxPackage';
 import type { RecalcSummary } from './workbook';
 
 export const RECALC_USAGE = `Usage: potentia recalc IN.xlsx [-o OUT.xlsx] [options]
@@ -93,17 +94,24 @@ export function checkInputFile(file: string): void {
   );
 }
 
+/** An .xlsx file's bytes and what the limit check read of them (its entries and XML parts). */
+export interface WorkbookBytes {
+  data: Buffer;
+  contents: PackageSize;
+}
+
 /**
- * Reads an .xlsx file with ExcelJS, turning its failures into a clear message. The package
- * is checked against the limits first (unpacked size, cell count), before ExcelJS parses it.
+ * Reads an .xlsx file's bytes, checked against the limits first (unpacked size, cell count)
+ * before anything parses it.
  */
-export async function readWorkbookFile(
-  file: string,
-  limits: ReadLimits = DEFAULT_LIMITS,
-): Promise<ExcelJS.Workbook> {
+export function readWorkbookBytes(file: string, limits: ReadLimits = DEFAULT_LIMITS): WorkbookBytes {
   checkInputFile(file);
   const data = fs.readFileSync(file);
-  checkPackage(file, data, limits);
+  return { data, contents: checkPackage(file, data, limits) };
+}
+
+/** The ExcelJS model of an .xlsx file's bytes, its failures turned into a clear message. */
+async function workbookFromBytes(file: string, data: Buffer): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();
   try {
     await wb.xlsx.load(data as unknown as ExcelJS.Buffer);
@@ -116,8 +124,19 @@ export async function readWorkbookFile(
   return wb;
 }
 
+/**
+ * Reads an .xlsx file with ExcelJS, turning its failures into a clear message. The package
+ * is checked against the limits first (unpacked size, cell count), before ExcelJS parses it.
+ */
+export async function readWorkbookFile(
+  file: string,
+  limits: ReadLimits = DEFAULT_LIMITS,
+): Promise<ExcelJS.Workbook> {
+  return workbookFromBytes(file, readWorkbookBytes(file, limits).data);
+}
+
 /** Progress on standard error: a bar only where it helps; otherwise nothing. */
-interface Progress {
+export interface Progress {
   phase: (name: string, total: number) => void;
   tick: (value: number) => void;
   stop: () => void;
@@ -225,7 +244,46 @@ export async function recalcFile(
   checkInputFile(input);
   checkOutput(input, output, options.force);
 
-  const wb = await readWorkbookFile(input, options.limits);
+  const read = readWorkbookBytes(input, options.limits);
+  const show = (formulaCount: number) =>
+    options.progress !== 'never' &&
+    (options.progress === 'always' || (io.errIsTTY && formulaCount > PROGRESS_THRESHOLD));
+  let progress: Progress | undefined;
+  let summary: RecalcSummary & { warnings: string[] };
+  try {
+    const fast = recalcPackage(read, options.limits.maxCells, (formulas) => {
+      progress = makeProgress(io, show(formulas));
+      return progress;
+    });
+    let bytes: Uint8Array;
+    if (fast !== undefined) {
+      summary = fast.summary;
+      bytes = fast.bytes;
+    } else {
+      // The model path: spills, array formulas and the other cases xlsxPackage.ts leaves to it.
+      progress?.stop();
+      const wb = await workbookFromBytes(input, read.data);
+      progress = makeProgress(io, show(countFormulas(wb)));
+      summary = recalcWorkbook(wb, progress, options.limits.maxCells);
+      progress.phase('saving', 1);
+      try {
+        bytes = await withDynamicArrays(await workbookBytes(wb), summary.spillAnchors);
+      } catch (e) {
+        throw new UsageError(`cannot write ${output} (${e instanceof Error ? e.message : String(e)})`);
+      }
+    }
+    writeFileAtomically(output, bytes, options.force, input);
+    progress?.tick(1);
+  } finally {
+    progress?.stop();
+  }
+  for (const w of summary.warnings) io.err(`warning: ${w}\n`);
+  io.out(formatSummary(summary, input, output));
+  report?.(summary);
+  return summary.errors.length > 0 && !options.allowErrors ? EXIT_CELL_ERRORS : EXIT_OK;
+}
+
+function countFormulas(wb: ExcelJS.Workbook): number {
   let formulaCount = 0;
   wb.eachSheet((ws) =>
     ws.eachRow((row) =>
@@ -234,29 +292,36 @@ export async function recalcFile(
       }),
     ),
   );
-  const show =
-    options.progress !== 'never' &&
-    (options.progress === 'always' || (io.errIsTTY && formulaCount > PROGRESS_THRESHOLD));
-  const progress = makeProgress(io, show);
-  let summary: RecalcSummary & { warnings: string[] };
+  return formulaCount;
+}
+
+/**
+ * The fast path (xlsxPackage.ts): the package read into the engine and its formula cells
+ * patched, no spreadsheet model. Undefined where the workbook needs the model path (nothing
+ * is written then). `startProgress` gets the number of formulas once they are known.
+ */
+export function recalcPackage(
+  read: WorkbookBytes,
+  maxCells: number,
+  startProgress?: (formulas: number) => Progress,
+): { summary: RecalcSummary & { warnings: string[] }; bytes: Uint8Array } | undefined {
+  const pkg = openPackage(read.data, read.contents);
+  const loaded = pkg === undefined ? undefined : loadPackage(pkg, maxCells);
+  if (pkg === undefined || loaded === undefined || loaded.needsModel) return undefined;
+  const progress = startProgress?.(loaded.formulas.length);
+  progress?.phase('computing', 1);
+  const { hf, warnings } = buildEngine(loaded);
+  loaded.sheets = {}; // the engine holds its own copy
+  let summary: RecalcSummary | undefined;
   try {
-    summary = recalcWorkbook(wb, progress, options.limits.maxCells);
-    progress.phase('saving', 1);
-    let data: Uint8Array;
-    try {
-      data = await withDynamicArrays(await workbookBytes(wb), summary.spillAnchors);
-    } catch (e) {
-      throw new UsageError(`cannot write ${output} (${e instanceof Error ? e.message : String(e)})`);
-    }
-    writeFileAtomically(output, data, options.force, input);
-    progress.tick(1);
+    progress?.tick(1);
+    summary = patchResults(pkg, loaded, hf, echemFunctionNames());
   } finally {
-    progress.stop();
+    hf.destroy();
   }
-  for (const w of summary.warnings) io.err(`warning: ${w}\n`);
-  io.out(formatSummary(summary, input, output));
-  report?.(summary);
-  return summary.errors.length > 0 && !options.allowErrors ? EXIT_CELL_ERRORS : EXIT_OK;
+  if (summary === undefined) return undefined;
+  progress?.phase('saving', 1);
+  return { summary: { ...summary, warnings }, bytes: packageBytes(pkg) };
 }
 
 /** The bytes of the .xlsx file for a recalculated workbook. */

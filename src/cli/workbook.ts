@@ -21,7 +21,7 @@ import type { CellValue as HfCellValue, RawCellContent } from 'hyperformula';
 import { HF_CONFIG, registerEchemFunctions } from './echemPlugin';
 import { explainError, isHfError, spillSize } from './engineValues';
 import type { HfErrorValue } from './engineValues';
-import { formulaForEngine } from './formulaText';
+import { formulaForEngine, slideFormula } from './formulaText';
 import { UsageError } from './io';
 import { DEFAULT_MAX_CELLS, ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
 
@@ -104,7 +104,8 @@ export function parseA1(text: string): { row: number; col: number } | undefined 
   return { row: Number(m[2]) - 1, col: col - 1 };
 }
 
-function parseRange(ref: string): { top: number; left: number; bottom: number; right: number } | undefined {
+/** The corners (0-based) of an A1 range ("B2:D9", or one cell), or undefined. */
+export function parseRange(ref: string): { top: number; left: number; bottom: number; right: number } | undefined {
   const [from, to] = ref.split(':');
   const a = from === undefined ? undefined : parseA1(from);
   const b = to === undefined ? a : parseA1(to);
@@ -146,6 +147,37 @@ function valueForEngine(v: ExcelJS.CellValue): RawCellContent {
 }
 
 /**
+ * The formula of a shared-formula follower (0-based row, column), from its master's text:
+ * string literals untouched (ExcelJS's own translation also moves "Cu2" inside text).
+ */
+function followerFormula(ws: ExcelJS.Worksheet, master: string, row: number, col: number): string | undefined {
+  const at = parseA1(master);
+  const text = at === undefined ? undefined : ws.getCell(at.row + 1, at.col + 1).formula;
+  return at === undefined || typeof text !== 'string' || text === '' ? undefined : slideFormula(text, at, { row, col });
+}
+
+/**
+ * Refuses a sheet larger than the calculation engine holds.
+ *
+ * @throws UsageError naming the sheet, its last row or column and the limit
+ */
+export function checkSheetSize(name: string, lastRow: number, lastColumn: number): void {
+  if (lastRow > ENGINE_MAX_ROWS) {
+    throw new UsageError(
+      `sheet "${name}" has data down to row ${lastRow.toLocaleString('en-US')}; the calculation engine holds ` +
+        `${ENGINE_MAX_ROWS.toLocaleString('en-US')} rows a sheet: split the sheet, or clear the cells below row ` +
+        `${ENGINE_MAX_ROWS.toLocaleString('en-US')} that hold stray content`,
+    );
+  }
+  if (lastColumn > ENGINE_MAX_COLUMNS) {
+    throw new UsageError(
+      `sheet "${name}" has data in column ${lastColumn.toLocaleString('en-US')}; the calculation engine holds ` +
+        `${ENGINE_MAX_COLUMNS.toLocaleString('en-US')} columns a sheet`,
+    );
+  }
+}
+
+/**
  * Reads a workbook's sheets, values and formulas for HyperFormula.
  *
  * @param maxCells the most cells an array formula's range may cover (a range larger than
@@ -161,20 +193,7 @@ export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MA
   wb.worksheets.forEach((ws, sheetIndex) => {
     const name = ws.name;
     sheetNames.push(name);
-    const lastRow = ws.rowCount;
-    if (lastRow > ENGINE_MAX_ROWS) {
-      throw new UsageError(
-        `sheet "${name}" has data down to row ${lastRow.toLocaleString('en-US')}; the calculation engine holds ` +
-          `${ENGINE_MAX_ROWS.toLocaleString('en-US')} rows a sheet: split the sheet, or clear the cells below row ` +
-          `${ENGINE_MAX_ROWS.toLocaleString('en-US')} that hold stray content`,
-      );
-    }
-    if (ws.columnCount > ENGINE_MAX_COLUMNS) {
-      throw new UsageError(
-        `sheet "${name}" has data in column ${ws.columnCount.toLocaleString('en-US')}; the calculation engine holds ` +
-          `${ENGINE_MAX_COLUMNS.toLocaleString('en-US')} columns a sheet`,
-      );
-    }
+    checkSheetSize(name, ws.rowCount, ws.columnCount);
     const grid: RawCellContent[][] = [];
     const put = (row: number, col: number, content: RawCellContent): void => {
       while (grid.length <= row) grid.push([]);
@@ -217,7 +236,7 @@ export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MA
         if (cell.type === ExcelJS.ValueType.Merge) return;
         if (cell.type === ExcelJS.ValueType.Formula) {
           const m = cell.value as FormulaModel;
-          const text = cell.formula;
+          const text = m.sharedFormula === undefined ? cell.formula : followerFormula(ws, m.sharedFormula, r, c);
           if (typeof text !== 'string' || text === '') {
             // A shared-formula follower whose master is missing: keep the cached value.
             put(r, c, valueForEngine(cell.result as ExcelJS.CellValue));
@@ -284,8 +303,8 @@ export function buildEngine(loaded: LoadedWorkbook): { hf: HyperFormula; warning
 /** Error codes a spreadsheet file may cache; HyperFormula's own ones are stored as #VALUE!. */
 const FILE_ERROR_CODES = new Set([...ERROR_LITERALS, '#SPILL!', '#CALC!']);
 
-/** A computed value as an ExcelJS cached result. */
-function resultForFile(v: HfCellValue): number | string | boolean | { error: string } | undefined {
+/** A computed value as a cached result of the file (ExcelJS's shape). */
+export function resultForFile(v: HfCellValue): number | string | boolean | { error: string } | undefined {
   if (v === null || v === undefined) return undefined;
   if (isHfError(v)) return { error: FILE_ERROR_CODES.has(v.value) ? v.value : '#VALUE!' };
   if (typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean') return v;
@@ -300,6 +319,11 @@ function withOrigin(v: HfErrorValue, f: FormulaCell, echemNames: readonly string
   const here = `${f.sheet}!${a1(f.row, f.col)}`;
   const same = origin === here || origin.replace(/'/g, '') === here;
   return same ? message : `${message} (from ${origin})`;
+}
+
+/** The report of a formula cell that computed to an error. */
+export function errorReport(value: HfErrorValue, f: FormulaCell, echemNames: readonly string[]): CellErrorReport {
+  return { sheet: f.sheet, cell: a1(f.row, f.col), code: value.value, message: withOrigin(value, f, echemNames) };
 }
 
 /**
@@ -328,14 +352,7 @@ export function writeResults(
     const model = cell.value as FormulaModel;
     const result = resultForFile(value);
 
-    if (isHfError(value)) {
-      errors.push({
-        sheet: f.sheet,
-        cell: a1(f.row, f.col),
-        code: value.value,
-        message: withOrigin(value, f, echemNames),
-      });
-    }
+    if (isHfError(value)) errors.push(errorReport(value, f, echemNames));
 
     const spills = size.width > 1 || size.height > 1;
     if (spills || f.kind === 'array') {

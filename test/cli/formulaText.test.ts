@@ -3,7 +3,7 @@
  * bare decimal points, subnormal numbers, and the function prefixes of the file format.
  */
 import ExcelJS from 'exceljs';
-import { formulaForEngine, normalizeFormulaText } from '../../src/cli/formulaText';
+import { formulaForEngine, normalizeFormulaText, slideFormula } from '../../src/cli/formulaText';
 import { evaluateFormulas } from '../../src/cli/evalCommand';
 import { recalcWorkbook } from '../../src/cli/recalcCommand';
 import { nernst } from './helpers';
@@ -104,5 +104,23 @@ describe('recalc of a workbook whose XML is written as a spreadsheet program wri
   test('a shared formula with a capital-E constant, master and follower', () => {
     expect(value('B3')).toBe(2000);
     expect(value('B4')).toBe(3000);
+  });
+});
+
+describe('slideFormula (shared formulas: the text of each follower)', () => {
+  // Expected texts written by hand: relative references move by the follower's offset
+  // (two rows down, one column right here); absolute parts, text and function names stay.
+  const from = { row: 1, col: 1 };
+  const to = { row: 3, col: 2 };
+  test.each([
+    ['A2*2', 'B4*2'],
+    ['$A$1+A$1+$A1', '$A$1+B$1+$A3'],
+    ['ECHEM.POTENTIAL("Cu2+ + 2e- = Cu","Cu2+",A2)', 'ECHEM.POTENTIAL("Cu2+ + 2e- = Cu","Cu2+",B4)'],
+    ['Potentials!$A$2:$D$3', 'Potentials!$A$2:$D$3'],
+    ["'Case data'!A2:B2&\"A1\"", "'Case data'!B4:C4&\"A1\""],
+    ['LOG10(A2)', 'LOG10(B4)'],
+    ['"say ""A1"""&C5', '"say ""A1"""&D7'],
+  ])('%s → %s', (master, follower) => {
+    expect(slideFormula(master, from, to)).toBe(follower);
   });
 });
