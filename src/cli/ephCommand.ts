@@ -5,7 +5,7 @@
  */
 import * as fs from 'node:fs';
 import * as path from 'node:path';
-import { parseArgs } from 'node:util';
+import { readCommandLine } from './commandLine';
 import {
   defaultEphWindow,
   EPH_CAUTION,
@@ -74,9 +74,11 @@ function fmt(x: number): string {
 
 /** Runs `potentia eph`; returns the exit code. Engine errors become usage errors (exit 2). */
 export function ephCommand(argv: string[], io: Io): number {
-  const { values, positionals } = parseArgs({
-    args: argv,
-    options: {
+  const line = readCommandLine(
+    argv,
+    io,
+    EPH_USAGE,
+    {
       activity: { type: 'string' },
       temp: { type: 'string' },
       'ph-min': { type: 'string' },
@@ -85,15 +87,11 @@ export function ephCommand(argv: string[], io: Io): number {
       svg: { type: 'string' },
       csv: { type: 'string' },
       force: { type: 'boolean', short: 'f', default: false },
-      help: { type: 'boolean', short: 'h', default: false },
     },
-    allowPositionals: true,
-    strict: true,
-  });
-  if (values.help) {
-    io.out(EPH_USAGE);
-    return EXIT_OK;
-  }
+    true,
+  );
+  if (line === null) return EXIT_OK;
+  const { values, positionals } = line;
   if (positionals.length !== 1) {
     throw new UsageError(
       positionals.length === 0

@@ -5,7 +5,7 @@
  * Each formula is placed in cell A1 of a sheet of its own and computed exactly as
  * `potentia recalc` computes a workbook cell, so both commands give the same numbers.
  */
-import { parseArgs } from 'node:util';
+import { FLAG, readCommandLine } from './commandLine';
 import { HyperFormula } from 'hyperformula';
 import type { CellValue as HfCellValue } from 'hyperformula';
 import { echemFunctionNames, HF_CONFIG, registerEchemFunctions } from './echemPlugin';
@@ -140,24 +140,19 @@ export function formatResult(r: EvalResult): string {
 }
 
 export function evalCommand(argv: string[], io: Io): number {
-  const { values, positionals } = parseArgs({
-    args: argv,
-    options: {
-      json: { type: 'boolean', default: false },
-      full: { type: 'boolean', default: false },
-      'allow-errors': { type: 'boolean', default: false },
-      help: { type: 'boolean', short: 'h', default: false },
+  const line = readCommandLine(
+    argv,
+    io,
+    EVAL_USAGE,
+    {
+      json: FLAG,
+      full: FLAG,
+      'allow-errors': FLAG,
     },
-    allowPositionals: true,
-    strict: true,
-  });
-  if (values.help) {
-    io.out(EVAL_USAGE);
-    return EXIT_OK;
-  }
-  if (positionals.length === 0) {
-    throw new UsageError('eval needs at least one formula, e.g. npx potentia eval "=ECHEM.NERNSTSLOPE(25)"');
-  }
+    'eval needs at least one formula, e.g. npx potentia eval "=ECHEM.NERNSTSLOPE(25)"',
+  );
+  if (line === null) return EXIT_OK;
+  const { values, positionals } = line;
   const empty = positionals.findIndex((p) => p.trim() === '' || p.trim() === '=');
   if (empty >= 0) throw new UsageError(`formula ${empty + 1} is empty`);
 

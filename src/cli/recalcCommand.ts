@@ -8,7 +8,7 @@
  */
 import * as fs from 'node:fs';
 import * as path from 'node:path';
-import { parseArgs } from 'node:util';
+import { FLAG, readCommandLine } from './commandLine';
 import ExcelJS from 'exceljs';
 import cliProgress from 'cli-progress';
 import { echemFunctionNames } from './echemPlugin';
@@ -368,29 +368,24 @@ export function expandInputs(positionals: readonly string[]): { inputs: string[]
 }
 
 export async function recalcCommand(argv: string[], io: Io): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: argv,
-    options: {
+  const line = readCommandLine(
+    argv,
+    io,
+    RECALC_USAGE,
+    {
       output: { type: 'string', short: 'o' },
       force: { type: 'boolean', short: 'f', default: false },
-      'allow-errors': { type: 'boolean', default: false },
+      'allow-errors': FLAG,
       'max-size': { type: 'string' },
       'max-cells': { type: 'string' },
       jobs: { type: 'string', short: 'j' },
-      progress: { type: 'boolean', default: false },
-      'no-progress': { type: 'boolean', default: false },
-      help: { type: 'boolean', short: 'h', default: false },
+      progress: FLAG,
+      'no-progress': FLAG,
     },
-    allowPositionals: true,
-    strict: true,
-  });
-  if (values.help) {
-    io.out(RECALC_USAGE);
-    return EXIT_OK;
-  }
-  if (positionals.length === 0) {
-    throw new UsageError('recalc needs the workbook to recalculate, e.g. npx potentia recalc plant.xlsx');
-  }
+    'recalc needs the workbook to recalculate, e.g. npx potentia recalc plant.xlsx',
+  );
+  if (line === null) return EXIT_OK;
+  const { values, positionals } = line;
   const options: RecalcOptions = {
     force: values.force,
     allowErrors: values['allow-errors'],

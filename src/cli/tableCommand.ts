@@ -2,7 +2,7 @@
  * `potentia table [--csv]`: prints the built-in table of standard reduction potentials,
  * as aligned columns or as CSV (RFC 4180 quoting).
  */
-import { parseArgs } from 'node:util';
+import { FLAG, readCommandLine } from './commandLine';
 import { BUILTIN_POTENTIALS } from '../engine/index';
 import type { BuiltinPotentialRow } from '../engine/index';
 import { EXIT_OK } from './io';
@@ -72,19 +72,17 @@ export function toAligned(rows: readonly (readonly string[])[]): string {
 }
 
 export function tableCommand(argv: string[], io: Io): number {
-  const { values } = parseArgs({
-    args: argv,
-    options: {
-      csv: { type: 'boolean', default: false },
-      help: { type: 'boolean', short: 'h', default: false },
+  const line = readCommandLine(
+    argv,
+    io,
+    TABLE_USAGE,
+    {
+      csv: FLAG,
     },
-    allowPositionals: false,
-    strict: true,
-  });
-  if (values.help) {
-    io.out(TABLE_USAGE);
-    return EXIT_OK;
-  }
+    false,
+  );
+  if (line === null) return EXIT_OK;
+  const { values } = line;
   const rows = tableRows();
   io.out(values.csv ? toCsv(rows) : toAligned(rows));
   return EXIT_OK;
