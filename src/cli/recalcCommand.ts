@@ -478,34 +478,26 @@ function runInWorker(
   return new Promise((resolve) => {
     const worker = new Worker(script, { workerData: { input, output, options } });
     let settled = false;
-    worker.once('message', (r: BatchResult) => {
+    // the first of message, error and exit settles the batch; an error or an exit without a
+    // message is an internal failure of that workbook's worker
+    const settle = (r: BatchResult): void => {
+      if (settled) return;
       settled = true;
       resolve(r);
+    };
+    const failed = (err: string): BatchResult => ({
+      input,
+      code: EXIT_INTERNAL,
+      out: '',
+      err,
+      formulas: 0,
+      errors: 0,
     });
-    worker.once('error', (e) => {
-      if (settled) return;
-      settled = true;
-      resolve({
-        input,
-        code: EXIT_INTERNAL,
-        out: '',
-        err: `potentia: internal error: ${e.message}\n`,
-        formulas: 0,
-        errors: 0,
-      });
-    });
-    worker.once('exit', (code) => {
-      if (settled) return;
-      settled = true;
-      resolve({
-        input,
-        code: EXIT_INTERNAL,
-        out: '',
-        err: `potentia: the worker for ${input} stopped (exit ${code})\n`,
-        formulas: 0,
-        errors: 0,
-      });
-    });
+    worker.once('message', (r: BatchResult) => settle(r));
+    worker.once('error', (e) => settle(failed(`potentia: internal error: ${e.message}\n`)));
+    worker.once('exit', (code) =>
+      settle(failed(`potentia: the worker for ${input} stopped (exit ${code})\n`)),
+    );
   });
 }
 

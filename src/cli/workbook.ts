@@ -23,6 +23,7 @@ import { explainError, isHfError, spillSize } from './engineValues';
 import type { HfErrorValue } from './engineValues';
 import { formulaForEngine, slideFormula } from './formulaText';
 import { UsageError } from './io';
+import { columnLetters as engineColumnLetters } from '../engine';
 import { DEFAULT_MAX_CELLS, ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
 
 /** How a formula is stored in the file. */
@@ -40,6 +41,27 @@ export interface FormulaCell {
   kind: FormulaKind;
   /** The range of an array formula as stored, e.g. "F5:F16". */
   ref?: string;
+}
+
+/**
+ * The record of one formula cell, as both loading paths (the spreadsheet model and the
+ * package's XML) make it: `ref` is kept for an array formula only.
+ *
+ * @example
+ * formulaCell('Cells', 0, 4, 2, 'ECHEM.POTENTIAL(A5)', 'single').col // 2
+ */
+export function formulaCell(
+  sheet: string,
+  sheetIndex: number,
+  row: number,
+  col: number,
+  formula: string,
+  kind: FormulaKind,
+  ref?: string,
+): FormulaCell {
+  return kind === 'array' && ref
+    ? { sheet, sheetIndex, row, col, formula, kind, ref }
+    : { sheet, sheetIndex, row, col, formula, kind };
 }
 
 /** A workbook ready for HyperFormula. */
@@ -78,16 +100,9 @@ interface FormulaModel {
   result?: unknown;
 }
 
-/** A1 column letters for a 0-based column. */
+/** A1 column letters for a 0-based column (the engine's rule counts columns from 1). */
 export function columnLetters(col: number): string {
-  let n = col + 1;
-  let s = '';
-  while (n > 0) {
-    const m = (n - 1) % 26;
-    s = String.fromCharCode(65 + m) + s;
-    n = Math.floor((n - 1) / 26);
-  }
-  return s;
+  return engineColumnLetters(col + 1);
 }
 
 /** "C5" for 0-based row 4, column 2. */
@@ -105,7 +120,9 @@ export function parseA1(text: string): { row: number; col: number } | undefined 
 }
 
 /** The corners (0-based) of an A1 range ("B2:D9", or one cell), or undefined. */
-export function parseRange(ref: string): { top: number; left: number; bottom: number; right: number } | undefined {
+export function parseRange(
+  ref: string,
+): { top: number; left: number; bottom: number; right: number } | undefined {
   const [from, to] = ref.split(':');
   const a = from === undefined ? undefined : parseA1(from);
   const b = to === undefined ? a : parseA1(to);
@@ -150,10 +167,17 @@ function valueForEngine(v: ExcelJS.CellValue): RawCellContent {
  * The formula of a shared-formula follower (0-based row, column), from its master's text:
  * string literals untouched (ExcelJS's own translation also moves "Cu2" inside text).
  */
-function followerFormula(ws: ExcelJS.Worksheet, master: string, row: number, col: number): string | undefined {
+function followerFormula(
+  ws: ExcelJS.Worksheet,
+  master: string,
+  row: number,
+  col: number,
+): string | undefined {
   const at = parseA1(master);
   const text = at === undefined ? undefined : ws.getCell(at.row + 1, at.col + 1).formula;
-  return at === undefined || typeof text !== 'string' || text === '' ? undefined : slideFormula(text, at, { row, col });
+  return at === undefined || typeof text !== 'string' || text === ''
+    ? undefined
+    : slideFormula(text, at, { row, col });
 }
 
 /**
@@ -236,7 +260,8 @@ export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MA
         if (cell.type === ExcelJS.ValueType.Merge) return;
         if (cell.type === ExcelJS.ValueType.Formula) {
           const m = cell.value as FormulaModel;
-          const text = m.sharedFormula === undefined ? cell.formula : followerFormula(ws, m.sharedFormula, r, c);
+          const text =
+            m.sharedFormula === undefined ? cell.formula : followerFormula(ws, m.sharedFormula, r, c);
           if (typeof text !== 'string' || text === '') {
             // A shared-formula follower whose master is missing: keep the cached value.
             put(r, c, valueForEngine(cell.result as ExcelJS.CellValue));
@@ -246,15 +271,7 @@ export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MA
           if (m.shareType === 'array') kind = 'array';
           else if (m.sharedFormula !== undefined) kind = 'shared';
           else if (m.shareType === 'shared') kind = 'shared-master';
-          formulas.push({
-            sheet: name,
-            sheetIndex,
-            row: r,
-            col: c,
-            formula: text,
-            kind,
-            ...(kind === 'array' && m.ref ? { ref: m.ref } : {}),
-          });
+          formulas.push(formulaCell(name, sheetIndex, r, c, text, kind, m.ref));
           put(r, c, formulaForEngine(text));
           return;
         }
@@ -322,8 +339,17 @@ function withOrigin(v: HfErrorValue, f: FormulaCell, echemNames: readonly string
 }
 
 /** The report of a formula cell that computed to an error. */
-export function errorReport(value: HfErrorValue, f: FormulaCell, echemNames: readonly string[]): CellErrorReport {
-  return { sheet: f.sheet, cell: a1(f.row, f.col), code: value.value, message: withOrigin(value, f, echemNames) };
+export function errorReport(
+  value: HfErrorValue,
+  f: FormulaCell,
+  echemNames: readonly string[],
+): CellErrorReport {
+  return {
+    sheet: f.sheet,
+    cell: a1(f.row, f.col),
+    code: value.value,
+    message: withOrigin(value, f, echemNames),
+  };
 }
 
 /**

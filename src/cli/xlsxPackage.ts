@@ -38,8 +38,8 @@ import {
   parseRange,
   resultForFile,
 } from './workbook';
+import { formulaCell } from './workbook';
 import type { FormulaCell, FormulaKind, LoadedWorkbook, RecalcSummary } from './workbook';
-
 
 /** One sheet of the package: its name, part name and XML. */
 interface PackageSheet {
@@ -162,7 +162,12 @@ function sharedStrings(parts: Map<string, Buffer>, workbookRels: string | undefi
 const EXCEL_EPOCH_MS = Date.UTC(1899, 11, 30);
 
 /** A stored value (not a formula) as the engine's raw content, as workbook.ts reads it. */
-function storedValue(t: string | undefined, v: string | undefined, inner: string, strings: string[]): RawCellContent {
+function storedValue(
+  t: string | undefined,
+  v: string | undefined,
+  inner: string,
+  strings: string[],
+): RawCellContent {
   switch (t) {
     case 's': {
       const s = v === undefined ? undefined : strings[Number(v)];
@@ -182,7 +187,8 @@ function storedValue(t: string | undefined, v: string | undefined, inner: string
       return ERROR_LITERALS.has(code) ? code : '#VALUE!';
     }
     case 'd': {
-      const ms = v === undefined ? NaN : Date.parse(v.endsWith('Z') || /[+-]\d\d:\d\d$/.test(v) ? v : `${v}Z`);
+      const ms =
+        v === undefined ? NaN : Date.parse(v.endsWith('Z') || /[+-]\d\d:\d\d$/.test(v) ? v : `${v}Z`);
       return Number.isFinite(ms) ? (ms - EXCEL_EPOCH_MS) / 86400000 : null;
     }
     default: {
@@ -203,7 +209,10 @@ const ROW_RX = /<row\b([^>]*?)(\/?)>/g;
  *
  * @throws UsageError for a sheet larger than the engine holds or a damaged array range
  */
-export function loadPackage(pkg: XlsxPackage, maxCells: number = DEFAULT_MAX_CELLS): PackageWorkbook | undefined {
+export function loadPackage(
+  pkg: XlsxPackage,
+  maxCells: number = DEFAULT_MAX_CELLS,
+): PackageWorkbook | undefined {
   const strings = sharedStrings(pkg.parts, takePart(pkg.parts, 'xl/_rels/workbook.xml.rels'));
   const sheetNames: string[] = [];
   const sheets: Record<string, RawCellContent[][]> = {};
@@ -284,7 +293,8 @@ export function loadPackage(pkg: XlsxPackage, maxCells: number = DEFAULT_MAX_CEL
       if (at === undefined) return undefined;
       const r = at.row;
       const c = at.col;
-      if (r + 1 > lastRow || c + 1 > ENGINE_MAX_COLUMNS) checkSheetSize(name, Math.max(lastRow, r + 1), c + 1);
+      if (r + 1 > lastRow || c + 1 > ENGINE_MAX_COLUMNS)
+        checkSheetSize(name, Math.max(lastRow, r + 1), c + 1);
       if (skip.size > 0 && skip.has(key(r, c))) continue;
       const t = attr(attrs, 't');
       const vm = inner.includes('<v') ? /<v\b[^>]*?(?:\/>|>([\s\S]*?)<\/v>)/.exec(inner) : null;
@@ -319,15 +329,7 @@ export function loadPackage(pkg: XlsxPackage, maxCells: number = DEFAULT_MAX_CEL
         if (content !== null) put(r, c, content);
         continue;
       }
-      formulas.push({
-        sheet: name,
-        sheetIndex,
-        row: r,
-        col: c,
-        formula: text,
-        kind,
-        ...(kind === 'array' && ref !== undefined ? { ref } : {}),
-      });
+      formulas.push(formulaCell(name, sheetIndex, r, c, text, kind, ref));
       starts.push(m.index);
       ends.push(m.index + m[0].length);
       put(r, c, formulaForEngine(text));
@@ -366,12 +368,19 @@ function splitRanges(text: string): string[] {
     const bang = p.lastIndexOf('!');
     if (bang <= 0) return false;
     const [from, to, more] = p.slice(bang + 1).split(':');
-    return more === undefined && from !== undefined && parseA1(from) !== undefined && (to === undefined || parseA1(to) !== undefined);
+    return (
+      more === undefined &&
+      from !== undefined &&
+      parseA1(from) !== undefined &&
+      (to === undefined || parseA1(to) !== undefined)
+    );
   });
 }
 
 function escapeXml(s: string): string {
-  return s.replace(/[&<>"]/g, (ch) => (ch === '&' ? '&amp;' : ch === '<' ? '&lt;' : ch === '>' ? '&gt;' : '&quot;'));
+  return s.replace(/[&<>"]/g, (ch) =>
+    ch === '&' ? '&amp;' : ch === '<' ? '&lt;' : ch === '>' ? '&gt;' : '&quot;',
+  );
 }
 
 /** A formula cell's element (as stored) with its computed value cached instead of the old one. */

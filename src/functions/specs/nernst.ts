@@ -284,6 +284,19 @@ function nernstCases(call: CallArgs, quantity: Quantity): Result {
   return out;
 }
 
+/**
+ * The three paths of a Nernst-family function computing `quantity`: the catalogue's fast path
+ * for repeated calls, the host path on Excel's raw arguments (a species and values row, then a
+ * cell diagram with inline activities), and the general path with every check and message.
+ */
+function nernstPaths(quantity: Quantity): Pick<FunctionSpec, 'fast' | 'host' | 'run'> {
+  return {
+    fast: (args) => fastNernst(args, quantity),
+    host: (args) => hostNernst(args, quantity) ?? hostDiagram(args, quantity),
+    run: (call) => nernstCases(call, quantity),
+  };
+}
+
 const POTENTIAL: FunctionSpec = {
   id: 'POTENTIAL',
   ...NERNST,
@@ -310,9 +323,7 @@ const POTENTIAL: FunctionSpec = {
       source: `E°(O2/H2O) = −ΔfG°(H2O, l)/(2F) = 237.129 kJ/mol / 2F = 1.228834 V (NBS 1982, from memory; OpenStax Appendix L prints 1.229); ${DERIVED}`,
     },
   ],
-  fast: (args) => fastNernst(args, 'potential'),
-  host: (args) => hostNernst(args, 'potential') ?? hostDiagram(args, 'potential'),
-  run: (call) => nernstCases(call, 'potential'),
+  ...nernstPaths('potential'),
 };
 
 const STDPOTENTIAL: FunctionSpec = {
@@ -377,9 +388,7 @@ const LOGQ: FunctionSpec = {
       source: 'derived by hand: log10(0.1/0.01)',
     },
   ],
-  fast: (args) => fastNernst(args, 'log10Q'),
-  host: (args) => hostNernst(args, 'log10Q') ?? hostDiagram(args, 'log10Q'),
-  run: (call) => nernstCases(call, 'log10Q'),
+  ...nernstPaths('log10Q'),
 };
 
 const CELLNOTATION: FunctionSpec = {
