@@ -18,7 +18,7 @@ import {
 import { DEBYE_HUCKEL_TABLE, KIELLAND_ION_SIZES } from '../../src/engine/data/activityData';
 import { type EngineErrorKind } from '../../src/engine/errors';
 import { formatSpecies, parseSpecies } from '../../src/engine/notation/species';
-import { engineErrorOf } from '../support';
+import { engineErrorOf, waterDensityKgM3, waterPermittivity } from '../support';
 
 /** Runs `f` and returns the EngineError it throws (fails the test otherwise). */
 
@@ -77,15 +77,8 @@ describe('Debye–Hückel constants', () => {
   // Maryott, J. Res. NBS 56, 1 (1956): ε = 87.740 − 0.40008 t + 9.398e-4 t² − 1.410e-6 t³, from
   // memory) and its density (Kell 1975, from memory), A ∝ √ρ/(εT)^1.5, B ∝ √(ρ/(εT)), scaled
   // to the published 60 °C row (Freeze & Cherry 1979, seen).
-  const eps = (t: number): number => 87.74 - 0.40008 * t + 9.398e-4 * t * t - 1.41e-6 * t ** 3;
-  const rho = (t: number): number =>
-    (999.83952 +
-      16.945176 * t -
-      7.9870401e-3 * t * t -
-      46.170461e-6 * t ** 3 +
-      105.56302e-9 * t ** 4 -
-      280.54253e-12 * t ** 5) /
-    (1 + 16.87985e-3 * t);
+  const eps = waterPermittivity;
+  const rho = waterDensityKgM3;
   const aShape = (t: number): number => Math.sqrt(rho(t)) / Math.pow(eps(t) * (t + 273.15), 1.5);
   const bShape = (t: number): number => Math.sqrt(rho(t) / (eps(t) * (t + 273.15)));
   it.each([[70], [80], [90], [100], [85]])('at %d °C: A and B from ε(T) and ρ(T) (derived)', (t) => {

@@ -14,7 +14,7 @@ import {
   pitzerOsmoticCoefficient,
   PITZER_BINARY,
 } from '../../src/engine';
-import { engineErrorOf } from '../support';
+import { NA, engineErrorOf, waterDensityKgM3, waterPermittivity } from '../support';
 
 // Robinson & Stokes, Electrolyte Solutions, 2nd ed. (1959), Appendix 8.10, γ± at 25 °C
 // (from memory). Tolerances are relative (fraction of γ±) and state the model's accuracy
@@ -207,16 +207,8 @@ describe('A_φ(T)', () => {
   it.each([[0], [25], [50], [75], [100]])(
     'at %d °C agrees with the Debye–Hückel A_φ from ε(T), ρ(T) (derived)',
     (t) => {
-      const eps = 87.74 - 0.40008 * t + 9.398e-4 * t * t - 1.41e-6 * t ** 3;
-      const rho =
-        (999.83952 +
-          16.945176 * t -
-          7.9870401e-3 * t * t -
-          46.170461e-6 * t ** 3 +
-          105.56302e-9 * t ** 4 -
-          280.54253e-12 * t ** 5) /
-        (1 + 16.87985e-3 * t);
-      const NA = 6.02214076e23;
+      const eps = waterPermittivity(t);
+      const rho = waterDensityKgM3(t);
       const e = 1.602176634e-19;
       const k = 1.380649e-23;
       const e0 = 8.8541878128e-12; // CODATA 2018
