@@ -8,7 +8,8 @@ import { PartialWriteError, splitRangeRef, writeNewSheet } from '../../src/taskp
 import { planPotentialsSheet, POTENTIALS_HEADER } from '../../src/taskpane/potentialsSheet';
 import { planExampleSheet } from '../../src/taskpane/reference';
 import { runReported, type StatusKind } from '../../src/taskpane/status';
-import { planSweep, readSweepForm, sweepSheetPlan, type SweepForm } from '../../src/taskpane/sweepPlan';
+import { planSweep, sweepSheetPlan, type SweepForm } from '../../src/taskpane/sweepPlan';
+import { input } from './sweepFixtures';
 import { createExcelMock, installExcel, officeError, seriesOf, uninstallExcel } from './excelMock';
 
 afterEach(() => uninstallExcel());
@@ -18,21 +19,9 @@ function recorder() {
   return { lines, sink: { show: (kind: StatusKind, text: string) => lines.push({ kind, text }) } };
 }
 
-const copperSweep: SweepForm = {
-  reaction: 'Cu2+/Cu',
-  variable: { kind: 'activity', species: 'Cu2+', scale: 'log' },
-  from: '1e-6',
-  to: '1',
-  points: '25',
-  tempC: '25',
-  species: [{ name: 'Cu2+', value: '1' }],
-  table: '',
-};
-
-function sweepLayout(form: SweepForm) {
-  const r = readSweepForm(form);
-  if (!r.ok) throw new Error(r.errors.map((e) => e.message).join('; '));
-  return planSweep(r.input);
+/** The case-series fixture's form (Cu2+/Cu, 25 log points) with any field replaced, planned. */
+function sweepLayout(over: Partial<SweepForm> = {}) {
+  return planSweep(input(over));
 }
 
 describe('insert potentials sheet', () => {
@@ -119,7 +108,7 @@ describe('build sweep sheet', () => {
   test('writes the case table, the LOG10 column, ONE spilled POTENTIAL formula and an XY scatter chart', async () => {
     const mock = createExcelMock(['Sheet1']);
     installExcel(mock);
-    const layout = sweepLayout(copperSweep);
+    const layout = sweepLayout();
     const plan = await writeNewSheet((existing) => sweepSheetPlan(layout, existing));
     expect(plan.sheetName).toBe('E vs log a(Cu2+)');
     const name = plan.sheetName;
@@ -265,7 +254,7 @@ describe('Office failures reach the user', () => {
     });
     installExcel(mock);
     const { lines, sink } = recorder();
-    const layout = sweepLayout(copperSweep);
+    const layout = sweepLayout();
     await runReported(
       'Building the sweep sheet',
       () => writeNewSheet((e) => sweepSheetPlan(layout, e)),
@@ -285,7 +274,7 @@ describe('Office failures reach the user', () => {
     const cause = officeError('InvalidArgument', 'bad', 'Chart.setPosition');
     const mock = createExcelMock([], { syncRejects: { nth: 3, error: cause } });
     installExcel(mock);
-    const layout = sweepLayout(copperSweep);
+    const layout = sweepLayout();
     const error = await writeNewSheet((e) => sweepSheetPlan(layout, e)).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(PartialWriteError);
     expect((error as PartialWriteError).cause).toBe(cause);
