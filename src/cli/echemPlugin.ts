@@ -43,6 +43,7 @@ import type {
 import { CATALOGUE, isCellError, isPerCase, kindOf } from '../functions/catalogue';
 import type { Arg, ErrorCode, FunctionSpec, Grid, Result, ResultCell, Scalar } from '../functions/catalogue';
 import { ENGINE_MAX_COLUMNS, ENGINE_MAX_ROWS } from './limits';
+import { leanEngineMemory } from './engineMemory';
 import { indexGraphEdges } from './graphEdges';
 import { isFiniteColumn } from '../engine';
 
@@ -285,7 +286,8 @@ export class EchemPlugin extends FunctionPlugin {
       );
     }
     // A column the kernel reports all finite numbers is already HyperFormula's shape: no copy.
-    if (width === 1 && isFiniteColumn(result)) return SimpleRangeValue.onlyValues(result as InternalScalarValue[][]);
+    if (width === 1 && isFiniteColumn(result))
+      return SimpleRangeValue.onlyValues(result as InternalScalarValue[][]);
     const rows: InternalScalarValue[][] = [];
     for (let r = 0; r < height; r++) {
       const src = result[r] ?? [];
@@ -395,12 +397,15 @@ function buildImplementedFunctions(): ImplementedFunctions {
 let registered = false;
 
 /**
- * Registers the ECHEM functions with HyperFormula (once per process), and indexes its
- * dependency graph's edges (graphEdges.ts) so that large workbooks load in linear time.
+ * Registers the ECHEM functions with HyperFormula (once per process), indexes its
+ * dependency graph's edges (graphEdges.ts) so that large workbooks load in linear time, and
+ * lets formulas of one shape share their tree and ranges make their caches on first use
+ * (engineMemory.ts).
  */
 export function registerEchemFunctions(): void {
   if (registered) return;
   indexGraphEdges();
+  leanEngineMemory();
   const names: Record<string, string> = {};
   for (const name of echemFunctionNames()) names[name] = name;
   HyperFormula.registerFunctionPlugin(EchemPlugin, { enGB: names, enUS: names });

@@ -6,7 +6,9 @@
  * (a table of potentials, a header row: `$A$1:$B$1`, `Potentials!$A$2:$D$3`) costs O(n²) to
  * load: 60 % of the runner's time at 100,000 formulas, 5·10⁹ comparisons. This module keeps,
  * beside every edge array of 32 entries or more, a Set of the same ids, so that the check is
- * O(1); the arrays themselves (what the rest of HyperFormula reads) are unchanged.
+ * O(1); the arrays themselves (what the rest of HyperFormula reads) hold the same ids. A
+ * shorter array is searched as before and, when an id is added, replaced by an exact-size copy
+ * (a pushed array keeps room for 17 ids, 120 bytes a vertex where most hold one or two).
  *
  * The Set always holds exactly the ids of its array: the graph changes an edge array only in
  * `addEdge` (push), `removeEdge` and `removeEdgeIfExists` (delete one entry), all three wrapped
@@ -75,9 +77,17 @@ export function indexGraphEdges(): boolean {
     const fromId = this.getNodeIdIfNotNumber(from);
     const toId = this.getNodeIdIfNotNumber(to);
     const edges = fromId === undefined ? undefined : this.edgesSparseArray[fromId];
-    // Short arrays, and every case HyperFormula reports as an error, go the original way.
-    if (edges === undefined || toId === undefined || edges.length < INDEXED_EDGES_FROM) {
+    // Every case HyperFormula reports as an error goes the original way.
+    if (edges === undefined || toId === undefined || fromId === undefined) {
       addEdge.call(this, from, to);
+      return;
+    }
+    if (edges.length < INDEXED_EDGES_FROM) {
+      // A short array is searched as HyperFormula does, and replaced by an exact-size copy
+      // with the new id: `push` would give it room for 17 ids, and most vertices keep one or
+      // two (about 120 bytes saved per vertex; HyperFormula itself replaces these arrays in
+      // `fixEdgesArrayForNode`).
+      if (!edges.includes(toId)) this.edgesSparseArray[fromId] = edges.concat(toId);
       return;
     }
     const set = indexOf(edges);
