@@ -13,7 +13,7 @@
  * readers that do not calculate. Excel also recalculates any file saved by an older
  * calculation engine (a lower `calcId`) on open.
  */
-import JSZip from 'jszip';
+import { jsZip } from './excelModel';
 
 const MAIN_NS = 'http://schemas.openxmlformats.org/spreadsheetml/2006/main';
 const METADATA_REL = 'http://schemas.openxmlformats.org/officeDocument/2006/relationships/sheetMetadata';
@@ -73,7 +73,7 @@ export function sheetParts(workbookXml: string, relsXml: string): Map<string, st
  * formula are marked.
  */
 export async function withDynamicArrays(data: Uint8Array, anchors: SpillAnchors): Promise<Uint8Array> {
-  const zip = await JSZip.loadAsync(data);
+  const zip = await jsZip().loadAsync(data);
   const workbookXml = await zip.file('xl/workbook.xml')?.async('string');
   const relsXml = await zip.file('xl/_rels/workbook.xml.rels')?.async('string');
   const typesXml = await zip.file('[Content_Types].xml')?.async('string');

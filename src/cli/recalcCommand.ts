@@ -9,7 +9,8 @@
 import * as fs from 'node:fs';
 import * as path from 'node:path';
 import { FLAG, readCommandLine } from './commandLine';
-import ExcelJS from 'exceljs';
+import type ExcelJS from 'exceljs';
+import { excelJs } from './excelModel';
 import cliProgress from 'cli-progress';
 import { echemFunctionNames } from './echemPlugin';
 import * as os from 'node:os';
@@ -112,7 +113,7 @@ export function readWorkbookBytes(file: string, limits: ReadLimits = DEFAULT_LIM
 
 /** The ExcelJS model of an .xlsx file's bytes, its failures turned into a clear message. */
 async function workbookFromBytes(file: string, data: Buffer): Promise<ExcelJS.Workbook> {
-  const wb = new ExcelJS.Workbook();
+  const wb = new (excelJs().Workbook)();
   try {
     await wb.xlsx.load(data as unknown as ExcelJS.Buffer);
   } catch (e) {
@@ -284,11 +285,12 @@ export async function recalcFile(
 }
 
 function countFormulas(wb: ExcelJS.Workbook): number {
+  const { ValueType } = excelJs();
   let formulaCount = 0;
   wb.eachSheet((ws) =>
     ws.eachRow((row) =>
       row.eachCell((cell) => {
-        if (cell.type === ExcelJS.ValueType.Formula) formulaCount++;
+        if (cell.type === ValueType.Formula) formulaCount++;
       }),
     ),
   );
@@ -308,7 +310,7 @@ export function recalcPackage(
   const pkg = openPackage(read.data, read.contents);
   const loaded = pkg === undefined ? undefined : loadPackage(pkg, maxCells);
   if (pkg === undefined || loaded === undefined || loaded.needsModel) return undefined;
-  const progress = startProgress?.(loaded.formulas.length);
+  const progress = startProgress?.(loaded.places.row.length);
   progress?.phase('computing', 1);
   const { hf, warnings } = buildEngine(loaded);
   loaded.sheets = {}; // the engine holds its own copy

@@ -15,7 +15,8 @@
  * with the spilled values in the cells of that range, and then marked as a dynamic array
  * (dynamicArrays.ts) when the file is saved.
  */
-import ExcelJS from 'exceljs';
+import type ExcelJS from 'exceljs';
+import { excelJs } from './excelModel';
 import { HyperFormula } from 'hyperformula';
 import type { CellValue as HfCellValue, RawCellContent } from 'hyperformula';
 import { HF_CONFIG, registerEchemFunctions } from './echemPlugin';
@@ -42,6 +43,9 @@ export interface FormulaCell {
   /** The range of an array formula as stored, e.g. "F5:F16". */
   ref?: string;
 }
+
+/** Where a formula cell is: its sheet's name and its 0-based row and column. */
+export type FormulaAt = Pick<FormulaCell, 'sheet' | 'row' | 'col'>;
 
 /**
  * The record of one formula cell, as both loading paths (the spreadsheet model and the
@@ -210,6 +214,7 @@ export function checkSheetSize(name: string, lastRow: number, lastColumn: number
  *   formula whose range is larger than any data
  */
 export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MAX_CELLS): LoadedWorkbook {
+  const { ValueType } = excelJs();
   const sheetNames: string[] = [];
   const sheets: Record<string, RawCellContent[][]> = {};
   const formulas: FormulaCell[] = [];
@@ -231,7 +236,7 @@ export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MA
     ws.eachRow({ includeEmpty: false }, (row) => {
       row.eachCell({ includeEmpty: false }, (cell) => {
         const m = cell.value as FormulaModel | null;
-        if (cell.type === ExcelJS.ValueType.Formula && m && m.shareType === 'array' && m.ref) {
+        if (cell.type === ValueType.Formula && m && m.shareType === 'array' && m.ref) {
           const rg = parseRange(m.ref);
           if (!rg) return;
           const area = (rg.bottom - rg.top + 1) * (rg.right - rg.left + 1);
@@ -257,8 +262,8 @@ export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MA
         const c = Number(cell.col) - 1;
         if (covered.has(`${r},${c}`)) return;
         // The followers of a merged range repeat the first cell's value: they are empty.
-        if (cell.type === ExcelJS.ValueType.Merge) return;
-        if (cell.type === ExcelJS.ValueType.Formula) {
+        if (cell.type === ValueType.Merge) return;
+        if (cell.type === ValueType.Formula) {
           const m = cell.value as FormulaModel;
           const text =
             m.sharedFormula === undefined ? cell.formula : followerFormula(ws, m.sharedFormula, r, c);
@@ -291,7 +296,10 @@ export function loadWorkbook(wb: ExcelJS.Workbook, maxCells: number = DEFAULT_MA
 }
 
 /** Builds a HyperFormula engine (with the ECHEM functions) and computes the workbook. */
-export function buildEngine(loaded: LoadedWorkbook): { hf: HyperFormula; warnings: string[] } {
+export function buildEngine(loaded: Pick<LoadedWorkbook, 'sheets' | 'names'>): {
+  hf: HyperFormula;
+  warnings: string[];
+} {
   registerEchemFunctions();
   let hf: HyperFormula;
   try {
@@ -329,7 +337,7 @@ export function resultForFile(v: HfCellValue): number | string | boolean | { err
 }
 
 /** The message of an error, naming the cell it comes from when that is another cell. */
-function withOrigin(v: HfErrorValue, f: FormulaCell, echemNames: readonly string[]): string {
+function withOrigin(v: HfErrorValue, f: FormulaAt, echemNames: readonly string[]): string {
   const message = explainError(v, echemNames);
   const origin = (v as { address?: unknown }).address;
   if (typeof origin !== 'string' || origin === '') return message;
@@ -341,7 +349,7 @@ function withOrigin(v: HfErrorValue, f: FormulaCell, echemNames: readonly string
 /** The report of a formula cell that computed to an error. */
 export function errorReport(
   value: HfErrorValue,
-  f: FormulaCell,
+  f: FormulaAt,
   echemNames: readonly string[],
 ): CellErrorReport {
   return {

@@ -38,8 +38,7 @@ import {
   parseRange,
   resultForFile,
 } from './workbook';
-import { formulaCell } from './workbook';
-import type { FormulaCell, FormulaKind, LoadedWorkbook, RecalcSummary } from './workbook';
+import type { LoadedWorkbook, RecalcSummary } from './workbook';
 
 /** One sheet of the package: its name, part name and XML. */
 interface PackageSheet {
@@ -60,11 +59,24 @@ export interface XlsxPackage {
   replaced: Map<string, Buffer>;
 }
 
+/**
+ * Where the formula cells sit, one entry per formula in the order of the sheets' XML: the
+ * sheet's index, the 0-based row and column, and where the cell's element starts and ends in
+ * its sheet's XML. Columns of numbers rather than one record per cell: at 100,000 formulas
+ * this is 4 MB instead of 18 (the formula texts are in the engine's sheets until it is built,
+ * and nothing after needs them).
+ */
+export interface FormulaPlaces {
+  sheetIndex: number[];
+  row: number[];
+  col: number[];
+  start: number[];
+  end: number[];
+}
+
 /** A workbook read from its package: the engine's sheets, and where each formula sits. */
-export interface PackageWorkbook extends LoadedWorkbook {
-  /** Where each formula cell's element starts and ends in its sheet's XML (as `formulas`). */
-  starts: number[];
-  ends: number[];
+export interface PackageWorkbook extends Pick<LoadedWorkbook, 'sheetNames' | 'sheets' | 'names'> {
+  places: FormulaPlaces;
   /** True where the model path must write the output (an array formula is stored). */
   needsModel: boolean;
 }
@@ -216,9 +228,7 @@ export function loadPackage(
   const strings = sharedStrings(pkg.parts, takePart(pkg.parts, 'xl/_rels/workbook.xml.rels'));
   const sheetNames: string[] = [];
   const sheets: Record<string, RawCellContent[][]> = {};
-  const formulas: FormulaCell[] = [];
-  const starts: number[] = [];
-  const ends: number[] = [];
+  const places: FormulaPlaces = { sheetIndex: [], row: [], col: [], start: [], end: [] };
   let needsModel = false;
 
   for (let sheetIndex = 0; sheetIndex < pkg.sheets.length; sheetIndex++) {
@@ -278,11 +288,25 @@ export function loadPackage(
       }
     }
 
+    // Each row is built in `cells` and stored as an exact-size copy when the next row
+    // starts (a pushed array keeps room for 17 cells: 100 bytes a row at 100,000 rows).
+    let cells: RawCellContent[] = [];
+    let cellsRow = -1;
+    const flush = (): void => {
+      if (cellsRow >= 0) grid[cellsRow] = cells.slice();
+      cells.length = 0;
+    };
     const put = (row: number, col: number, content: RawCellContent): void => {
-      while (grid.length <= row) grid.push([]);
-      const target = grid[row] as RawCellContent[];
-      while (target.length < col) target.push(null);
-      target[col] = content;
+      if (row !== cellsRow) {
+        flush();
+        const existing = grid[row];
+        // Cells of one row are stored together in the XML; a row seen again is merged.
+        if (existing !== undefined) cells = existing.slice();
+        while (grid.length < row) grid.push([]);
+        cellsRow = row;
+      }
+      while (cells.length < col) cells.push(null);
+      cells[col] = content;
     };
 
     CELL_RX.lastIndex = dataStart;
@@ -309,19 +333,14 @@ export function loadPackage(
       const shareType = attr(fAttrs, 't');
       const si = attr(fAttrs, 'si');
       let text = xmlText(fm[2] ?? '');
-      let kind: FormulaKind = 'single';
       const ref = attr(fAttrs, 'ref');
-      if (shareType === 'array') kind = 'array';
-      else if (shareType === 'shared' && ref !== undefined) {
+      if (shareType === 'shared' && ref !== undefined) {
         // The master of a shared formula holds its range; its followers only the group (si).
         if (si !== undefined) masters.set(si, { formula: text, row: r, col: c });
-        kind = 'shared-master';
       } else if (shareType === 'shared') {
         const master = si === undefined ? undefined : masters.get(si);
-        if (master !== undefined) {
-          if (text === '') text = slideFormula(master.formula, master, { row: r, col: c });
-          kind = 'shared';
-        }
+        if (master !== undefined && text === '')
+          text = slideFormula(master.formula, master, { row: r, col: c });
       }
       if (text === '') {
         // A formula element without text (a shared follower whose master is missing): the cached value.
@@ -329,13 +348,16 @@ export function loadPackage(
         if (content !== null) put(r, c, content);
         continue;
       }
-      formulas.push(formulaCell(name, sheetIndex, r, c, text, kind, ref));
-      starts.push(m.index);
-      ends.push(m.index + m[0].length);
+      places.sheetIndex.push(sheetIndex);
+      places.row.push(r);
+      places.col.push(c);
+      places.start.push(m.index);
+      places.end.push(m.index + m[0].length);
       put(r, c, formulaForEngine(text));
     }
+    flush();
   }
-  return { sheetNames, sheets, formulas, names: definedNames(pkg.workbookXml), starts, ends, needsModel };
+  return { sheetNames, sheets, places, names: definedNames(pkg.workbookXml), needsModel };
 }
 
 /** Defined names of one plain range ("Sheet!$A$1:$B$2"), as the model path loads them. */
@@ -383,6 +405,31 @@ function escapeXml(s: string): string {
   );
 }
 
+/**
+ * Text written as UTF-8 into buffers of 1 MiB, joined once at the end: a patched sheet is
+ * never held as one string (nor as the list of its pieces) beside its bytes.
+ */
+class Utf8Chunks {
+  private static readonly SIZE = 1 << 20;
+  private readonly full: Buffer[] = [];
+  private chunk = Buffer.allocUnsafe(Utf8Chunks.SIZE);
+  private used = 0;
+
+  write(text: string): void {
+    // At most 3 bytes per UTF-16 unit: a text that may not fit goes to a chunk of its own size.
+    if (this.used + text.length * 3 > this.chunk.length) {
+      this.full.push(this.chunk.subarray(0, this.used));
+      this.chunk = Buffer.allocUnsafe(Math.max(Utf8Chunks.SIZE, text.length * 3));
+      this.used = 0;
+    }
+    this.used += this.chunk.write(text, this.used, 'utf8');
+  }
+
+  bytes(): Buffer {
+    return Buffer.concat([...this.full, this.chunk.subarray(0, this.used)]);
+  }
+}
+
 /** A formula cell's element (as stored) with its computed value cached instead of the old one. */
 function cellXml(stored: string, value: ReturnType<typeof resultForFile>): string {
   const open = /^<c\b([^>]*?)\/?>/.exec(stored);
@@ -408,38 +455,48 @@ export function patchResults(
 ): RecalcSummary | undefined {
   if (loaded.needsModel) return undefined;
   const sheetIds = loaded.sheetNames.map((n) => hf.getSheetId(n));
-  const values: ReturnType<typeof resultForFile>[] = new Array(loaded.formulas.length);
+  const places = loaded.places;
+  const count = places.row.length;
+  const values: ReturnType<typeof resultForFile>[] = new Array(count);
   const errors: RecalcSummary['errors'] = [];
-  for (let i = 0; i < loaded.formulas.length; i++) {
-    const f = loaded.formulas[i] as FormulaCell;
-    const sheet = sheetIds[f.sheetIndex];
+  for (let i = 0; i < count; i++) {
+    const sheetIndex = places.sheetIndex[i] as number;
+    const sheet = sheetIds[sheetIndex];
     if (sheet === undefined) return undefined;
-    const address = { sheet, row: f.row, col: f.col };
+    const address = { sheet, row: places.row[i] as number, col: places.col[i] as number };
     const size = spillSize(hf, address);
     if (size.width > 1 || size.height > 1) return undefined;
     const value = hf.getCellValue(address);
-    if (isHfError(value)) errors.push(errorReport(value, f, echemNames));
+    if (isHfError(value))
+      errors.push(
+        errorReport(
+          value,
+          { sheet: loaded.sheetNames[sheetIndex] as string, row: address.row, col: address.col },
+          echemNames,
+        ),
+      );
     values[i] = resultForFile(value);
   }
   let k = 0;
   for (let s = 0; s < pkg.sheets.length; s++) {
     const sheet = pkg.sheets[s] as PackageSheet;
-    const pieces: string[] = [];
+    if (k >= count || places.sheetIndex[k] !== s) continue;
+    const out = new Utf8Chunks();
     let at = 0;
-    for (; k < loaded.formulas.length && (loaded.formulas[k] as FormulaCell).sheetIndex === s; k++) {
-      const start = loaded.starts[k] as number;
-      const end = loaded.ends[k] as number;
-      pieces.push(sheet.xml.slice(at, start), cellXml(sheet.xml.slice(start, end), values[k]));
+    for (; k < count && places.sheetIndex[k] === s; k++) {
+      const start = places.start[k] as number;
+      const end = places.end[k] as number;
+      out.write(sheet.xml.slice(at, start));
+      out.write(cellXml(sheet.xml.slice(start, end), values[k]));
       at = end;
     }
-    if (pieces.length === 0) continue;
-    pieces.push(sheet.xml.slice(at));
-    pkg.replaced.set(sheet.part, Buffer.from(pieces.join(''), 'utf8'));
+    out.write(sheet.xml.slice(at));
     sheet.xml = ''; // the text is no longer needed: free it before the package is compressed
+    pkg.replaced.set(sheet.part, out.bytes());
   }
   return {
-    formulas: loaded.formulas.length,
-    cellsComputed: loaded.formulas.length,
+    formulas: count,
+    cellsComputed: count,
     errors,
     spillAnchors: new Map(),
   };
