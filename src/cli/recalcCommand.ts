@@ -22,7 +22,7 @@ import { checkOutput, writeFileAtomically } from './safeWrite';
 import { withDynamicArrays } from './dynamicArrays';
 import type { Io } from './io';
 import { buildEngine, loadWorkbook, writeResults } from './workbook';
-import { loadPackage, openPackage, packageBytes, patchResults } from './xlsxPackage';
+import { loadPackage, openPackage, packageBytes, patchSheets, readResults } from './xlsxPackage';
 import type { RecalcSummary } from './workbook';
 
 export const RECALC_USAGE = `Usage: potentia recalc IN.xlsx [-o OUT.xlsx] [options]
@@ -314,15 +314,16 @@ export function recalcPackage(
   progress?.phase('computing', 1);
   const { hf, warnings } = buildEngine(loaded);
   loaded.sheets = {}; // the engine holds its own copy
-  let summary: RecalcSummary | undefined;
+  let results: ReturnType<typeof readResults>;
   try {
     progress?.tick(1);
-    summary = patchResults(pkg, loaded, hf, echemFunctionNames());
+    results = readResults(loaded, hf, echemFunctionNames());
   } finally {
     hf.destroy();
   }
-  if (summary === undefined) return undefined;
+  if (results === undefined) return undefined;
   progress?.phase('saving', 1);
+  const summary = patchSheets(pkg, loaded, results);
   return { summary: { ...summary, warnings }, bytes: packageBytes(pkg) };
 }
 

@@ -443,16 +443,22 @@ function cellXml(stored: string, value: ReturnType<typeof resultForFile>): strin
   return `<c${attrs} t="e">${f[0]}<v>${escapeXml(value.error)}</v></c>`;
 }
 
+/** The computed values of the formula cells (in the order of `places`), and the cells in error. */
+export interface PackageResults {
+  values: ReturnType<typeof resultForFile>[];
+  errors: RecalcSummary['errors'];
+}
+
 /**
- * Caches the computed values in the package's formula cells and returns the summary, or
- * undefined (nothing written) where a formula spills: the model path writes spills.
+ * Reads the computed value of every formula cell from the engine, or undefined where a
+ * formula spills (the model path writes spills). After this the engine is not needed: the
+ * caller can let it go before the sheets are written (`patchSheets`).
  */
-export function patchResults(
-  pkg: XlsxPackage,
+export function readResults(
   loaded: PackageWorkbook,
   hf: HyperFormula,
   echemNames: readonly string[],
-): RecalcSummary | undefined {
+): PackageResults | undefined {
   if (loaded.needsModel) return undefined;
   const sheetIds = loaded.sheetNames.map((n) => hf.getSheetId(n));
   const places = loaded.places;
@@ -477,6 +483,21 @@ export function patchResults(
       );
     values[i] = resultForFile(value);
   }
+  return { values, errors };
+}
+
+/**
+ * Caches the values in the package's formula cells (each cell's element rewritten, every
+ * other byte kept) and returns the summary.
+ */
+export function patchSheets(
+  pkg: XlsxPackage,
+  loaded: PackageWorkbook,
+  results: PackageResults,
+): RecalcSummary {
+  const { values, errors } = results;
+  const places = loaded.places;
+  const count = places.row.length;
   let k = 0;
   for (let s = 0; s < pkg.sheets.length; s++) {
     const sheet = pkg.sheets[s] as PackageSheet;
