@@ -26,12 +26,30 @@ function isNameChar(ch: string | undefined): boolean {
 }
 
 /**
+ * True where {@link rewriteFormulaText} could change the text: a `_` (a file prefix), the
+ * words TRUE or FALSE, a digit before an exponent mark, or a bare decimal point before a
+ * digit. Anything else it copies unchanged, so such a formula is returned as it is.
+ */
+const MAY_CHANGE = /_|true|false|[0-9]e|(?:^|[^A-Za-z0-9_.$\\])\.[0-9]/i;
+
+/**
  * The formula with file prefixes dropped and number literals in HyperFormula's form.
  *
  * @example
  * normalizeFormulaText('=ECHEM.POTENTIAL("Zn2+/Zn","Zn2+",1E-6)') // '=ECHEM.POTENTIAL("Zn2+/Zn","Zn2+",1e-6)'
  */
 export function normalizeFormulaText(formula: string): string {
+  return MAY_CHANGE.test(formula) ? rewriteFormulaText(formula) : formula;
+}
+
+/**
+ * The pass {@link normalizeFormulaText} makes over a formula that may need it (exported for
+ * the test that checks the two agree on every formula).
+ *
+ * @example
+ * rewriteFormulaText('_xlfn.STDEV.S(A1:A3)') // 'STDEV.S(A1:A3)'
+ */
+export function rewriteFormulaText(formula: string): string {
   // Pieces joined once at the end: a flat string (appending piece by piece would keep a
   // chain of partial strings per formula, about 1 KB each, for as long as the text lives).
   const out: string[] = [];
