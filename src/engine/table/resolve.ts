@@ -28,6 +28,7 @@ import {
   describeOrigin,
   conflictingDuplicates,
   rowE0V,
+  builtinRowsHolding,
 } from './potentialTable';
 import {
   type StoichMap,
@@ -538,7 +539,12 @@ function resolveElectrode(side: SideSet, text: string, which: string, table: Pot
   const label = `the ${which} electrode of ${quote(text)} (${Array.from(side.keys.values())
     .map((s) => formatSpecies(s))
     .join(', ')})`;
-  let cands = best(table.rows.filter((r) => score(r.map) !== null).map(fromRow));
+  // a row scores null unless every species of its map other than the medium's is the
+  // electrode's (and it holds one such species): the built-in rows that hold none of the
+  // electrode's species other than the medium's are not read
+  const holding = builtinRowsHolding(side.keys.keys());
+  const mayFit = (r: TableRow) => holding === null || r.origin.kind !== 'builtin' || holding.has(r.origin.index);
+  let cands = best(table.rows.filter((r) => mayFit(r) && score(r.map) !== null).map(fromRow));
   if (cands.length === 0) {
     const els = new Set<string>();
     for (const [k, s] of side.keys) {
