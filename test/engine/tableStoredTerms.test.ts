@@ -15,6 +15,7 @@ import {
   parseSpecies,
   STANDARD_SPECIES,
 } from '../../src/engine';
+import { speciesRecord } from '../../src/engine/data/species';
 import { MEDIUM_KEYS, reactionMap } from '../../src/engine/table/halfReaction';
 import { EPH_SPECIES } from '../../src/engine/data/species/ephSpecies';
 import { phaseOf, speciesKey } from '../../src/engine/notation/species';
@@ -128,6 +129,13 @@ describe('stored species of the species data (storedParse.json)', () => {
       expect(stored![i]).toEqual({ ...p, phase: phaseOf(p) });
     });
   });
+  test('a species record is looked up by the stored keys as the registry holds it, first record winning', () => {
+    const entries = listSpecies();
+    expect(entries.length).toBeGreaterThan(100);
+    for (const e of entries) expect([e.key, speciesRecord(e.species)]).toEqual([e.key, e.record]);
+    for (const e of entries) expect(speciesRecord(e.species)).toBe(e.record);
+    expect(speciesRecord(parseSpecies('Cu3+', 'species'))).toBeNull();
+  });
   test('the registry holds every species of both lists under its parsed key', () => {
     const keys = new Set(listSpecies().map((r) => r.key));
     for (const t of [...lists[0][1], ...lists[1][1]]) {
@@ -158,7 +166,11 @@ describe('a stale stored file', () => {
       // eslint-disable-next-line @typescript-eslint/no-require-imports
       const table = require('../../src/engine/table/potentialTable') as typeof import('../../src/engine/table/potentialTable');
       expect(table.builtinRowsHolding(['Zn|2'])).toBeNull();
-      expect(engine.resolveReaction('Zn | Zn2+ || Cu2+ | Cu', engine.defaultTable()).kind).toBe('cell');
+      const cell = engine.resolveReaction('Zn | Zn2+ || Cu2+ | Cu', engine.defaultTable());
+      // E° from the species data read without the stored keys: ΔfG°(Cu2+) = 65.49, ΔfG°(Zn2+) =
+      // −2F·0.7618 V (the data's measured value), so E° = 0.339378 + 0.7618 V (NBS 1982 and
+      // OpenStax Chemistry 2e, Appendix L, from memory; the data's own sources)
+      expect(engine.standardPotentialV(cell, 25)).toBeCloseTo(0.339378 + 0.7618, 5);
       expect(engine.listSpecies().length).toBe(listSpecies().length);
     });
   });

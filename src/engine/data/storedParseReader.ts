@@ -151,7 +151,19 @@ function speciesOfKey(key: string): Species {
  * storedSpecies('standard', STANDARD_SPECIES.map((r) => r.species))?.[0]?.formula // 'H2'
  */
 export function storedSpecies(list: 'standard' | 'eph', texts: readonly string[]): Species[] | null {
+  return storedSpeciesKeys(list, texts)?.map(speciesOfKey) ?? null;
+}
+
+/**
+ * The keys `formula|charge|phase` (`speciesPhaseKey`, phase as inferred) of the species-data
+ * records of one list, as stored, for the record texts `texts`, or null where the stored list
+ * was made from other texts.
+ *
+ * @example
+ * storedSpeciesKeys('standard', STANDARD_SPECIES.map((r) => r.species))?.[0] // 'H2|0|g'
+ */
+export function storedSpeciesKeys(list: 'standard' | 'eph', texts: readonly string[]): readonly string[] | null {
   const s = STORED.species[list];
   if (s.keys.length !== texts.length || s.textsHash !== textsHash(texts)) return null;
-  return s.keys.map(speciesOfKey);
+  return s.keys;
 }
