@@ -203,9 +203,18 @@ export function debyeHuckelB(tempC: number): number {
 // Species information (parsed once per text, cached)
 // ---------------------------------------------------------------------------------------
 
-const KIELLAND = new Map<string, number>();
-for (const row of KIELLAND_ION_SIZES) {
-  KIELLAND.set(formatSpecies(parseSpecies(row.ion, 'ion'), false), row.sizeAngstrom);
+let kiellandSizes: Map<string, number> | null = null;
+
+/** Kielland's ion sizes (Å) by canonical ion text, read on first use (not at load). */
+function kiellandSize(label: string): number | undefined {
+  if (!kiellandSizes) {
+    const sizes = new Map<string, number>();
+    for (const row of KIELLAND_ION_SIZES) {
+      sizes.set(formatSpecies(parseSpecies(row.ion, 'ion'), false), row.sizeAngstrom);
+    }
+    kiellandSizes = sizes;
+  }
+  return kiellandSizes.get(label);
 }
 
 /** What a species column holds. */
@@ -268,7 +277,7 @@ function speciesInfo(text: string, argName: string): SpeciesInfo {
     info = {
       kind: s.charge === 0 ? Kind.Neutral : Kind.Ion,
       charge: s.charge,
-      sizeAngstrom: s.charge === 0 ? null : (KIELLAND.get(label) ?? null),
+      sizeAngstrom: s.charge === 0 ? null : (kiellandSize(label) ?? null),
       side,
       label,
     };

@@ -15,10 +15,12 @@ import {
   parseSpecies,
   STANDARD_SPECIES,
 } from '../../src/engine';
-import { reactionMap } from '../../src/engine/table/halfReaction';
+import { speciesRecord } from '../../src/engine/data/species';
+import { MEDIUM_KEYS, reactionMap } from '../../src/engine/table/halfReaction';
 import { EPH_SPECIES } from '../../src/engine/data/species/ephSpecies';
-import { phaseOf } from '../../src/engine/notation/species';
+import { phaseOf, speciesKey } from '../../src/engine/notation/species';
 import { storedHalfReactions, storedSpecies, textsHash } from '../../src/engine/data/storedParseReader';
+import { builtinRowsHolding } from '../../src/engine/table/potentialTable';
 import STORED from '../../src/engine/data/storedParse.json';
 import type { Reaction } from '../../src/engine/notation/reaction';
 
@@ -77,6 +79,41 @@ describe('stored parse of the built-in rows (storedParse.json)', () => {
   });
 });
 
+describe('the index of the built-in rows by species (storedParse.json rowsByKey)', () => {
+  /** The species keys of a parsed row's terms other than the medium's. */
+  const termKeys = (text: string) => {
+    const r = parsed(text);
+    return new Set([...r.reactants, ...r.products].map((t) => speciesKey(t.species)).filter((k) => !MEDIUM_KEYS.has(k)));
+  };
+  const keysOfRows = potentialTexts.map(termKeys);
+
+  test('lists, for each species key other than the medium’s, exactly the rows whose parsed terms hold it', () => {
+    const all = new Set(keysOfRows.flatMap((k) => [...k]));
+    expect(Object.keys(STORED.potentials.rowsByKey).sort()).toEqual([...all].sort());
+    for (const key of all) {
+      const expected = keysOfRows.flatMap((k, i) => (k.has(key) ? [i] : []));
+      expect([key, [...builtinRowsHolding([key])!]]).toEqual([key, expected]);
+    }
+    for (const medium of MEDIUM_KEYS) expect(builtinRowsHolding([medium])!.size).toBe(0);
+  });
+
+  test('every row map holds a species other than the medium’s, each among the indexed terms of its row', () => {
+    builtinTable().forEach((row, i) => {
+      const keys = [...row.map.keys()].filter((k) => !MEDIUM_KEYS.has(k));
+      expect([i, keys.length > 0]).toEqual([i, true]);
+      for (const k of keys) expect([i, k, keysOfRows[i]!.has(k)]).toEqual([i, k, true]);
+    });
+  });
+
+  test('gives the union for several keys, and none for a key no row holds', () => {
+    const zincOrCopper = keysOfRows.flatMap((k, i) => (k.has('Zn|2') || k.has('Cu|2') ? [i] : []));
+    expect([...builtinRowsHolding(['Zn|2', 'Cu|2'])!].sort((a, b) => a - b)).toEqual(zincOrCopper);
+    expect(zincOrCopper.length).toBeGreaterThanOrEqual(2);
+    expect(builtinRowsHolding(['Xx|0'])!.size).toBe(0);
+    expect(builtinRowsHolding(['constructor', '__proto__'])!.size).toBe(0);
+  });
+});
+
 describe('stored species of the species data (storedParse.json)', () => {
   const lists = [
     ['standard', STANDARD_SPECIES.map((r) => r.species)],
@@ -91,6 +128,13 @@ describe('stored species of the species data (storedParse.json)', () => {
       const p = parseSpecies(t, 'species');
       expect(stored![i]).toEqual({ ...p, phase: phaseOf(p) });
     });
+  });
+  test('a species record is looked up by the stored keys as the registry holds it, first record winning', () => {
+    const entries = listSpecies();
+    expect(entries.length).toBeGreaterThan(100);
+    for (const e of entries) expect([e.key, speciesRecord(e.species)]).toEqual([e.key, e.record]);
+    for (const e of entries) expect(speciesRecord(e.species)).toBe(e.record);
+    expect(speciesRecord(parseSpecies('Cu3+', 'species'))).toBeNull();
   });
   test('the registry holds every species of both lists under its parsed key', () => {
     const keys = new Set(listSpecies().map((r) => r.key));
@@ -118,6 +162,15 @@ describe('a stale stored file', () => {
       const engine = require('../../src/engine') as typeof import('../../src/engine');
       const first = engine.builtinTable()[0]!;
       expect(first.reaction).toEqual(parsed(BUILTIN_POTENTIALS[0]!.halfReaction));
+      // nor its index: every row is looked at
+      // eslint-disable-next-line @typescript-eslint/no-require-imports
+      const table = require('../../src/engine/table/potentialTable') as typeof import('../../src/engine/table/potentialTable');
+      expect(table.builtinRowsHolding(['Zn|2'])).toBeNull();
+      const cell = engine.resolveReaction('Zn | Zn2+ || Cu2+ | Cu', engine.defaultTable());
+      // E° from the species data read without the stored keys: ΔfG°(Cu2+) = 65.49, ΔfG°(Zn2+) =
+      // −2F·0.7618 V (the data's measured value), so E° = 0.339378 + 0.7618 V (NBS 1982 and
+      // OpenStax Chemistry 2e, Appendix L, from memory; the data's own sources)
+      expect(engine.standardPotentialV(cell, 25)).toBeCloseTo(0.339378 + 0.7618, 5);
       expect(engine.listSpecies().length).toBe(listSpecies().length);
     });
   });

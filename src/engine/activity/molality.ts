@@ -39,14 +39,22 @@ interface CompiledDensity {
   readonly density: Float64Array;
 }
 
-const compiled = new Map<string, CompiledDensity>();
-for (const t of SOLUTION_DENSITIES) {
-  const M = saltMolarMass(t.salt);
-  compiled.set(t.salt, {
-    table: t,
-    molarity: Float64Array.from(t.rows, ([w, rho]) => ((w / 100) * rho * 1000) / M),
-    density: Float64Array.from(t.rows, ([, rho]) => rho),
-  });
+let compiledTables: Map<string, CompiledDensity> | null = null;
+
+/** The held density tables by salt, with their molarities, worked out on first use (not at load). */
+function compiledDensities(): Map<string, CompiledDensity> {
+  if (compiledTables) return compiledTables;
+  const compiled = new Map<string, CompiledDensity>();
+  for (const t of SOLUTION_DENSITIES) {
+    const M = saltMolarMass(t.salt);
+    compiled.set(t.salt, {
+      table: t,
+      molarity: Float64Array.from(t.rows, ([w, rho]) => ((w / 100) * rho * 1000) / M),
+      density: Float64Array.from(t.rows, ([, rho]) => rho),
+    });
+  }
+  compiledTables = compiled;
+  return compiled;
 }
 
 /**
@@ -62,7 +70,7 @@ for (const t of SOLUTION_DENSITIES) {
  */
 export function heldSolutionDensity(saltText: string, molarityMolL: number, tempC = 25): number | null {
   const ions = parseSalt(saltText);
-  const c = compiled.get(ions.formula);
+  const c = compiledDensities().get(ions.formula);
   if (!c) return null;
   const t = c.table;
   if (tempC < t.useRangeC[0] || tempC > t.useRangeC[1]) {

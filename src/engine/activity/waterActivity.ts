@@ -102,7 +102,9 @@ const WATER_IN = /^H(?:2|\u2082)O(?:\s*\(\s*l\s*\))?\s+in\s+(\S.*)$/i;
  * waterElectrolyteOf('H2O') // null
  */
 export function waterElectrolyteOf(body: string): string | null {
-  const m = WATER_IN.exec(body.trim());
+  const text = body.trim();
+  // WATER_IN needs an H first: other headers skip the pattern
+  const m = (text.charCodeAt(0) | 0x20) === 0x68 ? WATER_IN.exec(text) : null;
   if (!m) return null;
   const salt = (m[1] as string).trim();
   try {

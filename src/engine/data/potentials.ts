@@ -62,20 +62,22 @@ type StoredRow = readonly [string, number, number | null, number, string];
 
 const SOURCES: Readonly<Record<string, string>> = TABLE.sources;
 
-/** The rows in table order (grouped by element, in order of atomic number; published E° increasing within a group). */
-const ROWS: readonly Omit<BuiltinPotentialRow, 'source'>[] = (TABLE.rows as unknown as readonly StoredRow[]).map(
-  ([halfReaction, e0V, dE0dTmVperK, publishedE0V, key]) => {
-    const source = SOURCES[key];
-    if (source === undefined) throw new Error(`potentialRows.json: row ${halfReaction} names an unknown source ${key}`);
-    return { halfReaction, e0V, dE0dTmVperK, published: { e0V: publishedE0V, source } };
-  },
-);
-
 /**
  * Every built-in row with its source text: the species data it is derived from and the value
- * its publication prints (FORMATION(species, "source") names the source of each species).
+ * its publication prints (FORMATION(species, "source") names the source of each species). In
+ * table order (grouped by element, in order of atomic number; published E° increasing within a
+ * group).
  */
-export const BUILTIN_POTENTIALS: readonly BuiltinPotentialRow[] = ROWS.map((r) => ({
-  ...r,
-  source: `${LAYER}${r.dE0dTmVperK === null ? '; no S° for a species: E° kept at its 25 °C value at other temperatures' : ''}); ${r.published.source} prints ${String(r.published.e0V)} V`,
-}));
+export const BUILTIN_POTENTIALS: readonly BuiltinPotentialRow[] = (TABLE.rows as unknown as readonly StoredRow[]).map(
+  ([halfReaction, e0V, dE0dTmVperK, publishedE0V, key]) => {
+    const published = SOURCES[key];
+    if (published === undefined) throw new Error(`potentialRows.json: row ${halfReaction} names an unknown source ${key}`);
+    return {
+      halfReaction,
+      e0V,
+      dE0dTmVperK,
+      published: { e0V: publishedE0V, source: published },
+      source: `${LAYER}${dE0dTmVperK === null ? '; no S° for a species: E° kept at its 25 °C value at other temperatures' : ''}); ${published} prints ${String(publishedE0V)} V`,
+    };
+  },
+);

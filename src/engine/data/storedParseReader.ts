@@ -93,11 +93,48 @@ function storedReaction(text: string, seen: Interned): Reaction {
  * storedHalfReactions(BUILTIN_POTENTIALS.map((r) => r.halfReaction))?.[0]?.reactants.length // 2
  */
 export function storedHalfReactions(texts: readonly string[]): Reaction[] | null {
+  const stored = storedHalfReactionRows(texts);
+  if (!stored) return null;
+  const read = storedReactionReader();
+  return stored.rows.map((r) => read(r));
+}
+
+/**
+ * The stored rows of the built-in half-reactions (one text per row of `texts`, to be read by
+ * {@link storedReactionReader}) and their index by species, or null where the stored list was
+ * made from other texts.
+ *
+ * @example
+ * storedHalfReactionRows(BUILTIN_POTENTIALS.map((r) => r.halfReaction))?.rowsByKey['Zn|2'] // the rows holding Zn2+
+ */
+export function storedHalfReactionRows(texts: readonly string[]): StoredHalfReactions | null {
   const p = STORED.potentials;
   if (p.rows.length !== texts.length || p.textsHash !== textsHash(texts)) return null;
-  const seen: Interned = { coefficients: new Map(), species: new Map() };
-  return p.rows.map((r) => storedReaction(r, seen));
+  return p;
 }
+
+/** The stored built-in half-reactions: one row per text, and the rows that hold each species. */
+export interface StoredHalfReactions {
+  readonly rows: readonly string[];
+  /**
+   * For each species key (`speciesKey`: `formula|charge`) other than the medium's (the electron,
+   * H+, OH-, H2O), the rows (0-based, increasing) whose terms hold it; every row holds one.
+   */
+  readonly rowsByKey: Readonly<Record<string, readonly number[]>>;
+}
+
+/**
+ * A reader of stored rows (from {@link storedHalfReactionRows}) into reactions, one row at a
+ * time; the rows it reads share their coefficients and species.
+ *
+ * @example
+ * storedReactionReader()('Zn 2,2 e>Zn').products[0]?.species.formula // 'Zn'
+ */
+export function storedReactionReader(): (row: string) => Reaction {
+  const seen: Interned = { coefficients: new Map(), species: new Map() };
+  return (row) => storedReaction(row, seen);
+}
+
 
 /** A stored species key `formula|charge|phase` as the species it names (phase as inferred). */
 function speciesOfKey(key: string): Species {
@@ -114,7 +151,19 @@ function speciesOfKey(key: string): Species {
  * storedSpecies('standard', STANDARD_SPECIES.map((r) => r.species))?.[0]?.formula // 'H2'
  */
 export function storedSpecies(list: 'standard' | 'eph', texts: readonly string[]): Species[] | null {
+  return storedSpeciesKeys(list, texts)?.map(speciesOfKey) ?? null;
+}
+
+/**
+ * The keys `formula|charge|phase` (`speciesPhaseKey`, phase as inferred) of the species-data
+ * records of one list, as stored, for the record texts `texts`, or null where the stored list
+ * was made from other texts.
+ *
+ * @example
+ * storedSpeciesKeys('standard', STANDARD_SPECIES.map((r) => r.species))?.[0] // 'H2|0|g'
+ */
+export function storedSpeciesKeys(list: 'standard' | 'eph', texts: readonly string[]): readonly string[] | null {
   const s = STORED.species[list];
   if (s.keys.length !== texts.length || s.textsHash !== textsHash(texts)) return null;
-  return s.keys.map(speciesOfKey);
+  return s.keys;
 }

@@ -5,7 +5,7 @@
  */
 import { type Species, parseSpecies } from './species';
 
-const CATIONS = [
+const CATION_TEXTS = [
   'H+',
   'Li+',
   'Na+',
@@ -35,10 +35,16 @@ const CATIONS = [
   'Cr3+',
   'Ce3+',
   'In3+',
-].map((t) => parseSpecies(t));
-const ANIONS = ['Cl-', 'Br-', 'I-', 'F-', 'NO3-', 'ClO4-', 'OH-', 'HSO4-', 'SO4^2-', 'CO3^2-'].map((t) =>
-  parseSpecies(t),
-);
+];
+const ANION_TEXTS = ['Cl-', 'Br-', 'I-', 'F-', 'NO3-', 'ClO4-', 'OH-', 'HSO4-', 'SO4^2-', 'CO3^2-'];
+
+let ions: { readonly cations: readonly Species[]; readonly anions: readonly Species[] } | null = null;
+
+/** The listed cations and anions, parsed on first use (not at load). */
+function listedIons(): { readonly cations: readonly Species[]; readonly anions: readonly Species[] } {
+  ions ??= { cations: CATION_TEXTS.map((t) => parseSpecies(t)), anions: ANION_TEXTS.map((t) => parseSpecies(t)) };
+  return ions;
+}
 
 function gcd(a: number, b: number): number {
   return b === 0 ? a : gcd(b, a % b);
@@ -58,9 +64,10 @@ function part(formula: string, count: number): string[] {
  * splitElectrolyte('Na2SO4') // [{ ion: Na+, count: 2 }, { ion: SO4^2-, count: 1 }]
  */
 export function splitElectrolyte(formula: string): { ion: Species; count: number }[] | null {
-  for (const c of CATIONS) {
+  const { cations, anions } = listedIons();
+  for (const c of cations) {
     if (!formula.startsWith(c.formula.replace(/\d+$/, ''))) continue;
-    for (const a of ANIONS) {
+    for (const a of anions) {
       const za = -a.charge;
       const g = gcd(c.charge, za);
       const p = za / g;

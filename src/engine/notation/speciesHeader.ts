@@ -37,10 +37,12 @@ const PH = /^ph$/i;
  */
 export function splitSpeciesHeader(header: string): SpeciesHeaderParts {
   const text = header.trim();
-  const m = SIDE.exec(text);
+  // SIDE needs an l or r first and PH two characters: most headers skip the patterns
+  const first = text.charCodeAt(0) | 0x20;
+  const m = first === 0x6c || first === 0x72 ? SIDE.exec(text) : null;
   const side = m ? (m[1]!.toLowerCase().startsWith('l') ? 'left' : 'right') : null;
   const body = m ? m[2]!.trim() : text;
-  const isPH = PH.test(body);
+  const isPH = body.length === 2 && PH.test(body);
   return { text, side, isPH, body: isPH ? 'pH' : body };
 }
 

@@ -11,7 +11,7 @@ import { formatReaction, type Reaction } from '../notation/reaction';
 import { speciesKey } from '../notation/species';
 import { checkBalance } from '../balance/balance';
 import { BUILTIN_POTENTIALS } from '../data/potentials';
-import { storedHalfReactions } from '../data/storedParseReader';
+import { storedHalfReactionRows, storedReactionReader } from '../data/storedParseReader';
 import { type StoichMap, reactionMap, electronsOf, proportionality, scaleMap } from './halfReaction';
 import { toNumber } from '../rational';
 import {
@@ -223,33 +223,63 @@ function makeRow(
   };
 }
 
+/** A built-in row's half-reaction read: {@link ReadHalfReaction} and its electron count. */
+interface ReadBuiltin extends ReadHalfReaction {
+  readonly n: number;
+}
+
 /**
  * A built-in row: its half-reaction as stored in storedParse.json (read by the notation
- * parser when that file was generated; checked there to balance and to be a reduction), its
- * E° and temperature dependence from the species data computed on first use.
+ * parser when that file was generated; checked there to balance and to be a reduction) and
+ * read from there when first asked for (a lookup reads only the rows that hold its species,
+ * see {@link builtinRowsHolding}), its E° and temperature dependence from the species data
+ * computed on first use.
  */
 class BuiltinRow implements TableRow {
-  readonly n: number;
   readonly origin: RowOrigin;
+  private read: ReadBuiltin | null = null;
   private thermo: RowThermo | null = null;
   private perElectronMap: StoichMap | null = null;
 
+  /** `stored` and `readStored`: the row's stored text and its reader; else `given`, the text as parsed. */
   constructor(
     readonly text: string,
-    readonly reaction: Reaction,
-    readonly map: StoichMap,
-    private readonly e: Rational,
+    private readonly stored: string | null,
+    private readonly readStored: ((row: string) => Reaction) | null,
+    given: ReadHalfReaction | null,
     private readonly givenE0V: number,
     private readonly givenSlopeMvPerK: number | null,
     readonly source: string,
     index: number,
   ) {
-    this.n = electronCount(e);
+    if (given) this.read = { ...given, n: electronCount(given.e) };
     this.origin = { kind: 'builtin', index };
   }
 
+  private halfReaction(): ReadBuiltin {
+    if (!this.read) {
+      const reaction = this.readStored!(this.stored!);
+      const map = storedMap(reaction);
+      const e = electronsOf(map);
+      this.read = { reaction, map, e, n: electronCount(e) };
+    }
+    return this.read;
+  }
+  get reaction(): Reaction {
+    return this.halfReaction().reaction;
+  }
+  get map(): StoichMap {
+    return this.halfReaction().map;
+  }
+  get n(): number {
+    return this.halfReaction().n;
+  }
+
   get perElectron(): StoichMap {
-    if (!this.perElectronMap) this.perElectronMap = scaleMap(this.map, div(ONE, this.e));
+    if (!this.perElectronMap) {
+      const { map, e } = this.halfReaction();
+      this.perElectronMap = scaleMap(map, div(ONE, e));
+    }
     return this.perElectronMap;
   }
 
@@ -271,6 +301,28 @@ class BuiltinRow implements TableRow {
   }
 }
 
+/** The built-in rows holding each species key, from the stored parse (null where it is stale). */
+let builtinRowsByKey: Readonly<Record<string, readonly number[]>> | null = null;
+
+/**
+ * The indexes (`origin.index`) of the built-in rows whose half-reaction holds one of the
+ * species `keys` (`speciesKey`) other than the medium's (MEDIUM_KEYS: the electron, H+, OH-,
+ * H2O, which are left out of the index; every built-in row holds another species), from the
+ * stored parse, so that a lookup reads only those rows; null where not known (a stale stored
+ * parse): then any row may hold them.
+ *
+ * @example
+ * builtinRowsHolding(['Zn|2']) // Set { the index of Zn2+ + 2 e- -> Zn, … }
+ */
+export function builtinRowsHolding(keys: Iterable<string>): ReadonlySet<number> | null {
+  builtinTable();
+  const index = builtinRowsByKey;
+  if (!index) return null;
+  const out = new Set<number>();
+  for (const k of keys) if (Object.prototype.hasOwnProperty.call(index, k)) for (const i of index[k]!) out.add(i);
+  return out;
+}
+
 /**
  * The map of a stored built-in reaction: where no species occurs twice (by formula and charge)
  * nothing merges or cancels, so the map is the terms in order, reactants negative; otherwise
@@ -286,23 +338,22 @@ function storedMap(reaction: Reaction): StoichMap {
 let builtinRows: TableRow[] | null = null;
 
 /**
- * The built-in rows, read once (their half-reactions from the stored parse, their E° from
- * the species data when first asked for).
+ * The built-in rows, made once (their half-reactions read from the stored parse and their E°
+ * from the species data when first asked for).
  *
  * @example
  * builtinTable().length >= 60 // true
  */
 export function builtinTable(): readonly TableRow[] {
   if (!builtinRows) {
-    const stored = storedHalfReactions(BUILTIN_POTENTIALS.map((r) => r.halfReaction));
+    const stored = storedHalfReactionRows(BUILTIN_POTENTIALS.map((r) => r.halfReaction));
+    const read = stored ? storedReactionReader() : null;
+    builtinRowsByKey = stored ? stored.rowsByKey : null;
     builtinRows = BUILTIN_POTENTIALS.map((r, index) => {
-      const reaction = stored?.[index];
-      let read: ReadHalfReaction;
-      if (reaction) {
-        const map = storedMap(reaction);
-        read = { reaction, map, e: electronsOf(map) };
-      } else read = readHalfReaction(r.halfReaction);
-      return new BuiltinRow(r.halfReaction, read.reaction, read.map, read.e, r.e0V, r.dE0dTmVperK, r.source, index);
+      const row = stored?.rows[index];
+      return row !== undefined
+        ? new BuiltinRow(r.halfReaction, row, read, null, r.e0V, r.dE0dTmVperK, r.source, index)
+        : new BuiltinRow(r.halfReaction, null, null, readHalfReaction(r.halfReaction), r.e0V, r.dE0dTmVperK, r.source, index);
     });
   }
   return builtinRows;

@@ -28,6 +28,7 @@ import {
   describeOrigin,
   conflictingDuplicates,
   rowE0V,
+  builtinRowsHolding,
 } from './potentialTable';
 import {
   type StoichMap,
@@ -535,10 +536,17 @@ function resolveElectrode(side: SideSet, text: string, which: string, table: Pot
     for (const x of scored) top = Math.max(top, x.s);
     return top === 0 ? [] : scored.filter((x) => x.s === top).map((x) => x.c);
   };
-  const label = `the ${which} electrode of ${quote(text)} (${Array.from(side.keys.values())
-    .map((s) => formatSpecies(s))
-    .join(', ')})`;
-  let cands = best(table.rows.filter((r) => score(r.map) !== null).map(fromRow));
+  // for messages only: written where a message needs it
+  const label = () =>
+    `the ${which} electrode of ${quote(text)} (${Array.from(side.keys.values())
+      .map((s) => formatSpecies(s))
+      .join(', ')})`;
+  // a row scores null unless every species of its map other than the medium's is the
+  // electrode's (and it holds one such species): the built-in rows that hold none of the
+  // electrode's species other than the medium's are not read
+  const holding = builtinRowsHolding(side.keys.keys());
+  const mayFit = (r: TableRow) => holding === null || r.origin.kind !== 'builtin' || holding.has(r.origin.index);
+  let cands = best(table.rows.filter((r) => mayFit(r) && score(r.map) !== null).map(fromRow));
   if (cands.length === 0) {
     const els = new Set<string>();
     for (const [k, s] of side.keys) {
@@ -550,11 +558,12 @@ function resolveElectrode(side: SideSet, text: string, which: string, table: Pot
   if (cands.length === 0) {
     throw new EngineError(
       'notFound',
-      `No half-reaction in the potentials table fits ${label}. Check the species, or add the couple to your table.`,
+      `No half-reaction in the potentials table fits ${label()}. Check the species, or add the couple to your table.`,
       'reaction',
     );
   }
-  const chosen = pickOne(cands, label)!;
+  // one candidate is the one pickOne picks (its message is not needed)
+  const chosen = cands.length === 1 ? cands[0]! : pickOne(cands, label())!;
   const inline = new Map<string, number>();
   for (const k of chosen.map.keys()) {
     const v = side.inline.get(k);

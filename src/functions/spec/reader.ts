@@ -265,12 +265,14 @@ function applyErrorRows(result: Result, call: Prepared): Result {
  * implementationOf(spec)(25, 1) // [[0.0591…]] for NERNSTSLOPE
  */
 export function implementationOf(spec: FunctionSpec): (...args: Arg[]) => Result {
-  const byName = new Map(spec.params.map((p, i) => [p.name, { p, i }]));
   if (!spec.perCase === !spec.run) throw new Error(`${spec.id}: give exactly one of perCase and run`);
+  // the parameters by name, made on the first call (not for every function at load)
+  let byName: ReadonlyMap<string, { p: ParamSpec; i: number }> | null = null;
   return (...args: Arg[]): Result => {
     try {
       const fast = spec.fast?.(args);
       if (fast) return fast;
+      byName ??= new Map(spec.params.map((p, i) => [p.name, { p, i }]));
       const call = new Prepared(spec, byName, args);
       const result = spec.run ? spec.run(call) : runPerCase(spec, call);
       return applyErrorRows(result, call);

@@ -17,7 +17,7 @@ import { type Species, parseSpecies, speciesPhaseKey, formatSpecies, phaseOf } f
 import type { SpeciesThermoRecord } from './types';
 import { STANDARD_SPECIES } from './standard';
 import { EPH_SPECIES } from './ephSpecies';
-import { storedSpecies } from '../storedParseReader';
+import { storedSpecies, storedSpeciesKeys } from '../storedParseReader';
 
 export type { SpeciesThermoRecord } from './types';
 export { STANDARD_SPECIES } from './standard';
@@ -77,11 +77,37 @@ function built(): { byKey: Map<string, RegisteredSpecies>; duplicates: Duplicate
   return registry;
 }
 
+let recordIndex: Map<string, SpeciesThermoRecord> | null = null;
+
+/**
+ * The records by key, the first record of a key winning (as in the registry): from the stored
+ * keys where they are fresh, without building the registry's species; else from the registry.
+ */
+function recordsByKey(): Map<string, SpeciesThermoRecord> {
+  if (!recordIndex) {
+    const standard = storedSpeciesKeys(
+      'standard',
+      STANDARD_SPECIES.map((r) => r.species),
+    );
+    const eph = standard && storedSpeciesKeys('eph', EPH_SPECIES.map((r) => r.species));
+    const index = new Map<string, SpeciesThermoRecord>();
+    if (standard && eph) {
+      const add = (records: readonly SpeciesThermoRecord[], keys: readonly string[]) => {
+        for (let i = 0; i < records.length; i++) if (!index.has(keys[i]!)) index.set(keys[i]!, records[i]!);
+      };
+      add(STANDARD_SPECIES, standard);
+      add(EPH_SPECIES, eph);
+    } else for (const [key, entry] of built().byKey) index.set(key, entry.record);
+    recordIndex = index;
+  }
+  return recordIndex;
+}
+
 /** S° of H2(g) in J/(mol·K), from the registry (the electron convention depends on it). */
 function hydrogenGas(): SpeciesThermoRecord {
-  const h2 = built().byKey.get('H2|0|g');
+  const h2 = recordsByKey().get('H2|0|g');
   if (!h2) throw new Error('species data: H2(g) is missing');
-  return h2.record;
+  return h2;
 }
 
 /**
@@ -112,7 +138,7 @@ export function electronThermo(): SpeciesThermoRecord {
 export function speciesRecord(s: Species): SpeciesThermoRecord | null {
   if (s.isElectron) return electronThermo();
   const key = speciesPhaseKey(s);
-  return built().byKey.get(key)?.record ?? null;
+  return recordsByKey().get(key) ?? null;
 }
 
 /**

@@ -320,9 +320,29 @@ const MEASURED: readonly (readonly [string, readonly (readonly [string, number])
   ['AgBr(s)', [['AgBr(s)', -1], ['Ag(s)', 1], ['Br-(aq)', 1]], 1, 0.07133, CRC92_SEEN],
 ];
 
+const PHASE_SUFFIXES = ['(aq)', '(s)', '(l)', '(g)'];
+
+/** A species text without its phase suffix: `MnO4-(aq)` → `MnO4-`. */
+function withoutPhase(sp: string): string {
+  for (const p of PHASE_SUFFIXES) if (sp.endsWith(p)) return sp.slice(0, sp.length - p.length);
+  return sp;
+}
+
+/** A side of a measured half-reaction as written in its source text: `8 H+ + MnO4-`. */
+function sideText(terms: readonly (readonly [string, number])[], sign: 1 | -1): string {
+  let text = '';
+  for (const [sp, nu] of terms) {
+    const v = sign * nu;
+    if (v <= 0) continue;
+    text += `${text === '' ? '' : ' + '}${v === 1 ? '' : `${v} `}${withoutPhase(sp)}`;
+  }
+  return text;
+}
+
 function applyMeasured(records: readonly SpeciesThermoRecord[]): SpeciesThermoRecord[] {
   const out = records.slice();
-  const index = new Map(out.map((r, i) => [r.species, i]));
+  const index = new Map<string, number>();
+  for (let i = 0; i < out.length; i++) index.set(out[i]!.species, i);
   const g = (sp: string): number => {
     const i = index.get(sp);
     if (i === undefined) throw new Error(`species data: ${sp} is missing`);
@@ -340,14 +360,8 @@ function applyMeasured(records: readonly SpeciesThermoRecord[]): SpeciesThermoRe
     const i = index.get(target)!;
     const prior = out[i]!;
     const shift = dfG - prior.dfGkJ;
-    const text = terms
-      .filter(([, nu]) => nu < 0)
-      .map(([sp, nu]) => `${nu === -1 ? '' : `${-nu} `}${sp.replace(/\((aq|s|l|g)\)$/, '')}`)
-      .join(' + ');
-    const prod = terms
-      .filter(([, nu]) => nu > 0)
-      .map(([sp, nu]) => `${nu === 1 ? '' : `${nu} `}${sp.replace(/\((aq|s|l|g)\)$/, '')}`)
-      .join(' + ');
+    const text = sideText(terms, -1);
+    const prod = sideText(terms, 1);
     out[i] = {
       ...prior,
       dfGkJ: dfG,
