@@ -195,6 +195,16 @@ function installLazyRangeCaches(vertexProto: RangeVertexInternals): () => void {
 
 let installed: { sharedTrees: boolean; lazyRangeCaches: boolean } | undefined;
 
+type ProbedVertex = (Partial<RangeVertexInternals> & Record<string, unknown>) | undefined;
+
+/** An engine with one range (A1:B1, read by SUM), and that range's vertex. */
+function rangeProbe(): { hf: HyperFormula; vertex: ProbedVertex } {
+  const hf = HyperFormula.buildFromArray([[1, 2, '=SUM(A1:B1)']], { licenseKey: 'gpl-v3' });
+  const mapping = hf.rangeMapping as unknown as { getRangeVertex(s: unknown, e: unknown): unknown };
+  const vertex = mapping.getRangeVertex({ sheet: 0, row: 0, col: 0 }, { sheet: 0, row: 0, col: 1 });
+  return { hf, vertex: vertex as ProbedVertex };
+}
+
 /**
  * Installs both changes on HyperFormula (once per process, before the first workbook is
  * built). Returns which of them are installed; a part whose internals are not the ones this
@@ -205,7 +215,7 @@ let installed: { sharedTrees: boolean; lazyRangeCaches: boolean } | undefined;
  */
 export function leanEngineMemory(): { sharedTrees: boolean; lazyRangeCaches: boolean } {
   if (installed !== undefined) return installed;
-  const probe = HyperFormula.buildFromArray([[1, 2, '=SUM(A1:B1)']], { licenseKey: 'gpl-v3' });
+  const { hf: probe, vertex } = rangeProbe();
   let sharedTrees = false;
   let lazyRangeCaches = false;
   try {
@@ -222,10 +232,6 @@ export function leanEngineMemory(): { sharedTrees: boolean; lazyRangeCaches: boo
       };
       sharedTrees = true;
     }
-    const vertex = (
-      probe.rangeMapping as unknown as { getRangeVertex(s: unknown, e: unknown): unknown }
-    ).getRangeVertex({ sheet: 0, row: 0, col: 0 }, { sheet: 0, row: 0, col: 1 }) as
-      (Partial<RangeVertexInternals> & Record<string, unknown>) | undefined;
     if (
       vertex !== undefined &&
       vertex.functionCache instanceof Map &&
@@ -239,10 +245,7 @@ export function leanEngineMemory(): { sharedTrees: boolean; lazyRangeCaches: boo
       const undo = installLazyRangeCaches(vertexProto);
       // The constructor must assign through the accessors (not define own fields): check on a
       // new vertex, and undo the change where it does not.
-      const check = HyperFormula.buildFromArray([[1, 2, '=SUM(A1:B1)']], { licenseKey: 'gpl-v3' });
-      const fresh = (
-        check.rangeMapping as unknown as { getRangeVertex(s: unknown, e: unknown): object | undefined }
-      ).getRangeVertex({ sheet: 0, row: 0, col: 0 }, { sheet: 0, row: 0, col: 1 });
+      const { hf: check, vertex: fresh } = rangeProbe();
       check.destroy();
       lazyRangeCaches = fresh !== undefined && !Object.prototype.hasOwnProperty.call(fresh, 'functionCache');
       if (!lazyRangeCaches) undo();
