@@ -391,7 +391,8 @@ function acidOfPair(pool: readonly Candidate[]): Candidate | null {
   return toNumber(h.nu) < 0 ? a : b;
 }
 
-function pickOne(cs: Candidate[], text: string): Candidate | null {
+/** The one candidate to use; `text` names the lookup in the message (a function: written only for it). */
+function pickOne(cs: Candidate[], text: string | (() => string)): Candidate | null {
   if (cs.length === 0) return null;
   // user rows take precedence
   const user = cs.filter((c) => c.shares.every((s) => s.row.origin.kind === 'user'));
@@ -401,7 +402,7 @@ function pickOne(cs: Candidate[], text: string): Candidate | null {
   if (acid) return acid;
   throw new EngineError(
     'ambiguous',
-    `${quote(text)} matches ${pool.length} half-reactions: ${describeCandidates(pool)}. Write the half-reaction in full (with phases, and H+ or OH- as it applies) to choose one.`,
+    `${quote(typeof text === 'string' ? text : text())} matches ${pool.length} half-reactions: ${describeCandidates(pool)}. Write the half-reaction in full (with phases, and H+ or OH- as it applies) to choose one.`,
     'reaction',
   );
 }
@@ -562,8 +563,7 @@ function resolveElectrode(side: SideSet, text: string, which: string, table: Pot
       'reaction',
     );
   }
-  // one candidate is the one pickOne picks (its message is not needed)
-  const chosen = cands.length === 1 ? cands[0]! : pickOne(cands, label())!;
+  const chosen = pickOne(cands, label)!;
   const inline = new Map<string, number>();
   for (const k of chosen.map.keys()) {
     const v = side.inline.get(k);
