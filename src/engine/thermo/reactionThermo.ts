@@ -190,10 +190,11 @@ export function potentialModel(
   n: number,
 ): { e0V: number; slopeVPerK: number | null; cpVPerK: number } {
   const nF = n * FARADAY_C_PER_MOL;
+  // 0 − x, not −x: the same value for every x but 0, where it gives 0, not −0 (E° of the SHE)
   return {
-    e0V: -t.dGJ / nF,
+    e0V: (0 - t.dGJ) / nF,
     slopeVPerK: t.dSJK === null ? null : t.dSJK / nF,
-    cpVPerK: t.dSJK === null ? 0 : -t.dCpJK / nF,
+    cpVPerK: t.dSJK === null ? 0 : (0 - t.dCpJK) / nF,
   };
 }
 
