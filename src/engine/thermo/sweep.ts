@@ -60,11 +60,45 @@ export function linearStandardPotential(r: Resolved): LinearStandardPotential {
 
 const linearCache = new WeakMap<Resolved, LinearStandardPotential>();
 
+/**
+ * E° at 25 °C at once; the temperature terms on first use, since they may need the species
+ * data, which a sheet at 25 °C need not build (built-in rows store their E° at 25 °C).
+ */
+class LazyLinear implements LinearStandardPotential {
+  readonly e0V25: number;
+  private model: TemperatureTerms | null = null;
+
+  constructor(private readonly r: Resolved) {
+    this.e0V25 = r.kind === 'half' ? halfE0V25(r.half) : halfE0V25(r.right) - halfE0V25(r.left);
+  }
+
+  private terms(): TemperatureTerms {
+    return (this.model ??= temperatureTerms(this.r));
+  }
+
+  get slopeVPerK(): number {
+    return this.terms().slopeVPerK;
+  }
+
+  get cpVPerK(): number {
+    return this.terms().cpVPerK;
+  }
+
+  get speciesRange(): boolean {
+    return this.terms().speciesRange;
+  }
+}
+
+type TemperatureTerms = Omit<LinearStandardPotential, 'e0V25'>;
+
 function computeLinear(r: Resolved): LinearStandardPotential {
+  return new LazyLinear(r);
+}
+
+function temperatureTerms(r: Resolved): TemperatureTerms {
   if (r.kind === 'half') {
     const cp = halfCpModel(r.half);
     return {
-      e0V25: halfE0V25(r.half),
       slopeVPerK: halfSlopeMvPerK(r.half).slope * 1e-3,
       cpVPerK: cp.cpVPerK,
       speciesRange: cp.species,
@@ -73,7 +107,6 @@ function computeLinear(r: Resolved): LinearStandardPotential {
   const cr = halfCpModel(r.right);
   const cl = halfCpModel(r.left);
   return {
-    e0V25: halfE0V25(r.right) - halfE0V25(r.left),
     slopeVPerK: (halfSlopeMvPerK(r.right).slope - halfSlopeMvPerK(r.left).slope) * 1e-3,
     cpVPerK: cr.cpVPerK - cl.cpVPerK,
     speciesRange: cr.species || cl.species,
@@ -122,6 +155,10 @@ export function sweepCases(
     fixedOH = ohOffset(b, tempC);
   }
   const logOH = b.ohFromPH === 0 ? 0 : ohOffset(b, 25);
+  // a temperature per case: the temperature terms read once, not per case
+  const slopeVPerK = fixedT ? 0 : lin.slopeVPerK;
+  const cpVPerK = fixedT ? 0 : lin.cpVPerK;
+  const speciesRange = fixedT ? false : lin.speciesRange;
   const empty: unknown[] = [];
   for (let i = 0; i < caseCount; i++) {
     try {
@@ -134,10 +171,10 @@ export function sweepCases(
         const t = (tempC as (i: number) => number)(i);
         const tK = t + ZERO_CELSIUS_K;
         if (!(tK > 0) || !(t <= MAX_TEMP_C)) kelvinFromCelsius(t);
-        let e0 = lin.e0V25 + lin.slopeVPerK * (t - 25);
-        if (lin.speciesRange) {
+        let e0 = lin.e0V25 + slopeVPerK * (t - 25);
+        if (speciesRange) {
           if (!(t >= SPECIES_DATA_RANGE_C.min && t <= SPECIES_DATA_RANGE_C.max)) checkSpeciesTemperature(t);
-          if (lin.cpVPerK !== 0) e0 += lin.cpVPerK * cpFactorK(tK);
+          if (cpVPerK !== 0) e0 += cpVPerK * cpFactorK(tK);
         }
         x = e0 - slopePerElectronAtKelvin(tK) * (b.ohFromPH === 0 ? sum : sum + ohOffset(b, t));
       }
