@@ -111,7 +111,7 @@ export {
   type SpeciesThermoRecord,
   type RegisteredSpecies,
   type DuplicateSpecies,
-  STANDARD_SPECIES,
+  standardSpecies,
   speciesRecord,
   findSpeciesRecord,
   listSpecies,

@@ -3,8 +3,9 @@
  * (each built-in half-reaction and each species-data species as the notation parser reads
  * them, written by `npm run gen:terms`) instead of parsing every text on the first call.
  * These checks hold the stored form to the parser: the same reaction, term by term, the same
- * stoichiometry and electron count, the same species with the same inferred phase; and a
- * stale file (texts changed since) is not used: the texts are parsed at run time.
+ * stoichiometry and electron count, the same species with the same inferred phase, the same
+ * E° and temperature model of every built-in row as the species data gives now; and a stale
+ * file (texts changed since) is not used: the texts are parsed at run time.
  */
 import {
   BUILTIN_POTENTIALS,
@@ -13,14 +14,20 @@ import {
   listSpecies,
   parseNotation,
   parseSpecies,
-  STANDARD_SPECIES,
+  standardSpecies,
 } from '../../src/engine';
 import { speciesRecord } from '../../src/engine/data/species';
 import { MEDIUM_KEYS, reactionMap } from '../../src/engine/table/halfReaction';
 import { EPH_SPECIES } from '../../src/engine/data/species/ephSpecies';
 import { phaseOf, speciesKey } from '../../src/engine/notation/species';
-import { storedHalfReactions, storedSpecies, textsHash } from '../../src/engine/data/storedParseReader';
-import { builtinRowsHolding } from '../../src/engine/table/potentialTable';
+import {
+  rowInputsHash,
+  storedHalfReactionRows,
+  storedHalfReactions,
+  storedSpecies,
+  textsHash,
+} from '../../src/engine/data/storedParseReader';
+import { builtinRowsHolding, builtinThermoFromSpecies, rowE0V } from '../../src/engine/table/potentialTable';
 import STORED from '../../src/engine/data/storedParse.json';
 import type { Reaction } from '../../src/engine/notation/reaction';
 
@@ -53,10 +60,11 @@ describe('textsHash (FNV-1a, 32-bit)', () => {
 });
 
 describe('stored parse of the built-in rows (storedParse.json)', () => {
-  test('is fresh: made from the texts of the rows as they are (else run npm run gen:terms)', () => {
+  test('is fresh: made from the rows as they are (else run npm run gen:terms)', () => {
     expect(STORED.potentials.rows).toHaveLength(BUILTIN_POTENTIALS.length);
-    expect(STORED.potentials.textsHash).toBe(textsHash(potentialTexts));
-    expect(storedHalfReactions(potentialTexts)).not.toBeNull();
+    expect(STORED.potentials.e0V).toHaveLength(BUILTIN_POTENTIALS.length);
+    expect(STORED.potentials.inputsHash).toBe(rowInputsHash(BUILTIN_POTENTIALS));
+    expect(storedHalfReactions(BUILTIN_POTENTIALS)).not.toBeNull();
   });
 
   const rows = BUILTIN_POTENTIALS.map((r, i) => [i + 1, r.halfReaction] as const);
@@ -116,7 +124,7 @@ describe('the index of the built-in rows by species (storedParse.json rowsByKey)
 
 describe('stored species of the species data (storedParse.json)', () => {
   const lists = [
-    ['standard', STANDARD_SPECIES.map((r) => r.species)],
+    ['standard', standardSpecies().map((r) => r.species)],
     ['eph', EPH_SPECIES.map((r) => r.species)],
   ] as const;
   test.each(lists)('the %s list is fresh and each species is the parsed one, phase as inferred', (list, texts) => {
@@ -145,17 +153,69 @@ describe('stored species of the species data (storedParse.json)', () => {
   });
 });
 
+describe('stored E° at 25 °C of the built-in rows (storedParse.json e0V)', () => {
+  test('each row holds, to the last bit, what the species data gives now (else run npm run gen:terms)', () => {
+    // a fresh engine, so that E° is read before anything builds a row's temperature model: the stored values
+    jest.isolateModules(() => {
+      // eslint-disable-next-line @typescript-eslint/no-require-imports
+      const fresh = require('../../src/engine/table/potentialTable') as typeof import('../../src/engine/table/potentialTable');
+      const freshRows = fresh.builtinTable();
+      const stored = freshRows.map((r) => [r.text, r.e0V, r.speciesE0V]);
+      expect(fresh.builtinThermoFromSpecies().map((t, i) => [freshRows[i]!.text, t.e0V, t.speciesE0V])).toEqual(stored);
+    });
+    const rows = builtinTable();
+    const now = builtinThermoFromSpecies();
+    expect(now).toHaveLength(rows.length);
+    rows.forEach((r, i) => {
+      const t = now[i]!;
+      const label = r.text;
+      expect([label, r.e0V, r.dE0dTmVperK, r.speciesE0V]).toEqual([label, t.e0V, t.dE0dTmVperK, t.speciesE0V]);
+      expect([label, r.temperature]).toEqual([label, t.temperature]);
+      // and so E°(T) across the species data's range
+      for (const tempC of [0, 25, 60, 100]) {
+        const fromSpecies = { ...r, e0V: t.e0V, temperature: t.temperature };
+        expect([label, tempC, rowE0V(r, tempC)]).toEqual([label, tempC, rowE0V(fromSpecies, tempC)]);
+      }
+    });
+    // rows of every kind are covered: a species slope, a row's own (or no) slope, missing species
+    expect(rows.some((r) => r.temperature.basis === 'species')).toBe(true);
+    expect(rows.some((r) => r.temperature.basis !== 'species')).toBe(true);
+    expect(rows.some((r) => r.temperature.entropyMissing.length > 0)).toBe(true);
+  });
+  test('the copper row at 25 °C: E° from ΔfG°(Cu2+) = 65.49 kJ/mol (NBS 1982, from memory)', () => {
+    // E° = ΔfG°(Cu2+)/(2F) = 65490 / (2 × 96485.332) = 0.339378 V
+    const cu = builtinTable().find((r) => r.text.replace(/\s+/g, ' ') === 'Cu2+ + 2 e- -> Cu')!;
+    expect(cu).toBeDefined();
+    expect(cu.e0V).toBeCloseTo(0.339378, 6);
+  });
+  test('a row changed since (its E° or dE°/dT, not only its text) makes the lists stale', () => {
+    const first = BUILTIN_POTENTIALS[0]!;
+    const rest = BUILTIN_POTENTIALS.slice(1);
+    expect(storedHalfReactionRows([{ ...first, e0V: first.e0V + 0.001 }, ...rest])).toBeNull();
+    expect(storedHalfReactionRows([{ ...first, e0V: first.e0V * (1 + Number.EPSILON) }, ...rest])).toBeNull();
+    expect(storedHalfReactionRows([{ ...first, dE0dTmVperK: first.dE0dTmVperK === null ? 0 : null }, ...rest])).toBeNull();
+    expect(storedHalfReactionRows(rest)).toBeNull();
+    expect(storedHalfReactionRows(BUILTIN_POTENTIALS)!.e0V).toBe(STORED.potentials.e0V);
+  });
+});
+
 describe('a stale stored file', () => {
   test('is not used for texts that changed: they are parsed', () => {
     // the stored lists now describe other texts (another couple in row 1, species renamed)
-    expect(storedHalfReactions(['Li+ + e- -> Li', ...potentialTexts.slice(1)])).toBeNull();
-    expect(storedHalfReactions(potentialTexts.slice(1))).toBeNull();
+    const [first, ...rest] = BUILTIN_POTENTIALS;
+    expect(storedHalfReactions([{ ...first!, halfReaction: 'Li+ + e- -> Li' }, ...rest])).toBeNull();
+    expect(storedHalfReactions(rest)).toBeNull();
     expect(storedSpecies('standard', ['Li+(aq)'])).toBeNull();
     jest.isolateModules(() => {
       // a file made from other texts: the first row's stored reaction is another couple's
       jest.doMock('../../src/engine/data/storedParse.json', () => ({
         ...STORED,
-        potentials: { textsHash: 1, rows: ['Li 1,e>Li', ...STORED.potentials.rows.slice(1)] },
+        potentials: {
+          ...STORED.potentials,
+          inputsHash: 1,
+          rows: ['Li 1,e>Li', ...STORED.potentials.rows.slice(1)],
+          e0V: STORED.potentials.e0V.map(() => 9),
+        },
         species: { standard: { textsHash: 1, keys: [] }, eph: { textsHash: 1, keys: [] } },
       }));
       // eslint-disable-next-line @typescript-eslint/no-require-imports

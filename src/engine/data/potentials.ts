@@ -18,7 +18,7 @@
  * `published` is the value OpenStax Chemistry 2e, Appendix L prints where it has the couple
  * (read), else the CRC Handbook value the row held before (a source ending in "(from
  * memory)" was recalled, not re-read). Where the primary published E° is the better value
- * the species layer was set to agree with it (see MEASURED in species/standard.ts).
+ * the species layer was set to agree with it (see `measured` in species/standard.ts).
  *
  * Notation follows the engine's reaction syntax: terms joined by " + ", arrow " -> ",
  * integer coefficients, charges written with a caret (`SO4^2-`, `VO2^+`) wherever the last

@@ -2,10 +2,15 @@
  * Readers of src/engine/data/storedParse.json: the built-in half-reactions and the
  * species-data species as the notation parser read them when `npm run gen:terms` wrote the
  * file, so that the engine builds its built-in table and species registry without parsing
- * some 330 texts on its first call. Each list carries a hash of the texts it was made from;
- * where the texts have changed since (the file is stale), a reader returns null and the
- * caller parses the texts itself, so a stale file costs time, never a wrong row. The
- * tests (test/engine/tableStoredTerms.test.ts) fail while the file is stale.
+ * some 330 texts on its first call, and the built-in rows' E° at 25 °C as the species data
+ * gave them, so that a first call at 25 °C need not build the species data. Each list
+ * carries a hash of what it was made from (the built-in rows' texts, E° and dE°/dT; the
+ * species texts); where those have changed since (the file is stale), a reader returns null
+ * and the caller works them out itself, so a stale file costs time, never a wrong row, with one
+ * exception: the species values behind the stored E° are not fingerprinted at run time (that
+ * would mean building the species data). The tests (test/engine/tableStoredTerms.test.ts)
+ * recompute every stored entry, E° included, and fail while any part of the file is stale, so
+ * such a file cannot pass CI.
  *
  * Pure data handling: no parsing of chemistry, only splitting the stored fields.
  */
@@ -84,36 +89,44 @@ function storedReaction(text: string, seen: Interned): Reaction {
   };
 }
 
+/** A built-in row as src/engine/data/potentials.ts writes it: what the stored lists are made from. */
+export interface BuiltinRowInput {
+  readonly halfReaction: string;
+  readonly e0V: number;
+  readonly dE0dTmVperK: number | null;
+}
+
 /**
- * The built-in half-reactions as the parser reads `texts` (the rows of
- * src/engine/data/potentials.ts, in order), or null where the stored list was made from
- * other texts.
+ * The built-in half-reactions as the parser reads the rows `rows` (those of
+ * src/engine/data/potentials.ts, in order), or null where the stored list was made from other
+ * rows.
  *
  * @example
- * storedHalfReactions(BUILTIN_POTENTIALS.map((r) => r.halfReaction))?.[0]?.reactants.length // 2
+ * storedHalfReactions(BUILTIN_POTENTIALS)?.[0]?.reactants.length // 2
  */
-export function storedHalfReactions(texts: readonly string[]): Reaction[] | null {
-  const stored = storedHalfReactionRows(texts);
+export function storedHalfReactions(rows: readonly BuiltinRowInput[]): Reaction[] | null {
+  const stored = storedHalfReactionRows(rows);
   if (!stored) return null;
   const read = storedReactionReader();
   return stored.rows.map((r) => read(r));
 }
 
 /**
- * The stored rows of the built-in half-reactions (one text per row of `texts`, to be read by
- * {@link storedReactionReader}) and their index by species, or null where the stored list was
- * made from other texts.
+ * The stored rows of the built-in half-reactions (one text per row of `rows`, to be read by
+ * {@link storedReactionReader}), their index by species and their E° at 25 °C, or
+ * null where the stored lists were made from other rows (another text, E° or dE°/dT).
  *
  * @example
- * storedHalfReactionRows(BUILTIN_POTENTIALS.map((r) => r.halfReaction))?.rowsByKey['Zn|2'] // the rows holding Zn2+
+ * storedHalfReactionRows(BUILTIN_POTENTIALS)?.rowsByKey['Zn|2'] // the rows holding Zn2+
  */
-export function storedHalfReactionRows(texts: readonly string[]): StoredHalfReactions | null {
+export function storedHalfReactionRows(rows: readonly BuiltinRowInput[]): StoredHalfReactions | null {
   const p = STORED.potentials;
-  if (p.rows.length !== texts.length || p.textsHash !== textsHash(texts)) return null;
+  if (p.rows.length !== rows.length || p.e0V.length !== rows.length || p.inputsHash !== rowInputsHash(rows))
+    return null;
   return p;
 }
 
-/** The stored built-in half-reactions: one row per text, and the rows that hold each species. */
+/** The stored built-in half-reactions: one row per text, the rows that hold each species, each row's E°. */
 export interface StoredHalfReactions {
   readonly rows: readonly string[];
   /**
@@ -121,6 +134,11 @@ export interface StoredHalfReactions {
    * H+, OH-, H2O), the rows (0-based, increasing) whose terms hold it; every row holds one.
    */
   readonly rowsByKey: Readonly<Record<string, readonly number[]>>;
+  /**
+   * Each row's E° at 25 °C (V) as the species data gave it when the file was written, null
+   * where the species data gives none (the row's own E° is then used).
+   */
+  readonly e0V: readonly (number | null)[];
 }
 
 /**
@@ -148,7 +166,7 @@ function speciesOfKey(key: string): Species {
  * list (`standard` or `eph`), or null where the stored list was made from other texts.
  *
  * @example
- * storedSpecies('standard', STANDARD_SPECIES.map((r) => r.species))?.[0]?.formula // 'H2'
+ * storedSpecies('standard', standardSpecies().map((r) => r.species))?.[0]?.formula // 'H2'
  */
 export function storedSpecies(list: 'standard' | 'eph', texts: readonly string[]): Species[] | null {
   return storedSpeciesKeys(list, texts)?.map(speciesOfKey) ?? null;
@@ -160,10 +178,45 @@ export function storedSpecies(list: 'standard' | 'eph', texts: readonly string[]
  * was made from other texts.
  *
  * @example
- * storedSpeciesKeys('standard', STANDARD_SPECIES.map((r) => r.species))?.[0] // 'H2|0|g'
+ * storedSpeciesKeys('standard', standardSpecies().map((r) => r.species))?.[0] // 'H2|0|g'
  */
 export function storedSpeciesKeys(list: 'standard' | 'eph', texts: readonly string[]): readonly string[] | null {
   const s = STORED.species[list];
   if (s.keys.length !== texts.length || s.textsHash !== textsHash(texts)) return null;
   return s.keys;
+}
+
+/**
+ * FNV-1a (32-bit) fingerprint of the built-in rows the stored lists were made from: each row's
+ * text (its UTF-16 code units), then the eight bytes (little-endian IEEE 754) of its E° and of
+ * its dE°/dT (0xff 0xff where it has none), rows separated by a line feed. Hashing the numbers'
+ * bytes instead of their decimal texts keeps it one pass, with no string built.
+ *
+ * Domain: any rows. Precision: a 32-bit hash, to detect an edit, not as a security check.
+ *
+ * @example
+ * rowInputsHash([{ halfReaction: 'Zn2+ + 2 e- -> Zn', e0V: -0.7618, dE0dTmVperK: 0.119 }]) !==
+ *   rowInputsHash([{ halfReaction: 'Zn2+ + 2 e- -> Zn', e0V: -0.762, dE0dTmVperK: 0.119 }]) // true
+ */
+export function rowInputsHash(rows: readonly BuiltinRowInput[]): number {
+  const bytes = new DataView(new ArrayBuffer(8));
+  let h = 0x811c9dc5;
+  const mixNumber = (x: number | null): void => {
+    if (x === null) {
+      h = Math.imul(h ^ 0xff, 0x01000193);
+      h = Math.imul(h ^ 0xff, 0x01000193);
+      return;
+    }
+    bytes.setFloat64(0, x, true);
+    for (let k = 0; k < 8; k++) h = Math.imul(h ^ bytes.getUint8(k), 0x01000193);
+  };
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i]!;
+    if (i > 0) h = Math.imul(h ^ 10, 0x01000193);
+    const t = r.halfReaction;
+    for (let j = 0; j < t.length; j++) h = Math.imul(h ^ t.charCodeAt(j), 0x01000193);
+    mixNumber(r.e0V);
+    mixNumber(r.dE0dTmVperK);
+  }
+  return h >>> 0;
 }

@@ -11,7 +11,10 @@ import { formatReaction, type Reaction } from '../notation/reaction';
 import { speciesKey } from '../notation/species';
 import { checkBalance } from '../balance/balance';
 import { BUILTIN_POTENTIALS } from '../data/potentials';
-import { storedHalfReactionRows, storedReactionReader } from '../data/storedParseReader';
+import {
+  storedHalfReactionRows,
+  storedReactionReader,
+} from '../data/storedParseReader';
 import { type StoichMap, reactionMap, electronsOf, proportionality, scaleMap } from './halfReaction';
 import { toNumber } from '../rational';
 import {
@@ -154,11 +157,22 @@ function readHalfReaction(text: string): ReadHalfReaction {
 }
 
 /** The temperature-dependent part of a row: E°, dE°/dT and how E° moves with temperature. */
-interface RowThermo {
+export interface RowThermo {
   readonly e0V: number;
   readonly dE0dTmVperK: number | null;
   readonly temperature: RowTemperature;
   readonly speciesE0V: number | null;
+}
+
+/** The temperature model of a row's own dE°/dT (mV/K): linear, or none where it gives none. */
+function rowOwnTemperature(
+  mv: number | null,
+  cpMissing: readonly string[],
+  entropyMissing: readonly string[],
+): RowTemperature {
+  return mv === null
+    ? { slopeVPerK: 0, cpVPerK: 0, basis: 'none', cpMissing, entropyMissing }
+    : { slopeVPerK: mv * 1e-3, cpVPerK: 0, basis: 'row', cpMissing, entropyMissing };
 }
 
 function rowThermo(
@@ -181,10 +195,7 @@ function rowThermo(
     cpMissing,
     entropyMissing,
   });
-  const fromRow = (mv: number | null): RowTemperature =>
-    mv === null
-      ? { slopeVPerK: 0, cpVPerK: 0, basis: 'none', cpMissing, entropyMissing }
-      : { slopeVPerK: mv * 1e-3, cpVPerK: 0, basis: 'row', cpMissing, entropyMissing };
+  const fromRow = (mv: number | null): RowTemperature => rowOwnTemperature(mv, cpMissing, entropyMissing);
   if (builtin && sp) {
     // built-in rows: E° and its temperature dependence from the species data
     value = sp.model.e0V;
@@ -232,8 +243,9 @@ interface ReadBuiltin extends ReadHalfReaction {
  * A built-in row: its half-reaction as stored in storedParse.json (read by the notation
  * parser when that file was generated; checked there to balance and to be a reduction) and
  * read from there when first asked for (a lookup reads only the rows that hold its species,
- * see {@link builtinRowsHolding}), its E° and temperature dependence from the species data
- * computed on first use.
+ * see {@link builtinRowsHolding}), its E° at 25 °C from the species data as storedParse.json
+ * holds it (computed there by `npm run gen:terms`), its temperature dependence (and E° where
+ * the stored list is stale) from the species data on first use.
  */
 class BuiltinRow implements TableRow {
   readonly origin: RowOrigin;
@@ -241,7 +253,11 @@ class BuiltinRow implements TableRow {
   private thermo: RowThermo | null = null;
   private perElectronMap: StoichMap | null = null;
 
-  /** `stored` and `readStored`: the row's stored text and its reader; else `given`, the text as parsed. */
+  /**
+   * `stored` and `readStored`: the row's stored text and its reader; else `given`, the text as
+   * parsed. `storedE0V`: the row's E° at 25 °C from the species data as stored (null where the
+   * species data gives none: the row's own E° is used), undefined where not stored.
+   */
   constructor(
     readonly text: string,
     private readonly stored: string | null,
@@ -251,9 +267,15 @@ class BuiltinRow implements TableRow {
     private readonly givenSlopeMvPerK: number | null,
     readonly source: string,
     index: number,
+    private readonly storedE0V: number | null | undefined,
   ) {
     if (given) this.read = { ...given, n: electronCount(given.e) };
     this.origin = { kind: 'builtin', index };
+  }
+
+  /** E° and its temperature model from the species data, whatever is stored. */
+  thermoFromSpecies(): RowThermo {
+    return rowThermo(this.map, this.n, this.givenE0V, this.givenSlopeMvPerK, true);
   }
 
   private halfReaction(): ReadBuiltin {
@@ -284,10 +306,12 @@ class BuiltinRow implements TableRow {
   }
 
   private computed(): RowThermo {
-    if (!this.thermo) this.thermo = rowThermo(this.map, this.n, this.givenE0V, this.givenSlopeMvPerK, true);
+    if (!this.thermo) this.thermo = this.thermoFromSpecies();
     return this.thermo;
   }
+  /** E° at 25 °C: as stored where it is, so that a call at 25 °C builds no species data. */
   get e0V(): number {
+    if (this.thermo === null && this.storedE0V !== undefined) return this.storedE0V ?? this.givenE0V;
     return this.computed().e0V;
   }
   get dE0dTmVperK(): number | null {
@@ -297,8 +321,21 @@ class BuiltinRow implements TableRow {
     return this.computed().temperature;
   }
   get speciesE0V(): number | null {
+    if (this.thermo === null && this.storedE0V !== undefined) return this.storedE0V;
     return this.computed().speciesE0V;
   }
+}
+
+/**
+ * Each built-in row's E° and temperature model worked out from the species data now, in the
+ * table's order, whatever storedParse.json holds: what `npm run gen:terms` stores E° from and
+ * the tests compare the stored list with.
+ *
+ * @example
+ * builtinThermoFromSpecies()[0]?.e0V === builtinTable()[0]?.e0V // true while the stored list is fresh
+ */
+export function builtinThermoFromSpecies(): RowThermo[] {
+  return builtinTable().map((r) => (r as BuiltinRow).thermoFromSpecies());
 }
 
 /** The built-in rows holding each species key, from the stored parse (null where it is stale). */
@@ -346,14 +383,16 @@ let builtinRows: TableRow[] | null = null;
  */
 export function builtinTable(): readonly TableRow[] {
   if (!builtinRows) {
-    const stored = storedHalfReactionRows(BUILTIN_POTENTIALS.map((r) => r.halfReaction));
+    const stored = storedHalfReactionRows(BUILTIN_POTENTIALS);
     const read = stored ? storedReactionReader() : null;
+    const e0 = stored ? stored.e0V : null;
     builtinRowsByKey = stored ? stored.rowsByKey : null;
     builtinRows = BUILTIN_POTENTIALS.map((r, index) => {
       const row = stored?.rows[index];
+      const t = e0?.[index];
       return row !== undefined
-        ? new BuiltinRow(r.halfReaction, row, read, null, r.e0V, r.dE0dTmVperK, r.source, index)
-        : new BuiltinRow(r.halfReaction, null, null, readHalfReaction(r.halfReaction), r.e0V, r.dE0dTmVperK, r.source, index);
+        ? new BuiltinRow(r.halfReaction, row, read, null, r.e0V, r.dE0dTmVperK, r.source, index, t)
+        : new BuiltinRow(r.halfReaction, null, null, readHalfReaction(r.halfReaction), r.e0V, r.dE0dTmVperK, r.source, index, t);
     });
   }
   return builtinRows;

@@ -15,12 +15,12 @@
 import { EngineError, quote } from '../../errors';
 import { type Species, parseSpecies, speciesPhaseKey, formatSpecies, phaseOf } from '../../notation/species';
 import type { SpeciesThermoRecord } from './types';
-import { STANDARD_SPECIES } from './standard';
+import { standardSpecies } from './standard';
 import { EPH_SPECIES } from './ephSpecies';
 import { storedSpecies, storedSpeciesKeys } from '../storedParseReader';
 
 export type { SpeciesThermoRecord } from './types';
-export { STANDARD_SPECIES } from './standard';
+export { standardSpecies } from './standard';
 
 /** A record with the species parsed, as the registry holds it. */
 export interface RegisteredSpecies {
@@ -70,7 +70,7 @@ function built(): { byKey: Map<string, RegisteredSpecies>; duplicates: Duplicate
   if (!registry) {
     const byKey = new Map<string, RegisteredSpecies>();
     const duplicates: DuplicateSpecies[] = [];
-    register(STANDARD_SPECIES, 'standard', byKey, duplicates);
+    register(standardSpecies(), 'standard', byKey, duplicates);
     register(EPH_SPECIES, 'eph', byKey, duplicates);
     registry = { byKey, duplicates };
   }
@@ -87,7 +87,7 @@ function recordsByKey(): Map<string, SpeciesThermoRecord> {
   if (!recordIndex) {
     const standard = storedSpeciesKeys(
       'standard',
-      STANDARD_SPECIES.map((r) => r.species),
+      standardSpecies().map((r) => r.species),
     );
     const eph = standard && storedSpeciesKeys('eph', EPH_SPECIES.map((r) => r.species));
     const index = new Map<string, SpeciesThermoRecord>();
@@ -95,7 +95,7 @@ function recordsByKey(): Map<string, SpeciesThermoRecord> {
       const add = (records: readonly SpeciesThermoRecord[], keys: readonly string[]) => {
         for (let i = 0; i < records.length; i++) if (!index.has(keys[i]!)) index.set(keys[i]!, records[i]!);
       };
-      add(STANDARD_SPECIES, standard);
+      add(standardSpecies(), standard);
       add(EPH_SPECIES, eph);
     } else for (const [key, entry] of built().byKey) index.set(key, entry.record);
     recordIndex = index;

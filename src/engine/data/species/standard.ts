@@ -15,7 +15,7 @@
  *   value disagreed with the measured E° of Br2/Br-.
  * - MEASURED: for the ions (and PbSO4, PbO2, AgCl) whose standard potential is the primary
  *   published value, ΔfG° is set from that E° (OpenStax Appendix L, Bates & Bower 1954,
- *   CRC Handbook) and ΔfH° moves with it; S° and Cp° stay as tabulated (see MEASURED).
+ *   CRC Handbook) and ΔfH° moves with it; S° and Cp° stay as tabulated (see `measured`).
  * - DERIVED: ΔfG° computed from a published standard potential and the ΔfG° of the other
  *   species of that half-reaction, for species the NBS tables give no ΔfG° for (or where
  *   a measured E° is better than the tabulated ΔfG°); such a record names the potential.
@@ -66,8 +66,9 @@ const G_OH = -157.244;
 const G_CL = -131.228;
 const G_CRO4 = -727.75;
 
+/** The tabulated records (built on first use, not at load: see {@link standardSpecies}). */
 // prettier-ignore
-const TABULATED: readonly SpeciesThermoRecord[] = [
+const tabulated = (): readonly SpeciesThermoRecord[] => [
   // hydrogen, oxygen, water
   ...nbs([
     ['H2(g)', 0, 0, 130.684, 28.824],
@@ -286,7 +287,7 @@ const CRC92_SEEN = 'CRC Handbook of Chemistry and Physics, 92nd ed., Electrochem
  * each from the values before it.
  */
 // prettier-ignore
-const MEASURED: readonly (readonly [string, readonly (readonly [string, number])[], number, number, string])[] = [
+const measured = (): readonly (readonly [string, readonly (readonly [string, number])[], number, number, string])[] => [
   ['Li+(aq)', [['Li+(aq)', -1], ['Li(s)', 1]], 1, -3.04, OSX_L],
   ['Na+(aq)', [['Na+(aq)', -1], ['Na(s)', 1]], 1, -2.71, OSX_L],
   ['K+(aq)', [['K+(aq)', -1], ['K(s)', 1]], 1, -2.931, OSX_L],
@@ -348,7 +349,7 @@ function applyMeasured(records: readonly SpeciesThermoRecord[]): SpeciesThermoRe
     if (i === undefined) throw new Error(`species data: ${sp} is missing`);
     return out[i]!.dfGkJ;
   };
-  for (const [target, terms, n, e0, source] of MEASURED) {
+  for (const [target, terms, n, e0, source] of measured()) {
     let rest = 0;
     let nuT = 0;
     for (const [sp, nu] of terms) {
@@ -372,5 +373,16 @@ function applyMeasured(records: readonly SpeciesThermoRecord[]): SpeciesThermoRe
   return out;
 }
 
-/** Every species of the potentials table with its standard data (see the module comment). */
-export const STANDARD_SPECIES: readonly SpeciesThermoRecord[] = applyMeasured(TABULATED);
+let standard: readonly SpeciesThermoRecord[] | null = null;
+
+/**
+ * Every species of the potentials table with its standard data (see the module comment),
+ * built on the first call (about 200 records: not at load, where most workbooks' first
+ * calls never need them) and the same array after it.
+ *
+ * @example
+ * standardSpecies().find((r) => r.species === 'Cu2+(aq)')?.dfGkJ // 65.49
+ */
+export function standardSpecies(): readonly SpeciesThermoRecord[] {
+  return (standard ??= applyMeasured(tabulated()));
+}
