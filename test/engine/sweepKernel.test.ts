@@ -77,6 +77,27 @@ describe('the two-species kernel', () => {
     expect(isFiniteColumn(pairColumn(k, rows.slice(0, 5)))).toBe(false);
   });
 
+  test('writes a spill of any length as plain one-cell rows, the same values by either row maker', () => {
+    // from 32 cases the rows are made by new Array(1) and a store, below by a literal: a row
+    // must hold its cell as its own element 0 (no hole) either way
+    const k = pairKernel(binding(), 25, 'potential')!;
+    const rows = Array.from({ length: 40 }, (_, i) => [0.001 * (i + 1), 0.02]);
+    const long = pairColumn(k, rows)!;
+    const short = pairColumn(k, rows.slice(0, 5))!;
+    const swept = sweepToColumn(binding(), [...rows, [-1, 0.1]], 25, 'potential', (e) => e.message);
+    for (const col of [long, short, swept]) {
+      for (const row of col) {
+        expect(Array.isArray(row)).toBe(true);
+        expect(row).toHaveLength(1);
+        expect(Object.keys(row)).toEqual(['0']);
+      }
+    }
+    for (let i = 0; i < 5; i++) expect(Object.is(long[i]![0], short[i]![0])).toBe(true);
+    rows.forEach(([aZn, aCu], i) => expect(long[i]![0]).toBeCloseTo(handE(aZn!, aCu!), 12));
+    expect(JSON.stringify(swept.slice(0, 40))).toBe(JSON.stringify(long));
+    expect(swept[40]![0]).toMatch(/positive number/);
+  });
+
   test('sweepToColumn takes the general path for a bad case and the kernel again after it', () => {
     const rows: unknown[][] = [
       [0.1, 0.01],
