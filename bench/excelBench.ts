@@ -36,16 +36,27 @@ import {
 export type ExcelFunction = (...args: unknown[]) => unknown[][];
 
 let stub: CustomFunctionsStub | null = null;
+/** The module whose `CustomFunctions.associate` calls give the wrappers (see {@link useFunctionsModule}). */
+let functionsModule = '../src/functions/functions';
 
 /**
- * The wrapper Excel would call for `id`, from the associations functions.ts records when it
- * loads (under a stub `CustomFunctions` global installed first).
+ * Loads the wrappers from `modulePath` instead of src/functions/functions.ts: the built bundle
+ * dist/functions.js, as bench/excelChild.ts does. Call it before the first {@link excelFunction}.
+ */
+export function useFunctionsModule(modulePath: string): void {
+  if (stub) throw new Error('useFunctionsModule: the wrappers are already loaded');
+  functionsModule = modulePath;
+}
+
+/**
+ * The wrapper Excel would call for `id`, from the associations functions.ts (or the bundle
+ * made from it) records when it loads, under a stub `CustomFunctions` global installed first.
  */
 export function excelFunction(id: string): ExcelFunction {
   if (!stub) {
     stub = installCustomFunctionsStub();
     // eslint-disable-next-line @typescript-eslint/no-require-imports
-    require('../src/functions/functions');
+    require(functionsModule);
   }
   const fn = stub.associations.get(id);
   if (!fn) throw new Error(`functions.ts associates no custom function with id ${id}`);
@@ -263,6 +274,10 @@ export interface SweepFigures {
   /** Against the Float64Array loop (the floor). */
   ratioFloor: Stat;
   floorMs: Stat;
+  /** The spill's own runs in that pair (the numerator of `ratioFloor`). */
+  spillFloorPairMs: Stat;
+  /** Minor page faults per run: the spill in each pair, the hand loop and the floor. */
+  pageFaults: { spillRowsPair: Stat; rowsLoop: Stat; spillFloorPair: Stat; floor: Stat };
   /** The engine kernel alone against the same floor (null where it cannot be reached). */
   kernelRatioFloor: Stat | null;
   kernelMs: Stat | null;
@@ -317,6 +332,13 @@ export function benchSweep(cases: number, runs: number): SweepFigures {
     rowsLoopMs: a.gMs,
     ratioFloor: b.ratio,
     floorMs: b.gMs,
+    spillFloorPairMs: b.fMs,
+    pageFaults: {
+      spillRowsPair: a.fPageFaults,
+      rowsLoop: a.gPageFaults,
+      spillFloorPair: b.fPageFaults,
+      floor: b.gPageFaults,
+    },
   };
 }
 

@@ -8,6 +8,9 @@
  *   npm run bench -- --tiny       every benchmark at a tiny size, 2 runs (a smoke test of the
  *                                 harness and its checks; the figures mean nothing)
  *   npm run bench -- --only=call,sweep,diagram,families,first,cli,parse,recalc,e2e
+ *   npm run bench -- --in-process the Excel-shaped benchmarks (call, sweep, diagram) in the
+ *                                 benchmark process on the TypeScript sources, instead of a
+ *                                 fresh process on dist/functions.js
  *                                 only those benchmarks (for profiling one path)
  *
  * Every figure is {min, median, runs} over its timed runs. Every output of every timed run is
@@ -20,6 +23,8 @@ import * as path from 'path';
 import * as zlib from 'zlib';
 import * as engine from '../src/engine';
 import { benchExcelCalls, benchInlineDiagram, benchSweep } from './excelBench';
+import type { ChildReport } from './excelChild';
+import { excelFiguresInChild, FUNCTIONS_BUNDLE } from './excelProcess';
 import { benchCliEval, benchFirstCall } from './firstCall';
 import { benchEphMap, benchPitzer } from './familiesBench';
 import {
@@ -39,6 +44,12 @@ export interface BenchOptions {
   full?: boolean;
   tiny?: boolean;
   only?: readonly string[];
+  /**
+   * Run the Excel-shaped benchmarks (call, sweep, diagram) in this process, on the TypeScript
+   * sources through ts-node, instead of in a fresh process on dist/functions.js (which is what
+   * happens when a build exists).
+   */
+  inProcess?: boolean;
   /** Where progress lines go (stderr with --json, stdout otherwise). */
   log?: (line: string) => void;
 }
@@ -151,9 +162,29 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
       `load average ${loadStart.map((x) => x.toFixed(2)).join(' ')}${opts.tiny ? ' (tiny mode: figures mean nothing)' : ''}`,
   );
 
+  // the Excel-shaped benchmarks: in a fresh process on the built bundle where there is one
+  const excelSource = !opts.inProcess && fs.existsSync(FUNCTIONS_BUNDLE) ? 'dist' : 'ts-node';
+  let child: ChildReport | null = null;
+  if (excelSource === 'dist' && (wants('call') || wants('sweep') || wants('diagram'))) {
+    child = excelFiguresInChild({
+      bundle: FUNCTIONS_BUNDLE,
+      ...(wants('call') ? { call: { calls: sz.calls, runs: sz.callRuns } } : {}),
+      ...(wants('sweep') ? { sweep: { cases: sz.sweepCases, runs: sz.sweepRuns } } : {}),
+      ...(wants('diagram') ? { diagram: { calls: sz.diagramCalls, runs: sz.diagramRuns } } : {}),
+    });
+  }
+  if (wants('call') || wants('sweep') || wants('diagram')) {
+    out.excel_bench_source = excelSource;
+    log(
+      excelSource === 'dist'
+        ? 'call, sweep, diagram: a fresh Node process loading dist/functions.js (as Excel loads it)'
+        : 'call, sweep, diagram: in this process, on the TypeScript sources through ts-node',
+    );
+  }
+
   if (wants('call')) {
-    const c = benchExcelCalls(sz.calls, sz.callRuns, false);
-    const t = benchExcelCalls(sz.calls, sz.callRuns, true);
+    const c = child?.call ?? benchExcelCalls(sz.calls, sz.callRuns, false);
+    const t = child?.callTable ?? benchExcelCalls(sz.calls, sz.callRuns, true);
     log(
       `call: one Excel-shaped POTENTIAL of the Daniell cell, distinct activities, built-in table: ${mm(c.potentiaUs, 3)} µs per call; ` +
         `hand-written custom function ${mm(c.handUs, 3)} µs; call_ratio_excel ${mm(c.ratio)} (target ≤ 3)`,
@@ -169,7 +200,7 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
   }
 
   if (wants('sweep')) {
-    const s = benchSweep(sz.sweepCases, sz.sweepRuns);
+    const s = child?.sweep ?? benchSweep(sz.sweepCases, sz.sweepRuns);
     const ns = (x: Stat) => ({
       min: (x.min * 1e6) / s.cases,
       median: (x.median * 1e6) / s.cases,
@@ -184,6 +215,18 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
     out.sweep_ratio = r3(s.ratioRows);
     out.sweep_ns_per_case = rounded(ns(s.spillMs), 1);
     out.sweep_floor_ns_per_case = rounded(ns(s.floorMs), 1);
+    out.sweep_floor_pair_ns_per_case = rounded(ns(s.spillFloorPairMs), 1);
+    out.sweep_page_faults_per_run = {
+      spill_rows_pair: rounded(s.pageFaults.spillRowsPair, 0),
+      rows_loop: rounded(s.pageFaults.rowsLoop, 0),
+      spill_floor_pair: rounded(s.pageFaults.spillFloorPair, 0),
+      floor: rounded(s.pageFaults.floor, 0),
+    };
+    log(
+      `      the spill's runs in the floor pair ${mm(ns(s.spillFloorPairMs), 1)} ns per case; minor page faults per run (median): ` +
+        `spill ${s.pageFaults.spillRowsPair.median} and hand loop ${s.pageFaults.rowsLoop.median} (rows pair), ` +
+        `spill ${s.pageFaults.spillFloorPair.median} and floor ${s.pageFaults.floor.median} (floor pair)`,
+    );
     out.sweep_rows_loop_ns_per_case = rounded(ns(s.rowsLoopMs), 1);
     if (s.kernelMs && s.kernelRatioFloor) {
       log(
@@ -195,7 +238,7 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
   }
 
   if (wants('diagram')) {
-    const d = benchInlineDiagram(sz.diagramCalls, sz.diagramRuns);
+    const d = child?.diagram ?? benchInlineDiagram(sz.diagramCalls, sz.diagramRuns);
     log(
       `diagram: POTENTIAL("Zn | Zn2+(aq, a1 M) || Cu2+(aq, a2 M) | Cu"), activities changing every call: ${mm(d.us, 1)} µs per call (target ≤ 5); ` +
         `with the user's table and a temperature ${mm(d.tableUs, 1)} µs`,
@@ -395,6 +438,7 @@ export async function main(argv: string[]): Promise<void> {
     json: argv.includes('--json'),
     full: argv.includes('--full'),
     tiny: argv.includes('--tiny'),
+    inProcess: argv.includes('--in-process'),
     ...(only ? { only: only.slice('--only='.length).split(',') } : {}),
   });
   if (argv.includes('--json')) console.log(JSON.stringify(figures));

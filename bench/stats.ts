@@ -54,12 +54,17 @@ export interface Contender<I, O> {
   check: (input: I, output: O) => void;
 }
 
+/** Minor page faults of the process during the last timed run (memory the run touched first). */
+let lastRunPageFaults = 0;
+
 function timeOnce<I, O>(c: Contender<I, O>): number {
   const input = c.prepare();
   collectGarbage();
+  const faults0 = process.resourceUsage().minorPageFault;
   const t0 = process.hrtime.bigint();
   const out = c.run(input);
   const ms = Number(process.hrtime.bigint() - t0) / 1e6;
+  lastRunPageFaults = process.resourceUsage().minorPageFault - faults0;
   c.check(input, out);
   return ms;
 }
@@ -82,6 +87,12 @@ export interface PairStat {
   fMs: Stat;
   gMs: Stat;
   ratio: Stat;
+  /**
+   * Minor page faults per timed run of each side: pages of memory the run touched for the
+   * first time (or again, after the heap gave them back), each one a trip into the kernel.
+   */
+  fPageFaults: Stat;
+  gPageFaults: Stat;
 }
 
 /** Times two contenders alternately, run by run, so drifts in machine load fall on both. */
@@ -97,13 +108,23 @@ export function timePair<I, O, J, P>(
   }
   const fs: number[] = [];
   const gs: number[] = [];
+  const fFaults: number[] = [];
+  const gFaults: number[] = [];
   for (let r = 0; r < runs; r++) {
     fs.push(timeOnce(f));
+    fFaults.push(lastRunPageFaults);
     gs.push(timeOnce(g));
+    gFaults.push(lastRunPageFaults);
   }
   const fMs = stat(fs);
   const gMs = stat(gs);
-  return { fMs, gMs, ratio: { min: fMs.min / gMs.min, median: fMs.median / gMs.median, runs } };
+  return {
+    fMs,
+    gMs,
+    ratio: { min: fMs.min / gMs.min, median: fMs.median / gMs.median, runs },
+    fPageFaults: stat(fFaults),
+    gPageFaults: stat(gFaults),
+  };
 }
 
 /** A check that failed: which benchmark, which output, expected and got. */

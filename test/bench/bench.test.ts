@@ -8,6 +8,7 @@
  */
 import * as fs from 'fs';
 import { runBench } from '../../bench/run';
+import { FUNCTIONS_BUNDLE } from '../../bench/excelProcess';
 import { BuiltinE0Check, handPotential } from '../../bench/excelBench';
 import { COPPER, ZINC, daniellEmfV, daniellTableRange } from '../../bench/reference';
 import { hasLibreOffice } from '../../bench/recalcBench';
@@ -158,5 +159,32 @@ describe('npm run bench -- --tiny --full', () => {
   it('finds the ECHEM and the plain workbooks equal cell by cell', () => {
     expect(typeof figures.recalc_max_difference_v).toBe('number');
     expect(figures.recalc_max_difference_v as number).toBeLessThanOrEqual(1e-9);
+  });
+
+  it('measures call, sweep and diagram on the bundle in a process of its own where there is a build', () => {
+    const built = fs.existsSync(FUNCTIONS_BUNDLE);
+    expect(figures.excel_bench_source).toBe(built ? 'dist' : 'ts-node');
+    expect(lines).toContain(
+      built
+        ? 'call, sweep, diagram: a fresh Node process loading dist/functions.js (as Excel loads it)'
+        : 'call, sweep, diagram: in this process, on the TypeScript sources through ts-node',
+    );
+    expectFigure(figures.sweep_floor_pair_ns_per_case, 2);
+    const faults = figures.sweep_page_faults_per_run as Record<string, unknown>;
+    expect(Object.keys(faults).sort()).toEqual(['floor', 'rows_loop', 'spill_floor_pair', 'spill_rows_pair']);
+    for (const f of Object.values(faults)) {
+      expect(f).toEqual({ min: expect.any(Number), median: expect.any(Number), runs: 2 });
+      const { min, median } = f as Figure;
+      expect(Number.isInteger(min) && min >= 0 && min <= median).toBe(true);
+    }
+  });
+});
+
+describe('npm run bench -- --tiny --in-process --only=sweep', () => {
+  it('measures the spill in the benchmark process on the sources, every output checked', async () => {
+    const figures = await runBench({ tiny: true, inProcess: true, only: ['sweep'], log: () => undefined });
+    expect(figures.excel_bench_source).toBe('ts-node');
+    expectFigure(figures.sweep_ratio_floor, 2, 'ratio');
+    expect(figures.checks_passed).toBe(true);
   });
 });
