@@ -8,10 +8,10 @@
  *   npm run bench -- --tiny       every benchmark at a tiny size, 2 runs (a smoke test of the
  *                                 harness and its checks; the figures mean nothing)
  *   npm run bench -- --only=call,sweep,diagram,families,first,cli,parse,recalc,e2e
+ *                                 only those benchmarks (for profiling one path)
  *   npm run bench -- --in-process the Excel-shaped benchmarks (call, sweep, diagram) in the
  *                                 benchmark process on the TypeScript sources, instead of a
  *                                 fresh process on dist/functions.js
- *                                 only those benchmarks (for profiling one path)
  *
  * Every figure is {min, median, runs} over its timed runs. Every output of every timed run is
  * checked against an independent computation (bench/reference.ts); a wrong output stops the
@@ -150,6 +150,13 @@ function rss(f: EndToEndFigures | null): Stat | null {
   return f?.peakRssMiB ? rounded(f.peakRssMiB, 1) : null;
 }
 
+/** A figure the child process was asked for; its absence is an error, not a reason to measure here. */
+function reported<T>(figure: T | undefined, what: string): T {
+  if (figure === undefined)
+    throw new Error(`the Excel-shaped benchmarks' process reported no ${what} figures`);
+  return figure;
+}
+
 /** Runs the benchmarks and returns the JSON figures (also printed with --json). */
 export async function runBench(opts: BenchOptions = {}): Promise<Json> {
   const sz = opts.tiny ? TINY : NORMAL;
@@ -164,8 +171,9 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
 
   // the Excel-shaped benchmarks: in a fresh process on the built bundle where there is one
   const excelSource = !opts.inProcess && fs.existsSync(FUNCTIONS_BUNDLE) ? 'dist' : 'ts-node';
+  const wantsExcel = wants('call') || wants('sweep') || wants('diagram');
   let child: ChildReport | null = null;
-  if (excelSource === 'dist' && (wants('call') || wants('sweep') || wants('diagram'))) {
+  if (excelSource === 'dist' && wantsExcel) {
     child = excelFiguresInChild({
       bundle: FUNCTIONS_BUNDLE,
       ...(wants('call') ? { call: { calls: sz.calls, runs: sz.callRuns } } : {}),
@@ -173,7 +181,7 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
       ...(wants('diagram') ? { diagram: { calls: sz.diagramCalls, runs: sz.diagramRuns } } : {}),
     });
   }
-  if (wants('call') || wants('sweep') || wants('diagram')) {
+  if (wantsExcel) {
     out.excel_bench_source = excelSource;
     log(
       excelSource === 'dist'
@@ -183,8 +191,8 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
   }
 
   if (wants('call')) {
-    const c = child?.call ?? benchExcelCalls(sz.calls, sz.callRuns, false);
-    const t = child?.callTable ?? benchExcelCalls(sz.calls, sz.callRuns, true);
+    const c = child ? reported(child.call, 'call') : benchExcelCalls(sz.calls, sz.callRuns, false);
+    const t = child ? reported(child.callTable, 'callTable') : benchExcelCalls(sz.calls, sz.callRuns, true);
     log(
       `call: one Excel-shaped POTENTIAL of the Daniell cell, distinct activities, built-in table: ${mm(c.potentiaUs, 3)} µs per call; ` +
         `hand-written custom function ${mm(c.handUs, 3)} µs; call_ratio_excel ${mm(c.ratio)} (target ≤ 3)`,
@@ -200,7 +208,7 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
   }
 
   if (wants('sweep')) {
-    const s = child?.sweep ?? benchSweep(sz.sweepCases, sz.sweepRuns);
+    const s = child ? reported(child.sweep, 'sweep') : benchSweep(sz.sweepCases, sz.sweepRuns);
     const ns = (x: Stat) => ({
       min: (x.min * 1e6) / s.cases,
       median: (x.median * 1e6) / s.cases,
@@ -238,7 +246,9 @@ export async function runBench(opts: BenchOptions = {}): Promise<Json> {
   }
 
   if (wants('diagram')) {
-    const d = child?.diagram ?? benchInlineDiagram(sz.diagramCalls, sz.diagramRuns);
+    const d = child
+      ? reported(child.diagram, 'diagram')
+      : benchInlineDiagram(sz.diagramCalls, sz.diagramRuns);
     log(
       `diagram: POTENTIAL("Zn | Zn2+(aq, a1 M) || Cu2+(aq, a2 M) | Cu"), activities changing every call: ${mm(d.us, 1)} µs per call (target ≤ 5); ` +
         `with the user's table and a temperature ${mm(d.tableUs, 1)} µs`,

@@ -54,26 +54,27 @@ export interface Contender<I, O> {
   check: (input: I, output: O) => void;
 }
 
-/** Minor page faults of the process during the last timed run (memory the run touched first). */
-let lastRunPageFaults = 0;
-
-function timeOnce<I, O>(c: Contender<I, O>): number {
+/**
+ * One timed run: its milliseconds and the process's minor page faults during it (memory the
+ * run touched first).
+ */
+function timeOnce<I, O>(c: Contender<I, O>): { ms: number; pageFaults: number } {
   const input = c.prepare();
   collectGarbage();
   const faults0 = process.resourceUsage().minorPageFault;
   const t0 = process.hrtime.bigint();
   const out = c.run(input);
   const ms = Number(process.hrtime.bigint() - t0) / 1e6;
-  lastRunPageFaults = process.resourceUsage().minorPageFault - faults0;
+  const pageFaults = process.resourceUsage().minorPageFault - faults0;
   c.check(input, out);
-  return ms;
+  return { ms, pageFaults };
 }
 
 /** Times one contender: `runs` timed runs after `warmup` untimed ones (all checked). */
 export function timeRuns<I, O>(c: Contender<I, O>, runs: number, warmup = 2): Stat {
   for (let w = 0; w < warmup; w++) timeOnce(c);
   const ms: number[] = [];
-  for (let r = 0; r < runs; r++) ms.push(timeOnce(c));
+  for (let r = 0; r < runs; r++) ms.push(timeOnce(c).ms);
   return stat(ms);
 }
 
@@ -111,10 +112,12 @@ export function timePair<I, O, J, P>(
   const fFaults: number[] = [];
   const gFaults: number[] = [];
   for (let r = 0; r < runs; r++) {
-    fs.push(timeOnce(f));
-    fFaults.push(lastRunPageFaults);
-    gs.push(timeOnce(g));
-    gFaults.push(lastRunPageFaults);
+    const a = timeOnce(f);
+    fs.push(a.ms);
+    fFaults.push(a.pageFaults);
+    const b = timeOnce(g);
+    gs.push(b.ms);
+    gFaults.push(b.pageFaults);
   }
   const fMs = stat(fs);
   const gMs = stat(gs);
